@@ -1,0 +1,146 @@
+//! The command line: evaluates a case file (the format the page saves) and prints the full result
+//! as JSON, or as a table in lab units; errors name the bad field.
+
+use std::io::Read;
+use std::process::ExitCode;
+
+use serde::Serialize;
+
+use crate::case::{CaseError, CaseFile, TUBULAR_DEMO_JSON};
+use crate::physics::report::{Report, Verdict};
+use crate::physics::units::format_significant;
+
+const USAGE: &str = "\
+Usage: clearbore [--text] [--sig N] CASE.json   evaluate a case file ('-' reads standard input)
+       clearbore --demo                         print the demo case file
+Output: JSON (SI values), or with --text a table in lab units with N significant figures (default 4).
+Exit status: 0 evaluated, 1 bad case or input, 2 bad command line.";
+
+/// What the JSON output holds.
+#[derive(Serialize)]
+struct Output<'a> {
+    clearbore_version: &'static str,
+    title: &'a str,
+    calculator: crate::case::Calculator,
+    overall: Verdict,
+    report: &'a Report,
+}
+
+/// The report as a table in each figure's lab default unit, `sig` significant figures.
+pub fn text_report(case: &CaseFile, report: &Report, sig: usize) -> String {
+    let mut out = String::new();
+    if !case.title.is_empty() {
+        out.push_str(&format!("{}\n\n", case.title));
+    }
+    for f in &report.figures {
+        let unit = f.dimension.default_unit();
+        let value = format_significant(unit.from_si(f.value.get()), sig);
+        out.push_str(&format!("{:<44} {} {}\n", f.label, value, unit.symbol).trim_end().to_owned());
+        out.push('\n');
+        for e in &f.estimates {
+            for w in &e.warnings {
+                out.push_str(&format!("    warning: {} = {} outside the range of {}\n", w.quantity, format_significant(w.value, 3), w.model));
+            }
+        }
+    }
+    out.push('\n');
+    for c in &report.checks {
+        out.push_str(&format!("[{}] {}: {}\n", c.verdict.word(), c.topic, c.reason));
+        if let Some(caution) = &c.caution {
+            out.push_str(&format!("    caution: {caution}\n"));
+        }
+    }
+    out
+}
+
+struct Args {
+    text: bool,
+    sig: usize,
+    path: Option<String>,
+    demo: bool,
+}
+
+fn parse_args(mut args: impl Iterator<Item = String>) -> Result<Args, String> {
+    let mut a = Args { text: false, sig: 4, path: None, demo: false };
+    while let Some(arg) = args.next() {
+        match arg.as_str() {
+            "--text" => a.text = true,
+            "--demo" => a.demo = true,
+            "--sig" => {
+                let n = args.next().ok_or("--sig needs a number")?;
+                a.sig = n.parse().ok().filter(|n| (1..=15).contains(n)).ok_or("--sig takes 1 to 15")?;
+            }
+            "-h" | "--help" => return Err(String::new()),
+            _ if a.path.is_none() && (arg == "-" || !arg.starts_with('-')) => a.path = Some(arg),
+            _ => return Err(format!("unexpected argument '{arg}'")),
+        }
+    }
+    if !a.demo && a.path.is_none() {
+        return Err("no case file given".to_owned());
+    }
+    Ok(a)
+}
+
+fn read(path: &str) -> Result<String, String> {
+    if path == "-" {
+        let mut s = String::new();
+        std::io::stdin().read_to_string(&mut s).map_err(|e| format!("reading standard input: {e}"))?;
+        Ok(s)
+    } else {
+        std::fs::read_to_string(path).map_err(|e| format!("reading {path}: {e}"))
+    }
+}
+
+/// Runs the command line with the process arguments.
+pub fn main() -> ExitCode {
+    let args = match parse_args(std::env::args().skip(1)) {
+        Ok(a) => a,
+        Err(msg) => {
+            if !msg.is_empty() {
+                eprintln!("clearbore: {msg}");
+            }
+            eprintln!("{USAGE}");
+            return ExitCode::from(if msg.is_empty() { 0 } else { 2 });
+        }
+    };
+    if args.demo {
+        print!("{TUBULAR_DEMO_JSON}");
+        return ExitCode::SUCCESS;
+    }
+    let path = args.path.unwrap_or_default();
+    let text = match read(&path) {
+        Ok(t) => t,
+        Err(msg) => {
+            eprintln!("clearbore: {msg}");
+            return ExitCode::from(1);
+        }
+    };
+    match run(&text, args.text, args.sig) {
+        Ok(out) => {
+            print!("{out}");
+            ExitCode::SUCCESS
+        }
+        Err(e) => {
+            eprintln!("clearbore: {path}:");
+            eprintln!("{e}");
+            ExitCode::from(1)
+        }
+    }
+}
+
+/// Evaluates case JSON; returns the text to print.
+pub fn run(case_json: &str, text: bool, sig: usize) -> Result<String, CaseError> {
+    let case = CaseFile::from_json(case_json)?;
+    let report = case.evaluate()?;
+    if text {
+        return Ok(text_report(&case, &report, sig));
+    }
+    let out = Output {
+        clearbore_version: env!("CARGO_PKG_VERSION"),
+        title: &case.title,
+        calculator: case.calculator,
+        overall: report.overall(),
+        report: &report,
+    };
+    serde_json::to_string_pretty(&out).map(|s| s + "\n").map_err(|e| CaseError::Format(e.to_string()))
+}

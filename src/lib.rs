@@ -1,0 +1,11 @@
+//! Clearbore: pre-run checks for continuous-flow chemistry with solids and gases.
+//! `physics` is pure Rust (SI inside, no web dependency); `case` is the saved-case format
+//! shared by the page and the command line; `ui` is the Leptos page (wasm32 only).
+#![forbid(unsafe_code)]
+
+pub mod case;
+pub mod cli;
+pub mod physics;
+
+#[cfg(target_arch = "wasm32")]
+pub mod ui;

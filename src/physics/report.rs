@@ -1,0 +1,241 @@
+//! The result model every calculator returns: figures (each with the value of every applicable
+//! correlation, the recommended one marked), validity-range warnings, and checks with verdicts
+//! and safety cautions. Values are finite by construction; nothing here can carry a NaN.
+
+use serde::Serialize;
+
+use super::units::Dimension;
+
+/// A computed value that is known to be finite. Serialises as a plain JSON number.
+#[derive(Debug, Clone, Copy, PartialEq, PartialOrd, Serialize)]
+#[serde(transparent)]
+pub struct Finite(f64);
+
+impl Finite {
+    /// Accepts `value` only if it is finite; otherwise names the quantity in the error.
+    pub fn new(quantity: &'static str, value: f64) -> Result<Self, NumericalError> {
+        if value.is_finite() {
+            Ok(Self(value))
+        } else {
+            Err(NumericalError::NotFinite { quantity })
+        }
+    }
+
+    /// The value.
+    pub const fn get(self) -> f64 {
+        self.0
+    }
+}
+
+/// A numerical failure: reported as such, never shown as a number.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+#[serde(tag = "kind", rename_all = "snake_case")]
+pub enum NumericalError {
+    /// A computed quantity came out infinite or undefined (overflow, division by zero).
+    NotFinite {
+        /// The quantity that failed.
+        quantity: &'static str,
+    },
+}
+
+impl std::fmt::Display for NumericalError {
+    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        match self {
+            NumericalError::NotFinite { quantity } => {
+                write!(f, "{quantity} could not be computed (result not a finite number)")
+            }
+        }
+    }
+}
+
+impl std::error::Error for NumericalError {}
+
+/// One bound of a correlation's fitted range, in SI units of `dimension`.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct ValidityBound {
+    /// What is bounded, e.g. "pipe Reynolds number".
+    pub quantity: &'static str,
+    /// Kind of the bounded quantity (fixes the SI unit of `low` and `high`).
+    pub dimension: Dimension,
+    /// Lowest value covered, if any.
+    pub low: Option<f64>,
+    /// Highest value covered, if any.
+    pub high: Option<f64>,
+}
+
+impl ValidityBound {
+    /// A warning if `value` lies outside this bound, attributed to `model`.
+    pub fn check(&self, value: f64, model: &ModelInfo) -> Option<RangeWarning> {
+        let below = self.low.is_some_and(|lo| value < lo);
+        let above = self.high.is_some_and(|hi| value > hi);
+        (below || above).then(|| RangeWarning {
+            quantity: self.quantity,
+            dimension: self.dimension,
+            value,
+            low: self.low,
+            high: self.high,
+            model: model.name,
+            source: model.source,
+        })
+    }
+}
+
+/// What the page and the JSON say about a correlation or a defining formula.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct ModelInfo {
+    /// Short name, e.g. "Hagen–Poiseuille".
+    pub name: &'static str,
+    /// The formula in plain text.
+    pub formula: &'static str,
+    /// Where it comes from (authors, year, journal), or "definition" for a defining identity.
+    pub source: &'static str,
+    /// The range it was fitted or derived for; empty for identities.
+    pub validity: &'static [ValidityBound],
+}
+
+/// A value outside a correlation's range: computed anyway, and said so.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct RangeWarning {
+    /// The quantity outside the range.
+    pub quantity: &'static str,
+    /// Its kind (fixes the SI unit of the numbers below).
+    pub dimension: Dimension,
+    /// Its value, SI.
+    pub value: f64,
+    /// Lower end of the range, SI.
+    pub low: Option<f64>,
+    /// Upper end of the range, SI.
+    pub high: Option<f64>,
+    /// The correlation whose range it is.
+    pub model: &'static str,
+    /// That correlation's source.
+    pub source: &'static str,
+}
+
+/// The value of one correlation for a figure.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Estimate {
+    /// The correlation or formula.
+    pub model: ModelInfo,
+    /// Its value, SI units of the figure's dimension.
+    pub value: Finite,
+    /// Whether this is the value the tool recommends (exactly one per figure).
+    pub recommended: bool,
+    /// Inputs outside this correlation's range.
+    pub warnings: Vec<RangeWarning>,
+}
+
+/// A named result with the estimate of every applicable correlation.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Figure {
+    /// Stable key (used by the page, the CLI and tests), e.g. `residence_time`.
+    pub key: &'static str,
+    /// Label for people.
+    pub label: &'static str,
+    /// Kind of quantity.
+    pub dimension: Dimension,
+    /// Recommended value, SI.
+    pub value: Finite,
+    /// Why the recommended estimate is recommended (empty when there is only one).
+    pub recommendation: &'static str,
+    /// All estimates, recommended first.
+    pub estimates: Vec<Estimate>,
+}
+
+impl Figure {
+    /// A figure given by a single formula or correlation.
+    pub fn single(
+        key: &'static str,
+        label: &'static str,
+        dimension: Dimension,
+        model: ModelInfo,
+        value: f64,
+        warnings: Vec<RangeWarning>,
+    ) -> Result<Self, NumericalError> {
+        let value = Finite::new(label, value)?;
+        Ok(Self {
+            key,
+            label,
+            dimension,
+            value,
+            recommendation: "",
+            estimates: vec![Estimate { model, value, recommended: true, warnings }],
+        })
+    }
+
+    /// Lowest and highest estimate, SI.
+    pub fn spread(&self) -> (f64, f64) {
+        self.estimates.iter().fold((f64::INFINITY, f64::NEG_INFINITY), |(lo, hi), e| {
+            (lo.min(e.value.get()), hi.max(e.value.get()))
+        })
+    }
+}
+
+/// Outcome of a check, from harmless to stop-and-fix.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord, Serialize)]
+#[serde(rename_all = "snake_case")]
+pub enum Verdict {
+    /// Within limits with margin.
+    Fine,
+    /// Works on paper but close to a limit or outside a correlation's range: look again.
+    Caution,
+    /// Expected to fail or to exceed a rating: do not run as set.
+    Problem,
+}
+
+impl Verdict {
+    /// Lower-case word, as in the JSON.
+    pub const fn word(self) -> &'static str {
+        match self {
+            Verdict::Fine => "fine",
+            Verdict::Caution => "caution",
+            Verdict::Problem => "problem",
+        }
+    }
+}
+
+/// A check on the setup: a verdict, its reason, and where relevant a safety caution.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Check {
+    /// Stable key, e.g. `pressure_budget`.
+    pub key: &'static str,
+    /// What is checked, for people.
+    pub topic: &'static str,
+    /// The outcome.
+    pub verdict: Verdict,
+    /// Why, with the numbers.
+    pub reason: String,
+    /// What could hurt someone and what to do about it, shown beside the verdict.
+    pub caution: Option<String>,
+}
+
+/// Everything a calculator returns.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Report {
+    /// Computed figures in display order.
+    pub figures: Vec<Figure>,
+    /// Checks with verdicts.
+    pub checks: Vec<Check>,
+}
+
+impl Report {
+    /// The figure with this key.
+    pub fn figure(&self, key: &str) -> Option<&Figure> {
+        self.figures.iter().find(|f| f.key == key)
+    }
+
+    /// The check with this key.
+    pub fn check(&self, key: &str) -> Option<&Check> {
+        self.checks.iter().find(|c| c.key == key)
+    }
+
+    /// The worst verdict over all checks (`Fine` when there are none).
+    pub fn overall(&self) -> Verdict {
+        self.checks.iter().map(|c| c.verdict).max().unwrap_or(Verdict::Fine)
+    }
+
+    /// Every range warning of every estimate, recommended estimates first.
+    pub fn warnings(&self) -> impl Iterator<Item = &RangeWarning> {
+        self.figures.iter().flat_map(|f| f.estimates.iter().flat_map(|e| e.warnings.iter()))
+    }
+}

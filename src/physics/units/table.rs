@@ -1,0 +1,241 @@
+//! The lab units each kind of quantity accepts, with factors to SI, and the parser for typed
+//! numbers. Factors: NIST Special Publication 811 (2008 ed.), Appendix B.8/B.9; the litre, minute,
+//! hour and bar are exact SI-accepted units.
+
+use serde::Serialize;
+
+/// A unit of entry or display: `value_si = value * factor + offset`.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct Unit {
+    /// Symbol as shown and as written in case files, e.g. `mL/min`.
+    pub symbol: &'static str,
+    /// SI value of one unit (multiplicative part).
+    pub factor: f64,
+    /// Additive part of the conversion to SI (non-zero only for temperature scales).
+    pub offset: f64,
+}
+
+impl Unit {
+    const fn scale(symbol: &'static str, factor: f64) -> Self {
+        Self { symbol, factor, offset: 0.0 }
+    }
+
+    /// Converts a value in this unit to SI.
+    pub fn to_si(&self, value: f64) -> f64 {
+        value * self.factor + self.offset
+    }
+
+    /// Converts an SI value to this unit.
+    pub fn from_si(&self, si: f64) -> f64 {
+        (si - self.offset) / self.factor
+    }
+}
+
+/// The kind of a quantity, which fixes the units it may be entered and shown in.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize)]
+#[serde(rename_all = "snake_case")]
+pub enum Dimension {
+    /// Lengths and diameters (SI: m).
+    Length,
+    /// Volumes (SI: m³).
+    Volume,
+    /// Liquid volumetric flow (SI: m³/s).
+    VolumetricFlow,
+    /// Time spans (SI: s).
+    Duration,
+    /// Pressure differences and gauge pressures (SI: Pa).
+    PressureDifference,
+    /// Dynamic viscosity (SI: Pa·s).
+    DynamicViscosity,
+    /// Mass density (SI: kg/m³).
+    Density,
+    /// Amount concentration (SI: mol/m³).
+    Concentration,
+    /// Molar mass (SI: kg/mol).
+    MolarMass,
+    /// Mass (SI: kg).
+    Mass,
+    /// Mass flow (SI: kg/s).
+    MassFlow,
+    /// Mass produced per time per reactor volume (SI: kg s⁻¹ m⁻³).
+    SpaceTimeYield,
+    /// Velocity (SI: m/s).
+    Velocity,
+    /// Fractions such as yields (SI: 1).
+    Fraction,
+    /// Pure numbers: counts, Reynolds numbers (SI: 1).
+    Number,
+}
+
+const MINUTE: f64 = 60.0;
+const HOUR: f64 = 3600.0;
+const LITRE: f64 = 1e-3;
+// NIST SP 811 B.8: inch = 2.54 E-02 m (exact); pound-force per square inch = 6.894 757 E+03 Pa;
+// standard atmosphere = 1.013 25 E+05 Pa (exact); centipoise = 1.0 E-03 Pa·s (exact).
+const INCH: f64 = 2.54e-2;
+const PSI: f64 = 6.894_757e3;
+const ATM: f64 = 1.013_25e5;
+
+const LENGTH: &[Unit] = &[
+    Unit::scale("mm", 1e-3),
+    Unit::scale("µm", 1e-6),
+    Unit::scale("cm", 1e-2),
+    Unit::scale("m", 1.0),
+    Unit::scale("in", INCH),
+];
+const VOLUME: &[Unit] = &[
+    Unit::scale("mL", 1e-3 * LITRE),
+    Unit::scale("µL", 1e-6 * LITRE),
+    Unit::scale("L", LITRE),
+    Unit::scale("m³", 1.0),
+];
+const FLOW: &[Unit] = &[
+    Unit::scale("mL/min", 1e-3 * LITRE / MINUTE),
+    Unit::scale("µL/min", 1e-6 * LITRE / MINUTE),
+    Unit::scale("mL/h", 1e-3 * LITRE / HOUR),
+    Unit::scale("L/h", LITRE / HOUR),
+    Unit::scale("m³/s", 1.0),
+];
+const DURATION: &[Unit] = &[
+    Unit::scale("min", MINUTE),
+    Unit::scale("s", 1.0),
+    Unit::scale("h", HOUR),
+];
+const PRESSURE: &[Unit] = &[
+    Unit::scale("bar", 1e5),
+    Unit::scale("kPa", 1e3),
+    Unit::scale("MPa", 1e6),
+    Unit::scale("psi", PSI),
+    Unit::scale("atm", ATM),
+    Unit::scale("Pa", 1.0),
+];
+const VISCOSITY: &[Unit] = &[
+    Unit::scale("mPa·s", 1e-3),
+    Unit::scale("cP", 1e-3),
+    Unit::scale("Pa·s", 1.0),
+];
+const DENSITY: &[Unit] = &[Unit::scale("g/mL", 1e3), Unit::scale("kg/m³", 1.0)];
+const CONCENTRATION: &[Unit] = &[
+    Unit::scale("mol/L", 1e3),
+    Unit::scale("mmol/L", 1.0),
+    Unit::scale("mol/m³", 1.0),
+];
+const MOLAR_MASS: &[Unit] = &[Unit::scale("g/mol", 1e-3), Unit::scale("kg/mol", 1.0)];
+const MASS: &[Unit] = &[Unit::scale("g", 1e-3), Unit::scale("mg", 1e-6), Unit::scale("kg", 1.0)];
+const MASS_FLOW: &[Unit] = &[
+    Unit::scale("g/h", 1e-3 / HOUR),
+    Unit::scale("mg/min", 1e-6 / MINUTE),
+    Unit::scale("kg/h", 1.0 / HOUR),
+    Unit::scale("kg/s", 1.0),
+];
+const SPACE_TIME_YIELD: &[Unit] = &[
+    Unit::scale("g/(h·L)", 1e-3 / HOUR / LITRE),
+    Unit::scale("kg/(h·L)", 1.0 / HOUR / LITRE),
+    Unit::scale("kg/(s·m³)", 1.0),
+];
+const VELOCITY: &[Unit] = &[
+    Unit::scale("mm/s", 1e-3),
+    Unit::scale("cm/s", 1e-2),
+    Unit::scale("m/s", 1.0),
+];
+const FRACTION: &[Unit] = &[Unit::scale("%", 1e-2), Unit::scale("fraction", 1.0)];
+const NUMBER: &[Unit] = &[Unit::scale("", 1.0)];
+
+impl Dimension {
+    /// The units this kind of quantity can be entered or shown in; the first is the lab default.
+    pub fn units(self) -> &'static [Unit] {
+        match self {
+            Dimension::Length => LENGTH,
+            Dimension::Volume => VOLUME,
+            Dimension::VolumetricFlow => FLOW,
+            Dimension::Duration => DURATION,
+            Dimension::PressureDifference => PRESSURE,
+            Dimension::DynamicViscosity => VISCOSITY,
+            Dimension::Density => DENSITY,
+            Dimension::Concentration => CONCENTRATION,
+            Dimension::MolarMass => MOLAR_MASS,
+            Dimension::Mass => MASS,
+            Dimension::MassFlow => MASS_FLOW,
+            Dimension::SpaceTimeYield => SPACE_TIME_YIELD,
+            Dimension::Velocity => VELOCITY,
+            Dimension::Fraction => FRACTION,
+            Dimension::Number => NUMBER,
+        }
+    }
+
+    /// The lab default unit (first of [`Dimension::units`]).
+    pub fn default_unit(self) -> Unit {
+        self.units()[0]
+    }
+
+    /// The SI unit symbol, for machine-readable output.
+    pub fn si_symbol(self) -> &'static str {
+        match self {
+            Dimension::Length => "m",
+            Dimension::Volume => "m³",
+            Dimension::VolumetricFlow => "m³/s",
+            Dimension::Duration => "s",
+            Dimension::PressureDifference => "Pa",
+            Dimension::DynamicViscosity => "Pa·s",
+            Dimension::Density => "kg/m³",
+            Dimension::Concentration => "mol/m³",
+            Dimension::MolarMass => "kg/mol",
+            Dimension::Mass => "kg",
+            Dimension::MassFlow => "kg/s",
+            Dimension::SpaceTimeYield => "kg/(s·m³)",
+            Dimension::Velocity => "m/s",
+            Dimension::Fraction | Dimension::Number => "1",
+        }
+    }
+}
+
+/// Finds the unit with this symbol among the units of `dimension`. `u` is accepted for `µ`.
+pub fn unit_by_symbol(dimension: Dimension, symbol: &str) -> Option<Unit> {
+    let wanted = symbol.trim().replace('u', "µ").replace('μ', "µ");
+    dimension
+        .units()
+        .iter()
+        .copied()
+        .find(|u| u.symbol == symbol.trim() || u.symbol == wanted)
+}
+
+/// Why typed text is not a number.
+#[derive(Debug, Clone, PartialEq, Eq)]
+pub enum NumberError {
+    /// Nothing was typed.
+    Empty,
+    /// The text is not a decimal number.
+    NotANumber,
+    /// A decimal comma: refused rather than guessed, since `1,000` could mean one or a thousand.
+    Comma,
+    /// The number overflows a double (for example `1e400`).
+    NotFinite,
+}
+
+impl std::fmt::Display for NumberError {
+    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        f.write_str(match self {
+            NumberError::Empty => "enter a number",
+            NumberError::NotANumber => "not a number",
+            NumberError::Comma => "use a decimal point, not a comma",
+            NumberError::NotFinite => "number too large to use",
+        })
+    }
+}
+
+/// Parses a typed decimal number (`12`, `0.8`, `1e-3`). Never substitutes a default.
+pub fn parse_number(text: &str) -> Result<f64, NumberError> {
+    let t = text.trim();
+    if t.is_empty() {
+        return Err(NumberError::Empty);
+    }
+    if t.contains(',') {
+        return Err(NumberError::Comma);
+    }
+    // Rust also accepts "inf" and "NaN"; those are not numbers a user means.
+    if !t.bytes().all(|b| b.is_ascii_digit() || b"+-.eE".contains(&b)) {
+        return Err(NumberError::NotANumber);
+    }
+    let v: f64 = t.parse().map_err(|_| NumberError::NotANumber)?;
+    if v.is_finite() { Ok(v) } else { Err(NumberError::NotFinite) }
+}
