@@ -44,6 +44,22 @@ si_quantity!(
     PressureDifference, "Pa"
 );
 si_quantity!(
+    /// An absolute pressure (above vacuum).
+    Pressure, "Pa"
+);
+si_quantity!(
+    /// A thermodynamic temperature. Enter Celsius through [`Temperature::from_celsius`].
+    Temperature, "K"
+);
+si_quantity!(
+    /// A surface or interfacial tension.
+    SurfaceTension, "N/m"
+);
+si_quantity!(
+    /// A molecular diffusion coefficient.
+    Diffusivity, "m²/s"
+);
+si_quantity!(
     /// A dynamic viscosity.
     DynamicViscosity, "Pa·s"
 );
@@ -205,6 +221,65 @@ impl Fraction {
     }
     /// As a number between 0 and 1.
     pub const fn value(self) -> f64 {
+        self.0
+    }
+}
+
+/// 0 °C in kelvin (exact, by definition of the Celsius scale).
+pub const ZERO_CELSIUS_K: f64 = 273.15;
+
+impl Temperature {
+    /// From degrees Celsius.
+    pub fn from_celsius(c: f64) -> Self {
+        Self(c + ZERO_CELSIUS_K)
+    }
+    /// From kelvin.
+    pub const fn from_kelvin(k: f64) -> Self {
+        Self(k)
+    }
+    /// In kelvin.
+    pub const fn kelvin(self) -> f64 {
+        self.0
+    }
+    /// In degrees Celsius.
+    pub fn celsius(self) -> f64 {
+        self.0 - ZERO_CELSIUS_K
+    }
+}
+
+impl Pressure {
+    /// From bar absolute.
+    pub fn from_bar(bar: f64) -> Self {
+        Self(bar * 1e5)
+    }
+    /// From a gauge pressure and the ambient (absolute) pressure.
+    pub fn from_gauge(gauge: PressureDifference, ambient: Pressure) -> Self {
+        Self(gauge.si() + ambient.si())
+    }
+    /// In pascals.
+    pub const fn pascals(self) -> f64 {
+        self.0
+    }
+    /// In bar.
+    pub fn bar(self) -> f64 {
+        self.0 / 1e5
+    }
+    /// Gauge pressure relative to `ambient`.
+    pub fn gauge(self, ambient: Pressure) -> PressureDifference {
+        PressureDifference::from_si(self.0 - ambient.si())
+    }
+}
+
+/// Standard atmosphere, 101 325 Pa (exact; NIST SP 811 B.8).
+pub const STANDARD_ATMOSPHERE: Pressure = Pressure::from_si(101_325.0);
+
+impl SurfaceTension {
+    /// From millinewtons per metre (= dyn/cm).
+    pub fn from_mn_per_m(v: f64) -> Self {
+        Self(v * 1e-3)
+    }
+    /// In newtons per metre.
+    pub const fn n_per_m(self) -> f64 {
         self.0
     }
 }

@@ -45,6 +45,14 @@ pub enum Dimension {
     Duration,
     /// Pressure differences and gauge pressures (SI: Pa).
     PressureDifference,
+    /// Absolute pressure (SI: Pa).
+    Pressure,
+    /// Temperature (SI: K).
+    Temperature,
+    /// Surface tension (SI: N/m).
+    SurfaceTension,
+    /// Molecular diffusivity (SI: m²/s).
+    Diffusivity,
     /// Dynamic viscosity (SI: Pa·s).
     DynamicViscosity,
     /// Mass density (SI: kg/m³).
@@ -109,6 +117,17 @@ const PRESSURE: &[Unit] = &[
     Unit::scale("atm", ATM),
     Unit::scale("Pa", 1.0),
 ];
+const ABSOLUTE_PRESSURE: &[Unit] = &[
+    Unit::scale("bar", 1e5),
+    Unit::scale("kPa", 1e3),
+    Unit::scale("MPa", 1e6),
+    Unit::scale("psi", PSI),
+    Unit::scale("atm", ATM),
+    Unit::scale("Pa", 1.0),
+];
+const TEMPERATURE: &[Unit] = &[Unit { symbol: "°C", factor: 1.0, offset: 273.15 }, Unit::scale("K", 1.0)];
+const SURFACE_TENSION: &[Unit] = &[Unit::scale("mN/m", 1e-3), Unit::scale("N/m", 1.0)];
+const DIFFUSIVITY: &[Unit] = &[Unit::scale("cm²/s", 1e-4), Unit::scale("m²/s", 1.0)];
 const VISCOSITY: &[Unit] = &[
     Unit::scale("mPa·s", 1e-3),
     Unit::scale("cP", 1e-3),
@@ -150,6 +169,10 @@ impl Dimension {
             Dimension::VolumetricFlow => FLOW,
             Dimension::Duration => DURATION,
             Dimension::PressureDifference => PRESSURE,
+            Dimension::Pressure => ABSOLUTE_PRESSURE,
+            Dimension::Temperature => TEMPERATURE,
+            Dimension::SurfaceTension => SURFACE_TENSION,
+            Dimension::Diffusivity => DIFFUSIVITY,
             Dimension::DynamicViscosity => VISCOSITY,
             Dimension::Density => DENSITY,
             Dimension::Concentration => CONCENTRATION,
@@ -176,6 +199,10 @@ impl Dimension {
             Dimension::VolumetricFlow => "m³/s",
             Dimension::Duration => "s",
             Dimension::PressureDifference => "Pa",
+            Dimension::Pressure => "Pa",
+            Dimension::Temperature => "K",
+            Dimension::SurfaceTension => "N/m",
+            Dimension::Diffusivity => "m²/s",
             Dimension::DynamicViscosity => "Pa·s",
             Dimension::Density => "kg/m³",
             Dimension::Concentration => "mol/m³",
