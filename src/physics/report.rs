@@ -172,7 +172,7 @@ impl Figure {
 }
 
 /// Outcome of a check, from harmless to stop-and-fix.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord, Serialize)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, PartialOrd, Ord, Serialize)]
 #[serde(rename_all = "snake_case")]
 pub enum Verdict {
     /// Within limits with margin.

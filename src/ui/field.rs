@@ -1,0 +1,97 @@
+//! `QuantityField`: a labelled number entry with its unit selector and, when the entry is
+//! impossible or unreadable, the validation message right at the field.
+
+use leptos::prelude::*;
+
+use crate::physics::input::{FieldSpec, InputError};
+use crate::physics::units::{format_significant, parse_number, unit_by_symbol};
+
+/// The editable state of one quantity field: the text as typed and the chosen unit symbol.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct FieldState {
+    /// Text as typed.
+    pub text: RwSignal<String>,
+    /// Unit symbol, one of the field's units.
+    pub unit: RwSignal<String>,
+}
+
+impl FieldState {
+    /// A field holding `text` in the unit `unit`.
+    pub fn new(text: &str, unit: &str) -> Self {
+        Self { text: RwSignal::new(text.to_owned()), unit: RwSignal::new(unit.to_owned()) }
+    }
+
+    /// Validates the current entry (tracking both signals) and returns SI or the field's error.
+    pub fn read(&self, spec: &FieldSpec) -> Result<f64, InputError> {
+        let unit = spec.unit(&self.unit.get())?;
+        self.text.with(|t| spec.read(t, unit))
+    }
+}
+
+/// A number shown without trailing zeros, for writing a converted value back into a field.
+fn plain(value: f64) -> String {
+    let s = format_significant(value, 6);
+    if s.contains('.') && !s.contains('e') { s.trim_end_matches('0').trim_end_matches('.').to_owned() } else { s }
+}
+
+/// One input row. `spec` fixes label, units and allowed range; `state` holds text and unit.
+/// Changing the unit converts a valid entry so the physical value stays the same.
+#[component]
+pub fn QuantityField(spec: FieldSpec, state: FieldState) -> impl IntoView {
+    let error = Memo::new(move |_| state.read(&spec).err());
+    let id = format!("in-{}", spec.key);
+    let units = spec.dimension.units();
+    let on_unit = move |new_symbol: String| {
+        let old = unit_by_symbol(spec.dimension, &state.unit.get_untracked());
+        let new = unit_by_symbol(spec.dimension, &new_symbol);
+        if let (Some(old), Some(new), Ok(v)) = (old, new, parse_number(&state.text.get_untracked())) {
+            state.text.set(plain(new.from_si(old.to_si(v))));
+        }
+        state.unit.set(new_symbol);
+    };
+    let unit_picker = (units.len() > 1).then(|| {
+        view! {
+            <select
+                data-testid=format!("unit-{}", spec.key)
+                aria-label=format!("{} unit", spec.label)
+                prop:value=move || state.unit.get()
+                on:change:target=move |ev| on_unit(ev.target().value())
+            >
+                {units
+                    .iter()
+                    .map(|u| view! { <option value=u.symbol>{u.symbol}</option> })
+                    .collect_view()}
+            </select>
+        }
+    });
+    view! {
+        <div class="field" class:invalid=move || error.with(Option::is_some) data-testid=format!("field-{}", spec.key)>
+            <label for=id.clone()>{spec.label}</label>
+            <div class="entry">
+                <input
+                    id=id
+                    type="text"
+                    inputmode="decimal"
+                    autocomplete="off"
+                    data-testid=format!("input-{}", spec.key)
+                    aria-invalid=move || if error.with(Option::is_some) { "true" } else { "false" }
+                    prop:value=move || state.text.get()
+                    on:input:target=move |ev| state.text.set(ev.target().value())
+                />
+                {unit_picker}
+            </div>
+            <p class="help">{spec.help}</p>
+            {move || {
+                error
+                    .get()
+                    .map(|e| {
+                        view! {
+                            <p class="field-error" role="alert" data-testid=format!("error-{}", spec.key)>
+                                {format!("{}: {}", e.given, e.problem)}
+                            </p>
+                        }
+                    })
+            }}
+        </div>
+    }
+}

@@ -1,0 +1,28 @@
+//! The page (Leptos 0.8, client-side rendering; wasm32 only). Components show what the physics
+//! returns; none of them computes a formula.
+
+mod app;
+mod case_io;
+mod display;
+mod field;
+mod panic_banner;
+mod results;
+mod tubular;
+
+use wasm_bindgen::JsValue;
+
+/// Installs the panic banner, mounts the page, and records when it became interactive.
+pub fn mount() {
+    panic_banner::install();
+    leptos::mount::mount_to_body(app::App);
+    mark_ready();
+}
+
+/// Sets `window.__clearboreReady` to `performance.now()` once mounted: the page-load budget reads it.
+fn mark_ready() {
+    if let Some(window) = web_sys::window() {
+        let now = window.performance().map(|p| p.now()).unwrap_or(0.0);
+        // A failed property write only loses the timing mark; nothing to recover.
+        let _ = js_sys::Reflect::set(&window, &JsValue::from_str("__clearboreReady"), &JsValue::from_f64(now));
+    }
+}

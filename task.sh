@@ -1,0 +1,93 @@
+#!/usr/bin/env bash
+# Clearbore task runner. Each command installs what it needs that is missing.
+#   ./task.sh app    build dist/clearbore.html and serve dist/ on http://127.0.0.1:${CLEARBORE_PORT:-8765}
+#   ./task.sh test   every test: lints, native tests (physics, CLI), browser end-to-end tests
+#   ./task.sh build  build dist/clearbore.html only
+#   ./task.sh bench  measure the page budgets (size, load time, recompute time) in headless Chromium
+set -euo pipefail
+cd "$(dirname "$0")"
+
+say() { printf '\n== %s\n' "$*"; }
+
+as_root() { if [ "$(id -u)" = 0 ]; then "$@"; else sudo "$@"; fi; }
+
+setup_wasm() {
+  if ! rustup target list --installed | grep -qx wasm32-unknown-unknown; then
+    say "adding the wasm32-unknown-unknown target"
+    rustup target add wasm32-unknown-unknown
+  fi
+  local want have
+  want=$(awk '/^name = "wasm-bindgen"$/ { getline; gsub(/version = |"/, ""); print; exit }' Cargo.lock)
+  have=$(wasm-bindgen --version 2>/dev/null | awk '{ print $2 }' || true)
+  if [ "$have" != "$want" ]; then
+    say "installing wasm-bindgen-cli $want (matches Cargo.lock; takes several minutes once)"
+    cargo install wasm-bindgen-cli --version "$want"
+  fi
+}
+
+setup_browser() {
+  if ! command -v chromium >/dev/null || ! command -v chromedriver >/dev/null; then
+    say "installing Chromium and ChromeDriver (Debian packages)"
+    as_root apt-get update -q
+    as_root apt-get install -y -q chromium chromium-driver
+  fi
+}
+
+build() {
+  setup_wasm
+  say "building the page (release, wasm32)"
+  cargo build --release --target wasm32-unknown-unknown --bin clearbore
+  rm -rf target/web && mkdir -p target/web dist
+  wasm-bindgen --target web --no-typescript --out-dir target/web \
+    target/wasm32-unknown-unknown/release/clearbore.wasm
+  python3 - <<'PY'
+# Inline the CSS, the JS glue and the wasm (base64) into one self-contained HTML file.
+import base64, pathlib
+page = pathlib.Path("index.html").read_text()
+style = pathlib.Path("public/style.css").read_text()
+glue = pathlib.Path("target/web/clearbore.js").read_text()
+wasm = base64.b64encode(pathlib.Path("target/web/clearbore_bg.wasm").read_bytes()).decode()
+for marker, text in (("/*@CLEARBORE_STYLE@*/", style), ("/*@CLEARBORE_GLUE@*/", glue), ("/*@CLEARBORE_WASM@*/", wasm)):
+    assert page.count(marker) == 1, marker
+    page = page.replace(marker, text)
+pathlib.Path("dist/clearbore.html").write_text(page)
+PY
+  local bytes gz
+  bytes=$(wc -c < dist/clearbore.html)
+  gz=$(gzip -9 -c dist/clearbore.html | wc -c)
+  say "dist/clearbore.html: $bytes bytes ($gz bytes gzip -9)"
+}
+
+case "${1:-}" in
+  app)
+    build
+    port="${CLEARBORE_PORT:-8765}"
+    say "open the file directly:  file://$PWD/dist/clearbore.html"
+    say "or the local server:     http://127.0.0.1:$port/clearbore.html   (Ctrl-C stops it)"
+    exec python3 -m http.server "$port" --bind 127.0.0.1 --directory dist
+    ;;
+  build)
+    build
+    ;;
+  test)
+    setup_browser
+    say "lints (native and wasm32)"
+    cargo clippy --all-targets -- -D warnings
+    setup_wasm
+    cargo clippy --target wasm32-unknown-unknown --bin clearbore --lib -- -D warnings
+    say "native tests: physics, case files, command line, doc examples"
+    cargo test
+    build
+    say "browser end-to-end tests (headless Chromium, file://)"
+    cargo test --features e2e --test browser
+    ;;
+  bench)
+    setup_browser
+    build
+    cargo test --release --features e2e --test page_budget
+    ;;
+  *)
+    sed -n '2,7p' "$0"
+    exit 2
+    ;;
+esac

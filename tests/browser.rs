@@ -1,0 +1,139 @@
+//! End-to-end tests in headless Chromium: the built single file (`dist/clearbore.html`) opened
+//! from `file://` with the network cut off, driven like a user through stable `data-testid`s.
+//! Run by `./task.sh test` after the build; needs the `e2e` feature.
+#![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
+
+mod support;
+
+use clearbore::case::{CaseFile, TUBULAR_DEMO_JSON};
+use clearbore::physics::units::format_significant;
+use serde_json::Value;
+use support::Browser;
+
+/// Label, value and unit of every result row on the page.
+async fn result_rows(b: &Browser) -> Vec<(String, String, String)> {
+    let rows = b
+        .js(r#"return Array.from(document.querySelectorAll('[data-testid=results] tr')).map(tr => [
+            tr.querySelector('th').textContent.trim(),
+            tr.querySelector('td.value').textContent.trim(),
+            (tr.querySelector('select.unit') || tr.querySelector('span.unit')).value
+                ?? tr.querySelector('span.unit').textContent.trim()
+        ]);"#)
+        .await;
+    rows.as_array()
+        .unwrap()
+        .iter()
+        .map(|r| {
+            let r = r.as_array().unwrap();
+            let s = |i: usize| r[i].as_str().unwrap_or("").to_owned();
+            (s(0), s(1), s(2))
+        })
+        .collect()
+}
+
+/// What a clean page reports about itself: CSP violations, console errors, resource requests.
+async fn assert_clean(b: &Browser) {
+    let log = b
+        .js("return { v: window.__clearboreLog.violations, e: window.__clearboreLog.errors, \
+             r: performance.getEntriesByType('resource').map(e => e.name) };")
+        .await;
+    assert_eq!(log["v"], Value::Array(vec![]), "CSP violations (blocked requests)");
+    assert_eq!(log["e"], Value::Array(vec![]), "console errors");
+    assert_eq!(log["r"], Value::Array(vec![]), "network resource requests");
+    assert!(!b.exists("[data-testid=panic-banner]").await, "panic banner shown");
+    assert!(!b.exists("[data-testid=boot-error]").await, "boot error shown");
+}
+
+#[tokio::test]
+async fn demo_case_renders_and_matches_the_command_line() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    assert!(b.text("[data-testid=safety-notice]").await.contains("Engineering estimates"));
+    assert!(b.text("[data-testid=case-title]").await.contains("Demo (invented)"));
+
+    // The same case through the library the CLI uses; page values must equal these, formatted
+    // with the page's default of 4 significant figures in each figure's default unit.
+    let report = CaseFile::from_json(TUBULAR_DEMO_JSON).unwrap().evaluate().unwrap();
+    let rows = result_rows(&b).await;
+    assert_eq!(rows.len(), report.figures.len(), "one row per figure: {rows:?}");
+    for (f, (label, value, unit)) in report.figures.iter().zip(&rows) {
+        let u = f.dimension.default_unit();
+        assert_eq!(label, f.label);
+        assert_eq!(unit, u.symbol, "{label}");
+        assert_eq!(value, &format_significant(u.from_si(f.value.get()), 4), "{label}");
+    }
+    // Hand check of the headline number: V = π (0.76 mm)² / 4 × 10 m = 4.5365 mL; τ = V / 0.5 mL/min.
+    assert_eq!(b.text("[data-testid=result-residence_time]").await, "9.073");
+    assert!(b.text("[data-testid=verdict-pressure_budget]").await.to_lowercase().contains("fine"));
+    b.screenshot("demo").await;
+    assert_clean(&b).await;
+    b.close().await;
+}
+
+#[tokio::test]
+async fn invalid_entries_show_a_message_at_the_field_and_results_stay() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    let before = b.text("[data-testid=result-residence_time]").await;
+    for (typed, expect) in [("abc", "not a number"), ("-1", "allowed: > 0 mm"), ("0", "allowed: > 0 mm"), ("1e400", "too large")] {
+        b.type_into("inner_diameter", typed).await;
+        let msg = b.text_when("[data-testid=error-inner_diameter]", |t| t.contains(expect)).await;
+        assert!(msg.contains(typed) || typed == "abc" && msg.contains("\"abc\""), "{msg}");
+        assert!(b.exists("[data-testid=stale-notice]").await, "stale notice for {typed}");
+        assert_eq!(b.text("[data-testid=result-residence_time]").await, before, "results stay for {typed}");
+        // Other fields show no error.
+        assert!(!b.exists("[data-testid=error-length]").await);
+    }
+    b.screenshot("invalid-entry").await;
+    b.type_into("inner_diameter", "0.76").await;
+    b.text_when("[data-testid=result-residence_time]", |t| t == before).await;
+    assert!(!b.exists("[data-testid=error-inner_diameter]").await);
+    assert!(!b.exists("[data-testid=stale-notice]").await);
+    assert_clean(&b).await;
+    b.close().await;
+}
+
+#[tokio::test]
+async fn edits_update_results_and_units_do_not_change_them() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    // Doubling the flow halves the residence time: 9.073 → 4.536 min.
+    b.type_into("flow", "1").await;
+    b.text_when("[data-testid=result-residence_time]", |t| t == "4.536").await;
+    // The same flow in µL/min: the field converts, the result stays.
+    b.choose("unit-flow", "µL/min").await;
+    let shown = b.client.find(fantoccini::Locator::Css("[data-testid=input-flow]")).await.unwrap().prop("value").await.unwrap();
+    assert_eq!(shown.as_deref(), Some("1000"));
+    assert_eq!(b.text("[data-testid=result-residence_time]").await, "4.536");
+    // A result shown in seconds: 4.536 min × 60 = 272.2 s.
+    b.choose("result-unit-residence_time", "s").await;
+    b.text_when("[data-testid=result-residence_time]", |t| t == "272.2").await;
+    // Recirculation adds the loop figures: batch 40 + 4.536 mL, 3 passes at 1 mL/min = 133.6 min.
+    b.click("[data-testid=option-recirculation]").await;
+    b.text_when("[data-testid=result-total_time]", |t| t == "133.6").await;
+    assert!(b.exists("[data-testid=input-passes]").await);
+    // Significant figures apply everywhere.
+    b.choose("sig-figs", "6").await;
+    b.text_when("[data-testid=result-total_time]", |t| t == "133.610").await;
+    b.screenshot("recirculation").await;
+    assert_clean(&b).await;
+    b.close().await;
+}
+
+#[tokio::test]
+async fn over_pressure_is_a_problem_with_its_caution_beside_it() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    assert!(!b.exists("[data-testid=caution-pressure_budget]").await);
+    // 5 bar back-pressure + 0.038 bar line drop against a 5 bar rating.
+    b.type_into("pressure_rating", "5").await;
+    b.text_when("[data-testid=verdict-pressure_budget]", |t| t.to_lowercase().contains("problem")).await;
+    let caution = b.text("[data-testid=caution-pressure_budget]").await;
+    assert!(caution.contains("Over-pressure"), "{caution}");
+    // Within 20 % of the rating: caution.
+    b.type_into("pressure_rating", "6").await;
+    b.text_when("[data-testid=verdict-pressure_budget]", |t| t.to_lowercase().contains("caution")).await;
+    b.screenshot("over-pressure").await;
+    assert_clean(&b).await;
+    b.close().await;
+}

@@ -1,0 +1,72 @@
+//! The command line: evaluates the shipped demo case, prints JSON and a table, and names the bad
+//! field on error.
+#![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
+
+use std::io::Write;
+use std::process::{Command, Output, Stdio};
+
+fn run(args: &[&str], stdin: Option<&str>) -> Output {
+    let mut child = Command::new(env!("CARGO_BIN_EXE_clearbore"))
+        .args(args)
+        .stdin(Stdio::piped())
+        .stdout(Stdio::piped())
+        .stderr(Stdio::piped())
+        .spawn()
+        .unwrap();
+    let input = child.stdin.take().unwrap();
+    if let Some(text) = stdin {
+        let mut input = input;
+        input.write_all(text.as_bytes()).unwrap();
+    }
+    child.wait_with_output().unwrap()
+}
+
+const DEMO: &str = concat!(env!("CARGO_MANIFEST_DIR"), "/public/cases/tubular-demo.json");
+
+#[test]
+fn json_output_for_the_demo() {
+    let out = run(&[DEMO], None);
+    assert!(out.status.success(), "{}", String::from_utf8_lossy(&out.stderr));
+    let v: serde_json::Value = serde_json::from_slice(&out.stdout).unwrap();
+    assert_eq!(v["calculator"], "tubular_reactor");
+    assert_eq!(v["overall"], "fine");
+    let tau = v["report"]["figures"].as_array().unwrap().iter().find(|f| f["key"] == "residence_time").unwrap();
+    // τ = π (0.76e-3 m)² / 4 × 10 m / (0.5e-6/60 m³/s) = 544.385 s (hand calculation)
+    assert!((tau["value"].as_f64().unwrap() - 544.385).abs() < 1e-3, "{tau}");
+    assert_eq!(tau["estimates"][0]["recommended"], true);
+}
+
+#[test]
+fn text_output_and_stdin() {
+    let demo = std::fs::read_to_string(DEMO).unwrap();
+    let out = run(&["--text", "-"], Some(&demo));
+    assert!(out.status.success());
+    let text = String::from_utf8(out.stdout).unwrap();
+    let line = text.lines().find(|l| l.starts_with("Residence time")).unwrap();
+    assert!(line.ends_with("9.073 min"), "{line}");
+    assert!(text.contains("[fine] Pressure budget"), "{text}");
+    let out = run(&["--text", "--sig", "6", DEMO], None);
+    assert!(String::from_utf8(out.stdout).unwrap().contains("9.07308 min"));
+}
+
+#[test]
+fn errors_name_the_field_and_exit_nonzero() {
+    let bad = std::fs::read_to_string(DEMO).unwrap().replace("{ \"value\": 0.76, \"unit\": \"mm\" }", "{ \"value\": -1, \"unit\": \"mm\" }");
+    let out = run(&["-"], Some(&bad));
+    assert_eq!(out.status.code(), Some(1));
+    let err = String::from_utf8(out.stderr).unwrap();
+    assert!(err.contains("inner_diameter") && err.contains("-1 mm") && err.contains("> 0 mm"), "{err}");
+    assert!(out.stdout.is_empty());
+    let out = run(&["/nonexistent/case.json"], None);
+    assert_eq!(out.status.code(), Some(1));
+    let out = run(&[], None);
+    assert_eq!(out.status.code(), Some(2));
+}
+
+#[test]
+fn demo_flag_prints_a_valid_case() {
+    let out = run(&["--demo"], None);
+    assert!(out.status.success());
+    let text = String::from_utf8(out.stdout).unwrap();
+    assert!(clearbore::case::CaseFile::from_json(&text).unwrap().evaluate().is_ok());
+}

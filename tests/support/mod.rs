@@ -1,0 +1,161 @@
+//! Shared by the browser tests and the page benchmark: starts ChromeDriver and a headless
+//! Chromium with networking cut off, and opens the built single-file page from `file://`.
+#![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic, dead_code)]
+
+use std::net::TcpListener;
+use std::path::PathBuf;
+use std::time::Duration;
+
+use fantoccini::{Client, ClientBuilder, Locator};
+use serde_json::{Value, json};
+use tokio::process::{Child, Command};
+
+/// The built page; `./task.sh build` makes it.
+pub fn page_path() -> PathBuf {
+    PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("dist/clearbore.html")
+}
+
+/// A headless Chromium session driven through its own ChromeDriver process.
+pub struct Browser {
+    /// The WebDriver client.
+    pub client: Client,
+    _driver: Child,
+    _profile: tempdir::Dir,
+}
+
+mod tempdir {
+    /// A throw-away folder removed on drop.
+    pub struct Dir(pub std::path::PathBuf);
+    impl Drop for Dir {
+        fn drop(&mut self) {
+            let _ = std::fs::remove_dir_all(&self.0);
+        }
+    }
+}
+
+fn free_port() -> u16 {
+    TcpListener::bind("127.0.0.1:0").unwrap().local_addr().unwrap().port()
+}
+
+impl Browser {
+    /// Starts ChromeDriver and Chromium. Every request to the network goes to a dead proxy on
+    /// loopback, so the page is tested as it runs offline.
+    pub async fn start() -> Browser {
+        let page = page_path();
+        assert!(page.exists(), "{} is missing: run ./task.sh build first", page.display());
+        let port = free_port();
+        let driver = Command::new("chromedriver")
+            .arg(format!("--port={port}"))
+            .stdout(std::process::Stdio::null())
+            .stderr(std::process::Stdio::null())
+            .kill_on_drop(true)
+            .spawn()
+            .expect("chromedriver not found: install chromium-driver (./task.sh test does)");
+        let profile = std::env::temp_dir().join(format!("clearbore-chromium-{port}"));
+        let dead_proxy = free_port();
+        let caps = json!({
+            "goog:chromeOptions": {
+                "binary": "/usr/bin/chromium",
+                "args": [
+                    "--headless=new", "--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage",
+                    "--disable-background-networking", "--disable-component-update", "--no-first-run",
+                    "--disable-sync", "--disable-quic", "--window-size=1280,1400",
+                    format!("--user-data-dir={}", profile.display()),
+                    format!("--proxy-server=http://127.0.0.1:{dead_proxy}"), "--proxy-bypass-list=<-loopback>",
+                ]
+            }
+        });
+        let Value::Object(caps) = caps else { unreachable!() };
+        let url = format!("http://127.0.0.1:{port}");
+        let mut last_error = String::new();
+        for _ in 0..100 {
+            match ClientBuilder::rustls().expect("rustls").capabilities(caps.clone()).connect(&url).await {
+                Ok(client) => return Browser { client, _driver: driver, _profile: tempdir::Dir(profile) },
+                Err(e) => last_error = e.to_string(),
+            }
+            tokio::time::sleep(Duration::from_millis(100)).await;
+        }
+        panic!("could not start a browser session: {last_error}");
+    }
+
+    /// Opens the single-file page from `file://` and waits until the app has mounted.
+    pub async fn open_page(&self) {
+        let url = format!("file://{}", page_path().display());
+        self.client.goto(&url).await.unwrap();
+        self.wait_for("[data-testid=result-residence_time]").await;
+    }
+
+    /// Waits (up to 10 s) for an element to exist.
+    pub async fn wait_for(&self, css: &str) {
+        self.client
+            .wait()
+            .at_most(Duration::from_secs(10))
+            .for_element(Locator::Css(css))
+            .await
+            .unwrap_or_else(|e| panic!("{css} did not appear: {e}"));
+    }
+
+    /// Text of the element matching `css`.
+    pub async fn text(&self, css: &str) -> String {
+        self.client.find(Locator::Css(css)).await.unwrap_or_else(|e| panic!("{css}: {e}")).text().await.unwrap()
+    }
+
+    /// Whether an element matching `css` exists.
+    pub async fn exists(&self, css: &str) -> bool {
+        !self.client.find_all(Locator::Css(css)).await.unwrap().is_empty()
+    }
+
+    /// Polls (up to 5 s) until the text of `css` satisfies `ok`; returns the last text seen.
+    pub async fn text_when(&self, css: &str, ok: impl Fn(&str) -> bool) -> String {
+        let mut last = String::new();
+        for _ in 0..100 {
+            if let Ok(el) = self.client.find(Locator::Css(css)).await {
+                if let Ok(t) = el.text().await {
+                    if ok(&t) {
+                        return t;
+                    }
+                    last = t;
+                }
+            }
+            tokio::time::sleep(Duration::from_millis(50)).await;
+        }
+        panic!("{css}: text never met the condition; last seen {last:?}");
+    }
+
+    /// Types `text` into the input with `data-testid=input-<key>`, replacing what was there, as a
+    /// user would (select all, then type).
+    pub async fn type_into(&self, key: &str, text: &str) {
+        let el = self.client.find(Locator::Css(&format!("[data-testid=input-{key}]"))).await.unwrap();
+        el.clear().await.unwrap();
+        el.send_keys(text).await.unwrap();
+    }
+
+    /// Chooses the option with `value` in the select with `data-testid=<testid>`.
+    pub async fn choose(&self, testid: &str, value: &str) {
+        let el = self.client.find(Locator::Css(&format!("[data-testid=\"{testid}\"]"))).await.unwrap();
+        el.select_by_value(value).await.unwrap();
+    }
+
+    /// Clicks the element matching `css`.
+    pub async fn click(&self, css: &str) {
+        self.client.find(Locator::Css(css)).await.unwrap().click().await.unwrap();
+    }
+
+    /// Runs JavaScript in the page and returns its value.
+    pub async fn js(&self, script: &str) -> Value {
+        self.client.execute(script, vec![]).await.unwrap()
+    }
+
+    /// Saves a screenshot under `target/screenshots/` for a person to look at.
+    pub async fn screenshot(&self, name: &str) {
+        let dir = PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("target/screenshots");
+        std::fs::create_dir_all(&dir).unwrap();
+        let png = self.client.screenshot().await.unwrap();
+        std::fs::write(dir.join(format!("{name}.png")), png).unwrap();
+    }
+
+    /// Ends the session.
+    pub async fn close(self) {
+        let _ = self.client.close().await;
+    }
+}

@@ -1,0 +1,86 @@
+//! Unit conversions against NIST Special Publication 811 (2008), Appendix B, number parsing and
+//! significant-figure formatting.
+#![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
+
+use clearbore::physics::units::*;
+
+fn si(dimension: Dimension, symbol: &str, value: f64) -> f64 {
+    unit_by_symbol(dimension, symbol).unwrap_or_else(|| panic!("{symbol}")).to_si(value)
+}
+
+#[test]
+fn factors_match_nist_sp_811() {
+    // NIST SP 811 B.8: inch = 2.54 E-02 m (exact)
+    assert_eq!(si(Dimension::Length, "in", 1.0), 0.0254);
+    // pound-force per square inch = 6.894 757 E+03 Pa
+    assert_eq!(si(Dimension::PressureDifference, "psi", 1.0), 6894.757);
+    // standard atmosphere = 1.013 25 E+05 Pa (exact)
+    assert_eq!(si(Dimension::Pressure, "atm", 1.0), 101_325.0);
+    // bar = 1.0 E+05 Pa (exact); centipoise = 1.0 E-03 Pa·s (exact)
+    assert_eq!(si(Dimension::PressureDifference, "bar", 1.0), 1e5);
+    assert_eq!(si(Dimension::DynamicViscosity, "cP", 1.0), 1e-3);
+    // litre = 1.0 E-03 m³ (exact), minute = 60 s, hour = 3600 s
+    assert!((si(Dimension::VolumetricFlow, "mL/min", 1.0) - 1e-6 / 60.0).abs() < 1e-22);
+    assert!((si(Dimension::VolumetricFlow, "L/h", 3.6) - 1e-6).abs() < 1e-20);
+    // degree Celsius: T/K = t/°C + 273.15 (exact)
+    assert!((si(Dimension::Temperature, "°C", 25.0) - 298.15).abs() < 1e-12);
+    assert!((si(Dimension::Concentration, "mol/L", 1.0) - 1000.0).abs() < 1e-12);
+}
+
+#[test]
+fn every_unit_round_trips() {
+    let all = [
+        Dimension::Length, Dimension::Volume, Dimension::VolumetricFlow, Dimension::Duration,
+        Dimension::PressureDifference, Dimension::Pressure, Dimension::Temperature,
+        Dimension::SurfaceTension, Dimension::Diffusivity, Dimension::DynamicViscosity,
+        Dimension::Density, Dimension::Concentration, Dimension::MolarMass, Dimension::Mass,
+        Dimension::MassFlow, Dimension::SpaceTimeYield, Dimension::Velocity, Dimension::Fraction,
+        Dimension::Number,
+    ];
+    for d in all {
+        for u in d.units() {
+            for x in [1e-7, 0.37, 1.0, 42.5, 3.3e5] {
+                let back = u.from_si(u.to_si(x));
+                assert!(((back - x) / x).abs() < 1e-12, "{d:?} {}: {x} → {back}", u.symbol);
+            }
+            assert_eq!(unit_by_symbol(d, u.symbol), Some(*u));
+        }
+    }
+    // "u" is accepted for "µ"
+    assert_eq!(unit_by_symbol(Dimension::VolumetricFlow, "uL/min").map(|u| u.symbol), Some("µL/min"));
+}
+
+#[test]
+fn typed_numbers() {
+    assert_eq!(parse_number(" 2.5 "), Ok(2.5));
+    assert_eq!(parse_number("1e-3"), Ok(1e-3));
+    assert_eq!(parse_number("-4"), Ok(-4.0));
+    assert_eq!(parse_number(""), Err(NumberError::Empty));
+    assert_eq!(parse_number("abc"), Err(NumberError::NotANumber));
+    assert_eq!(parse_number("inf"), Err(NumberError::NotANumber));
+    assert_eq!(parse_number("NaN"), Err(NumberError::NotANumber));
+    assert_eq!(parse_number("1,5"), Err(NumberError::Comma));
+    assert_eq!(parse_number("1e400"), Err(NumberError::NotFinite));
+    assert_eq!(parse_number("1.2.3"), Err(NumberError::NotANumber));
+}
+
+#[test]
+fn significant_figures() {
+    assert_eq!(format_significant(9.073_32, 4), "9.073");
+    assert_eq!(format_significant(9.999_6, 4), "10.00");
+    assert_eq!(format_significant(0.000_123_46, 4), "1.235e-4");
+    assert_eq!(format_significant(0.001_234_6, 3), "0.00123");
+    assert_eq!(format_significant(123_456.0, 3), "123000");
+    assert_eq!(format_significant(2.5e7, 3), "2.50e7");
+    assert_eq!(format_significant(-0.5, 2), "-0.50");
+    assert_eq!(format_significant(0.0, 3), "0.00");
+    assert_eq!(format_significant(f64::NAN, 3), "—");
+}
+
+#[test]
+fn gauge_and_absolute_pressure() {
+    let p = Pressure::from_gauge(PressureDifference::from_bar(5.0), STANDARD_ATMOSPHERE);
+    assert!((p.pascals() - 601_325.0).abs() < 1e-9);
+    assert!((p.gauge(STANDARD_ATMOSPHERE).bar() - 5.0).abs() < 1e-12);
+    assert!((Temperature::from_celsius(80.0).kelvin() - 353.15).abs() < 1e-12);
+}
