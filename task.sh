@@ -84,7 +84,7 @@ case "${1:-}" in
   bench)
     setup_browser
     build
-    cargo test --release --features e2e --test page_budget
+    cargo test --features e2e --test page_budget
     ;;
   *)
     sed -n '2,7p' "$0"
