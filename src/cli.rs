@@ -35,7 +35,7 @@ pub fn text_report(case: &CaseFile, report: &Report, sig: usize) -> String {
     for f in &report.figures {
         let unit = f.dimension.default_unit();
         let value = format_significant(unit.from_si(f.value.get()), sig);
-        out.push_str(&format!("{:<44} {} {}\n", f.label, value, unit.symbol).trim_end().to_owned());
+        out.push_str(format!("{:<44} {} {}", f.label, value, unit.symbol).trim_end());
         out.push('\n');
         for e in &f.estimates {
             for w in &e.warnings {

@@ -68,7 +68,7 @@ impl ValidityBound {
     pub fn check(&self, value: f64, model: &ModelInfo) -> Option<RangeWarning> {
         let below = self.low.is_some_and(|lo| value < lo);
         let above = self.high.is_some_and(|hi| value > hi);
-        (below || above).then(|| RangeWarning {
+        (below || above).then_some(RangeWarning {
             quantity: self.quantity,
             dimension: self.dimension,
             value,

@@ -218,7 +218,7 @@ impl Dimension {
 
 /// Finds the unit with this symbol among the units of `dimension`. `u` is accepted for `µ`.
 pub fn unit_by_symbol(dimension: Dimension, symbol: &str) -> Option<Unit> {
-    let wanted = symbol.trim().replace('u', "µ").replace('μ', "µ");
+    let wanted = symbol.trim().replace(['u', 'μ'], "µ");
     dimension
         .units()
         .iter()
