@@ -51,16 +51,24 @@ async fn demo_case_renders_and_matches_the_command_line() {
     assert!(b.text("[data-testid=safety-notice]").await.contains("Engineering estimates"));
     assert!(b.text("[data-testid=case-title]").await.contains("Demo (invented)"));
 
-    // The same case through the library the CLI uses; page values must equal these, formatted
-    // with the page's default of 4 significant figures in each figure's default unit.
-    let report = CaseFile::from_json(TUBULAR_DEMO_JSON).unwrap().evaluate().unwrap();
+    // The command line on the same case file; the page must show its numbers, formatted with
+    // the page's default of 4 significant figures in each figure's default unit.
+    let out = std::process::Command::new(env!("CARGO_BIN_EXE_clearbore"))
+        .arg(concat!(env!("CARGO_MANIFEST_DIR"), "/public/cases/tubular-demo.json"))
+        .output()
+        .unwrap();
+    assert!(out.status.success());
+    let cli: Value = serde_json::from_slice(&out.stdout).unwrap();
+    let figures = cli["report"]["figures"].as_array().unwrap();
+    // The library gives each figure's kind of quantity (and so its default unit).
+    let library = CaseFile::from_json(TUBULAR_DEMO_JSON).unwrap().evaluate().unwrap();
     let rows = result_rows(&b).await;
-    assert_eq!(rows.len(), report.figures.len(), "one row per figure: {rows:?}");
-    for (f, (label, value, unit)) in report.figures.iter().zip(&rows) {
-        let u = f.dimension.default_unit();
-        assert_eq!(label, f.label);
+    assert_eq!(rows.len(), figures.len(), "one row per figure: {rows:?}");
+    for (f, (label, value, unit)) in figures.iter().zip(&rows) {
+        let u = library.figure(f["key"].as_str().unwrap()).unwrap().dimension.default_unit();
+        assert_eq!(label, f["label"].as_str().unwrap());
         assert_eq!(unit, u.symbol, "{label}");
-        assert_eq!(value, &format_significant(u.from_si(f.value.get()), 4), "{label}");
+        assert_eq!(value, &format_significant(u.from_si(f["value"].as_f64().unwrap()), 4), "{label}");
     }
     // Hand check of the headline number: V = π (0.76 mm)² / 4 × 10 m = 4.5365 mL; τ = V / 0.5 mL/min.
     assert_eq!(b.text("[data-testid=result-residence_time]").await, "9.073");
