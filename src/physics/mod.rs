@@ -4,6 +4,8 @@
 pub mod fluids;
 pub mod form;
 pub mod input;
+pub mod numeric;
+pub mod packed_bed;
 pub mod pipe_flow;
 pub mod report;
 pub mod tubular;
