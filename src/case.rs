@@ -7,6 +7,7 @@ use serde::{Deserialize, Serialize};
 
 use crate::physics::form::{ChoiceSpec, FieldSource};
 use crate::physics::input::{FieldSpec, InputError};
+use crate::physics::packed_bed::{self as bed, PackedBedInput};
 use crate::physics::report::{NumericalError, Report};
 use crate::physics::tubular::{self, TubularInput};
 
@@ -16,12 +17,151 @@ pub const FORMAT_VERSION: u32 = 1;
 /// The demo tubular-reactor case (an invented scenario), as shipped in `public/cases/`.
 pub const TUBULAR_DEMO_JSON: &str = include_str!("../public/cases/tubular-demo.json");
 
+/// The demo packed-cartridge case (an invented scenario), as shipped in `public/cases/`.
+pub const PACKED_BED_DEMO_JSON: &str = include_str!("../public/cases/packed-bed-demo.json");
+
 /// Which calculator a case is for.
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
 #[serde(rename_all = "snake_case")]
 pub enum Calculator {
     /// Plain tubular reactor (volume, residence time, productivity, loop).
     TubularReactor,
+    /// Packed cartridge (pressure drop, residence time, capacity, lifting, sizing).
+    PackedBed,
+}
+
+/// One entry of a calculator's form, in page order.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum FormItem {
+    /// A quantity with a unit.
+    Field(FieldSpec),
+    /// A choice between named options.
+    Choice(ChoiceSpec),
+}
+
+use FormItem::{Choice, Field};
+
+const TUBULAR_LAYOUT: &[FormItem] = &[
+    Choice(tubular::OPERATION),
+    Field(tubular::INNER_DIAMETER),
+    Field(tubular::LENGTH),
+    Field(tubular::FLOW),
+    Field(tubular::CONCENTRATION),
+    Field(tubular::YIELD),
+    Field(tubular::MOLAR_MASS),
+    Field(tubular::DENSITY),
+    Field(tubular::VISCOSITY),
+    Field(tubular::BACK_PRESSURE),
+    Field(tubular::RATING),
+    Field(tubular::RESERVOIR),
+    Field(tubular::PASSES),
+];
+
+const PACKED_BED_LAYOUT: &[FormItem] = &[
+    Field(bed::TUBE_DIAMETER),
+    Field(bed::BED_LENGTH),
+    Field(bed::PARTICLE_DIAMETER),
+    Choice(bed::PARTICLE_SHAPE),
+    Field(bed::SPHERICITY),
+    Field(bed::PARTICLE_DENSITY),
+    Choice(bed::VOIDAGE_SOURCE),
+    Field(bed::VOIDAGE),
+    Field(bed::FLOW),
+    Choice(bed::FLOW_DIRECTION),
+    Choice(bed::CONFINEMENT),
+    Field(bed::DENSITY),
+    Field(bed::VISCOSITY),
+    Field(bed::BACK_PRESSURE),
+    Field(bed::RATING),
+    Field(bed::SOLID_MASS),
+    Choice(bed::BED_ROLE),
+    Field(bed::LOADING),
+    Field(bed::CONCENTRATION),
+    Field(bed::STOICHIOMETRY),
+    Choice(bed::SIZING),
+    Field(bed::TARGET_RESIDENCE_TIME),
+    Field(bed::MAX_PRESSURE_DROP),
+];
+
+impl Calculator {
+    /// Every calculator, in page order.
+    pub const ALL: [Calculator; 2] = [Calculator::TubularReactor, Calculator::PackedBed];
+
+    /// Stable key, as in case files.
+    pub const fn key(self) -> &'static str {
+        match self {
+            Calculator::TubularReactor => "tubular_reactor",
+            Calculator::PackedBed => "packed_bed",
+        }
+    }
+
+    /// Name for people.
+    pub const fn title(self) -> &'static str {
+        match self {
+            Calculator::TubularReactor => "Tubular reactor",
+            Calculator::PackedBed => "Packed cartridge",
+        }
+    }
+
+    /// One sentence on what it answers.
+    pub const fn summary(self) -> &'static str {
+        match self {
+            Calculator::TubularReactor => {
+                "Volume, residence time, productivity and space-time yield of a plain tube, single pass or as a \
+                 recirculation loop, with the line pressure checked against your weakest component."
+            }
+            Calculator::PackedBed => {
+                "Back-pressure of a packed bed from several published correlations, residence time between the \
+                 particles, how long the bed lasts, whether up-flow lifts it, and the bed that meets a target."
+            }
+        }
+    }
+
+    /// The form in page order.
+    pub const fn layout(self) -> &'static [FormItem] {
+        match self {
+            Calculator::TubularReactor => TUBULAR_LAYOUT,
+            Calculator::PackedBed => PACKED_BED_LAYOUT,
+        }
+    }
+
+    /// The shipped demo case (an invented scenario).
+    pub const fn demo_json(self) -> &'static str {
+        match self {
+            Calculator::TubularReactor => TUBULAR_DEMO_JSON,
+            Calculator::PackedBed => PACKED_BED_DEMO_JSON,
+        }
+    }
+
+    /// File name of the demo case under `public/cases/`.
+    pub const fn demo_file(self) -> &'static str {
+        match self {
+            Calculator::TubularReactor => "tubular-demo.json",
+            Calculator::PackedBed => "packed-bed-demo.json",
+        }
+    }
+
+    /// Whether `key` names one of this calculator's fields or choices.
+    pub fn knows(self, key: &str) -> bool {
+        self.layout().iter().any(|item| match item {
+            Field(f) => f.key == key,
+            Choice(c) => c.key == key,
+        })
+    }
+
+    /// Validates the inputs from `src` and runs the calculator.
+    pub fn evaluate(self, src: &dyn FieldSource) -> Result<Report, CaseError> {
+        match self {
+            Calculator::TubularReactor => {
+                let input = TubularInput::from_source(src).map_err(CaseError::Inputs)?;
+                tubular::evaluate(&input).map_err(CaseError::Numerical)
+            }
+            Calculator::PackedBed => {
+                let input = PackedBedInput::from_source(src).map_err(CaseError::Inputs)?;
+                bed::evaluate(&input).map_err(CaseError::Numerical)
+            }
+        }
+    }
 }
 
 /// One entry: a quantity as typed (number and unit symbol), or the key of a chosen option.
@@ -95,13 +235,8 @@ impl CaseFile {
                 case.clearbore_case
             )));
         }
-        let (fields, choices) = case.calculator.fields();
-        let unknown: Vec<&str> = case
-            .inputs
-            .keys()
-            .map(String::as_str)
-            .filter(|k| !fields.iter().any(|f| f.key == *k) && !choices.iter().any(|c| c.key == *k))
-            .collect();
+        let unknown: Vec<&str> =
+            case.inputs.keys().map(String::as_str).filter(|k| !case.calculator.knows(k)).collect();
         if !unknown.is_empty() {
             return Err(CaseError::Format(format!("unknown input field(s): {}", unknown.join(", "))));
         }
@@ -116,21 +251,7 @@ impl CaseFile {
 
     /// Validates the inputs and runs the calculator.
     pub fn evaluate(&self) -> Result<Report, CaseError> {
-        match self.calculator {
-            Calculator::TubularReactor => {
-                let input = TubularInput::from_source(self).map_err(CaseError::Inputs)?;
-                tubular::evaluate(&input).map_err(CaseError::Numerical)
-            }
-        }
-    }
-}
-
-impl Calculator {
-    /// The quantity and choice fields of this calculator.
-    pub fn fields(self) -> (&'static [FieldSpec], &'static [ChoiceSpec]) {
-        match self {
-            Calculator::TubularReactor => (tubular::FIELDS, &[tubular::OPERATION]),
-        }
+        self.calculator.evaluate(self)
     }
 }
 

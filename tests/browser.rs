@@ -5,7 +5,7 @@
 
 mod support;
 
-use clearbore::case::{CaseFile, TUBULAR_DEMO_JSON};
+use clearbore::case::{Calculator, CaseFile};
 use clearbore::physics::units::format_significant;
 use serde_json::Value;
 use support::Browser;
@@ -13,7 +13,7 @@ use support::Browser;
 /// Label, value and unit of every result row on the page.
 async fn result_rows(b: &Browser) -> Vec<(String, String, String)> {
     let rows = b
-        .js(r#"return Array.from(document.querySelectorAll('[data-testid=results] tr')).map(tr => [
+        .js(r#"return Array.from(document.querySelectorAll('[data-testid=results] > tbody > tr')).map(tr => [
             tr.querySelector('th').textContent.trim(),
             tr.querySelector('td.value').textContent.trim(),
             (tr.querySelector('select.unit') || tr.querySelector('span.unit')).value
@@ -44,25 +44,17 @@ async fn assert_clean(b: &Browser) {
     assert!(!b.exists("[data-testid=boot-error]").await, "boot error shown");
 }
 
-#[tokio::test]
-async fn demo_case_renders_and_matches_the_command_line() {
-    let b = Browser::start().await;
-    b.open_page().await;
-    assert!(b.text("[data-testid=safety-notice]").await.contains("Engineering estimates"));
-    assert!(b.text("[data-testid=case-title]").await.contains("Demo (invented)"));
-
-    // The command line on the same case file; the page must show its numbers, formatted with
-    // the page's default of 4 significant figures in each figure's default unit.
-    let out = std::process::Command::new(env!("CARGO_BIN_EXE_clearbore"))
-        .arg(concat!(env!("CARGO_MANIFEST_DIR"), "/public/cases/tubular-demo.json"))
-        .output()
-        .unwrap();
-    assert!(out.status.success());
+/// Every result row on the page equals the command line's output for the calculator's demo case
+/// file, formatted with the page's default of 4 significant figures in each figure's default unit.
+async fn assert_page_matches_cli(b: &Browser, calculator: Calculator) {
+    let file = format!("{}/public/cases/{}", env!("CARGO_MANIFEST_DIR"), calculator.demo_file());
+    let out = std::process::Command::new(env!("CARGO_BIN_EXE_clearbore")).arg(&file).output().unwrap();
+    assert!(out.status.success(), "{file}: {}", String::from_utf8_lossy(&out.stderr));
     let cli: Value = serde_json::from_slice(&out.stdout).unwrap();
     let figures = cli["report"]["figures"].as_array().unwrap();
     // The library gives each figure's kind of quantity (and so its default unit).
-    let library = CaseFile::from_json(TUBULAR_DEMO_JSON).unwrap().evaluate().unwrap();
-    let rows = result_rows(&b).await;
+    let library = CaseFile::from_json(calculator.demo_json()).unwrap().evaluate().unwrap();
+    let rows = result_rows(b).await;
     assert_eq!(rows.len(), figures.len(), "one row per figure: {rows:?}");
     for (f, (label, value, unit)) in figures.iter().zip(&rows) {
         let u = library.figure(f["key"].as_str().unwrap()).unwrap().dimension.default_unit();
@@ -70,6 +62,22 @@ async fn demo_case_renders_and_matches_the_command_line() {
         assert_eq!(unit, u.symbol, "{label}");
         assert_eq!(value, &format_significant(u.from_si(f["value"].as_f64().unwrap()), 4), "{label}");
     }
+    let checks = cli["report"]["checks"].as_array().unwrap();
+    for c in checks {
+        let key = c["key"].as_str().unwrap();
+        let shown = b.text(&format!("[data-testid=verdict-{key}]")).await.to_lowercase();
+        assert!(shown.contains(c["verdict"].as_str().unwrap()), "{key}: page {shown}, CLI {}", c["verdict"]);
+    }
+}
+
+#[tokio::test]
+async fn demo_case_renders_and_matches_the_command_line() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    assert!(b.text("[data-testid=safety-notice]").await.contains("Engineering estimates"));
+    assert!(b.text("[data-testid=case-title]").await.contains("Demo (invented)"));
+
+    assert_page_matches_cli(&b, Calculator::TubularReactor).await;
     // Hand check of the headline number: V = π (0.76 mm)² / 4 × 10 m = 4.5365 mL; τ = V / 0.5 mL/min.
     assert_eq!(b.text("[data-testid=result-residence_time]").await, "9.073");
     assert!(b.text("[data-testid=verdict-pressure_budget]").await.to_lowercase().contains("fine"));
@@ -123,7 +131,7 @@ async fn edits_update_results_and_units_do_not_change_them() {
     b.text_when("[data-testid=result-residence_time]", |t| t == "272.2").await;
     // Recirculation adds the loop figures: batch 40 + 4.53646 mL = 44.53646 mL, 3 passes at
     // 1 mL/min = 133.6094 min.
-    b.click("[data-testid=option-recirculation]").await;
+    b.click("[data-testid=option-operation-recirculation]").await;
     b.text_when("[data-testid=result-total_time]", |t| t == "133.6").await;
     assert!(b.exists("[data-testid=input-passes]").await);
     // Significant figures apply everywhere.
@@ -148,6 +156,39 @@ async fn over_pressure_is_a_problem_with_its_caution_beside_it() {
     b.type_into("pressure_rating", "6").await;
     b.text_when("[data-testid=verdict-pressure_budget]", |t| t.to_lowercase().contains("caution")).await;
     b.screenshot("over-pressure").await;
+    assert_clean(&b).await;
+    b.close().await;
+}
+
+#[tokio::test]
+async fn packed_cartridge_demo_matches_the_command_line_and_flags_problems() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    b.click("[data-testid=tab-packed_bed]").await;
+    b.wait_for("[data-testid=panel-packed_bed]").await;
+    b.wait_for("[data-testid=spread-bed_pressure_drop]").await;
+    assert_page_matches_cli(&b, Calculator::PackedBed).await;
+    b.screenshot("packed-bed-demo").await;
+
+    // Up-flow through a bed free to rise: 1 mL/min in 6.6 mm is 0.49 mm/s superficial, above
+    // the 0.15 mm/s minimum fluidisation velocity of these beads (figure on the page).
+    b.click("[data-testid=option-flow_direction-up]").await;
+    b.text_when("[data-testid=verdict-bed_lifting]", |t| t.to_lowercase().contains("problem")).await;
+    assert!(b.text("[data-testid=caution-bed_lifting]").await.contains("lifting bed"));
+    // Held between frits, the same flow does not lift it.
+    b.click("[data-testid=option-confinement-confined]").await;
+    b.text_when("[data-testid=verdict-bed_lifting]", |t| !t.to_lowercase().contains("problem")).await;
+
+    // Fines: 2 µm instead of 150 µm raises the bed pressure drop about (150/2)² = 5600-fold
+    // (viscous regime, Ergun), from 0.0075 bar to about 42 bar: past the 20 bar rating.
+    b.type_into("particle_diameter", "2").await;
+    b.text_when("[data-testid=verdict-pressure_budget]", |t| t.to_lowercase().contains("problem")).await;
+    assert!(b.text("[data-testid=caution-pressure_budget]").await.contains("Over-pressure"));
+    b.screenshot("packed-bed-over-pressure").await;
+
+    // The tubular form kept its entries while the other calculator was shown.
+    b.click("[data-testid=tab-tubular_reactor]").await;
+    b.text_when("[data-testid=result-residence_time]", |t| t == "9.073").await;
     assert_clean(&b).await;
     b.close().await;
 }

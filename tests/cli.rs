@@ -71,3 +71,17 @@ fn demo_flag_prints_a_valid_case() {
     let text = String::from_utf8(out.stdout).unwrap();
     assert!(clearbore::case::CaseFile::from_json(&text).unwrap().evaluate().is_ok());
 }
+
+#[test]
+fn packed_bed_demo_evaluates() {
+    let out = run(&[concat!(env!("CARGO_MANIFEST_DIR"), "/public/cases/packed-bed-demo.json")], None);
+    assert!(out.status.success(), "{}", String::from_utf8_lossy(&out.stderr));
+    let v: serde_json::Value = serde_json::from_slice(&out.stdout).unwrap();
+    assert_eq!(v["calculator"], "packed_bed");
+    let dp = v["report"]["figures"].as_array().unwrap().iter().find(|f| f["key"] == "bed_pressure_drop").unwrap();
+    // More than one correlation, exactly one recommended (Ergun).
+    let estimates = dp["estimates"].as_array().unwrap();
+    assert!(estimates.len() > 3);
+    assert_eq!(estimates.iter().filter(|e| e["recommended"] == true).count(), 1);
+    assert_eq!(estimates[0]["model"]["name"], "Ergun");
+}

@@ -34,6 +34,7 @@ fn every_unit_round_trips() {
         Dimension::PressureDifference, Dimension::Pressure, Dimension::Temperature,
         Dimension::SurfaceTension, Dimension::Diffusivity, Dimension::DynamicViscosity,
         Dimension::Density, Dimension::Concentration, Dimension::MolarMass, Dimension::Mass,
+        Dimension::Amount, Dimension::SpecificAmount, Dimension::Frequency,
         Dimension::MassFlow, Dimension::SpaceTimeYield, Dimension::Velocity, Dimension::Fraction,
         Dimension::Number,
     ];

@@ -2,13 +2,17 @@
 
 use leptos::prelude::*;
 
+use super::calculator::CalculatorPanel;
 use super::display::provide_display;
-use super::tubular::TubularPanel;
+use super::workbench::provide_workbench;
+use crate::case::Calculator;
 
 /// The whole page.
 #[component]
 pub fn App() -> impl IntoView {
     let display = provide_display();
+    let bench = provide_workbench();
+    let active = bench.active;
     view! {
         <header>
             <h1>"Clearbore"</h1>
@@ -29,8 +33,28 @@ pub fn App() -> impl IntoView {
             </label>
         </header>
         <SafetyNotice />
+        <nav class="tabs no-print" aria-label="Calculators">
+            {Calculator::ALL
+                .iter()
+                .map(|c| {
+                    let c = *c;
+                    view! {
+                        <button
+                            type="button"
+                            class="tab"
+                            class:active=move || active.get() == c
+                            aria-pressed=move || if active.get() == c { "true" } else { "false" }
+                            data-testid=format!("tab-{}", c.key())
+                            on:click=move |_| active.set(c)
+                        >
+                            {c.title()}
+                        </button>
+                    }
+                })
+                .collect_view()}
+        </nav>
         <main>
-            <TubularPanel />
+            {move || bench.form(active.get()).map(|form| view! { <CalculatorPanel form=form /> })}
         </main>
         <footer>
             <p>{concat!("Clearbore ", env!("CARGO_PKG_VERSION"), " · runs entirely in this browser; nothing is sent anywhere.")}</p>

@@ -5,8 +5,9 @@ use leptos::prelude::*;
 use wasm_bindgen::{JsCast, JsValue};
 use wasm_bindgen_futures::JsFuture;
 
-use super::tubular::TubularForm;
-use crate::case::{CaseFile, TUBULAR_DEMO_JSON};
+use super::calculator::CalculatorForm;
+use super::workbench::use_workbench;
+use crate::case::CaseFile;
 
 /// Offers `json` as a download named `file_name`.
 fn download(file_name: &str, json: &str) -> Result<(), JsValue> {
@@ -33,18 +34,18 @@ async fn read_chosen(input: web_sys::HtmlInputElement) -> Result<String, String>
 
 /// File and print actions for a calculator form, with a status line for their messages.
 #[component]
-pub fn CaseToolbar(form: TubularForm) -> impl IntoView {
+pub fn CaseToolbar(form: CalculatorForm) -> impl IntoView {
     let message = RwSignal::new(String::new());
-    let load_form = form.clone();
+    let bench = use_workbench();
     let on_open = move |ev: leptos::ev::Event| {
         let Some(input) = ev.target().and_then(|t| t.dyn_into::<web_sys::HtmlInputElement>().ok()) else { return };
-        let form = load_form.clone();
+        let Some(bench) = bench.clone() else { return };
         wasm_bindgen_futures::spawn_local(async move {
             let result = read_chosen(input.clone()).await.and_then(|text| CaseFile::from_json(&text).map_err(|e| e.to_string()));
             match result {
                 Ok(case) => {
-                    form.load(&case);
-                    message.set("Case opened.".to_owned());
+                    bench.open(&case);
+                    message.set(format!("Opened a {} case.", case.calculator.title().to_lowercase()));
                 }
                 Err(e) => message.set(format!("Could not open the case: {e}")),
             }
@@ -54,8 +55,8 @@ pub fn CaseToolbar(form: TubularForm) -> impl IntoView {
     };
     let save_form = form.clone();
     let on_save = move |_| match save_form.to_case() {
-        Ok(case) => match download("clearbore-case.json", &case.to_json()) {
-            Ok(()) => message.set("Case saved as clearbore-case.json.".to_owned()),
+        Ok(case) => match download(&format!("clearbore-{}.json", case.calculator.key()), &case.to_json()) {
+            Ok(()) => message.set(format!("Case saved as clearbore-{}.json.", case.calculator.key())),
             Err(_) => message.set("The browser refused the download.".to_owned()),
         },
         Err(errors) => message.set(format!(
@@ -64,7 +65,7 @@ pub fn CaseToolbar(form: TubularForm) -> impl IntoView {
         )),
     };
     let on_demo = move |_| {
-        if let Ok(case) = CaseFile::from_json(TUBULAR_DEMO_JSON) {
+        if let Ok(case) = CaseFile::from_json(form.calculator.demo_json()) {
             form.load(&case);
             message.set("Demo case loaded (an invented scenario).".to_owned());
         }

@@ -2,12 +2,13 @@
 //! returns; none of them computes a formula.
 
 mod app;
+mod calculator;
 mod case_io;
 mod display;
 mod field;
 mod panic_banner;
 mod results;
-mod tubular;
+mod workbench;
 
 use wasm_bindgen::JsValue;
 

@@ -102,7 +102,7 @@ pub const BED_ROLE: ChoiceSpec = ChoiceSpec {
     options: &[("catalyst", "A catalyst (not consumed)"), ("reagent", "A supported reagent or scavenger (consumed)")],
 };
 /// Loading of active groups, mmol per gram of solid.
-pub const LOADING: FieldSpec = field("loading", "Loading (mmol/g)", Dimension::Number, Allowed::POSITIVE, "Active groups per gram of solid, in mmol/g, as supplied or titrated.");
+pub const LOADING: FieldSpec = field("loading", "Loading", Dimension::SpecificAmount, Allowed::POSITIVE, "Active groups per mass of solid, as supplied or titrated.");
 /// Substrate concentration in the feed.
 pub const CONCENTRATION: FieldSpec = field("concentration", "Substrate concentration", Dimension::Concentration, Allowed::POSITIVE, "Substrate that consumes the active groups, in the feed.");
 /// Active groups consumed per substrate.
@@ -244,7 +244,7 @@ impl PackedBedInput {
                 let stoichiometry = c.take(src.quantity(&STOICHIOMETRY));
                 match (loading, concentration, stoichiometry) {
                     (Some(l), Some(cn), Some(s)) => Some(BedRole::Reagent {
-                        loading: SpecificAmount::from_mmol_per_g(l),
+                        loading: SpecificAmount::from_si(l),
                         concentration: Concentration::from_si(cn),
                         stoichiometry: s,
                     }),
@@ -467,9 +467,9 @@ fn lifting_check(input: &PackedBedInput, u_s: Velocity, umf: Option<&Figure>) ->
         topic,
         verdict,
         reason: format!(
-            "Upward superficial velocity {} mm/s is {:.0} % of u_mf = {} mm/s (Wen–Yu; correlations from {} mm/s): {what}.{held}",
+            "Upward superficial velocity {} mm/s is {} times u_mf = {} mm/s (Wen–Yu; correlations from {} mm/s): {what}.{held}",
             mm_s(u),
-            u / recommended * 100.0,
+            format_significant(u / recommended, 2),
             mm_s(recommended),
             mm_s(lowest)
         ),
@@ -657,11 +657,11 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
     }
     let whsv = capacity::weight_hourly_space_velocity(input.flow, input.density, input.solid_mass);
     // Dimension has no reciprocal time yet: shown as a plain number in h⁻¹, said so in the key and label.
-    figures.push(definition("whsv_per_hour", "Weight hourly space velocity (per hour)", Dimension::Number, capacity::WHSV_INFO, whsv.per_hour())?);
+    figures.push(definition("whsv", "Weight hourly space velocity", Dimension::Frequency, capacity::WHSV_INFO, whsv.si())?);
     if let BedRole::Reagent { loading, concentration, stoichiometry } = input.role {
         let n = capacity::active_amount(input.solid_mass, loading);
         // Dimension has no amount of substance yet: shown as a plain number in mol.
-        figures.push(definition("active_amount_mol", "Active groups on the bed (mol)", Dimension::Number, capacity::ACTIVE_AMOUNT_INFO, n.si())?);
+        figures.push(definition("active_amount", "Active groups on the bed", Dimension::Amount, capacity::ACTIVE_AMOUNT_INFO, n.si())?);
         figures.push(definition(
             "consumption_time",
             "Time to consume the bed at this feed",

@@ -63,6 +63,12 @@ pub enum Dimension {
     MolarMass,
     /// Mass (SI: kg).
     Mass,
+    /// Amount of substance (SI: mol).
+    Amount,
+    /// Amount per mass of solid, a loading (SI: mol/kg, numerically mmol/g).
+    SpecificAmount,
+    /// Rates per time such as space velocities (SI: 1/s).
+    Frequency,
     /// Mass flow (SI: kg/s).
     MassFlow,
     /// Mass produced per time per reactor volume (SI: kg s⁻¹ m⁻³).
@@ -141,6 +147,9 @@ const CONCENTRATION: &[Unit] = &[
 ];
 const MOLAR_MASS: &[Unit] = &[Unit::scale("g/mol", 1e-3), Unit::scale("kg/mol", 1.0)];
 const MASS: &[Unit] = &[Unit::scale("g", 1e-3), Unit::scale("mg", 1e-6), Unit::scale("kg", 1.0)];
+const AMOUNT: &[Unit] = &[Unit::scale("mmol", 1e-3), Unit::scale("µmol", 1e-6), Unit::scale("mol", 1.0)];
+const SPECIFIC_AMOUNT: &[Unit] = &[Unit::scale("mmol/g", 1.0), Unit::scale("µmol/g", 1e-3), Unit::scale("mol/kg", 1.0)];
+const FREQUENCY: &[Unit] = &[Unit::scale("1/h", 1.0 / HOUR), Unit::scale("1/min", 1.0 / MINUTE), Unit::scale("1/s", 1.0)];
 const MASS_FLOW: &[Unit] = &[
     Unit::scale("g/h", 1e-3 / HOUR),
     Unit::scale("mg/min", 1e-6 / MINUTE),
@@ -178,6 +187,9 @@ impl Dimension {
             Dimension::Concentration => CONCENTRATION,
             Dimension::MolarMass => MOLAR_MASS,
             Dimension::Mass => MASS,
+            Dimension::Amount => AMOUNT,
+            Dimension::SpecificAmount => SPECIFIC_AMOUNT,
+            Dimension::Frequency => FREQUENCY,
             Dimension::MassFlow => MASS_FLOW,
             Dimension::SpaceTimeYield => SPACE_TIME_YIELD,
             Dimension::Velocity => VELOCITY,
@@ -208,6 +220,9 @@ impl Dimension {
             Dimension::Concentration => "mol/m³",
             Dimension::MolarMass => "kg/mol",
             Dimension::Mass => "kg",
+            Dimension::Amount => "mol",
+            Dimension::SpecificAmount => "mol/kg",
+            Dimension::Frequency => "1/s",
             Dimension::MassFlow => "kg/s",
             Dimension::SpaceTimeYield => "kg/(s·m³)",
             Dimension::Velocity => "m/s",
