@@ -8,5 +8,7 @@ pub mod numeric;
 pub mod packed_bed;
 pub mod pipe_flow;
 pub mod report;
+pub mod settling;
+pub mod slurry;
 pub mod tubular;
 pub mod units;
