@@ -9,6 +9,7 @@ use crate::physics::form::{ChoiceSpec, FieldSource};
 use crate::physics::input::{FieldSpec, InputError};
 use crate::physics::packed_bed::{self as bed, PackedBedInput};
 use crate::physics::report::{NumericalError, Report};
+use crate::physics::slurry::{self, SlurryInput};
 use crate::physics::tubular::{self, TubularInput};
 
 /// The case-file format version this build reads and writes.
@@ -20,6 +21,9 @@ pub const TUBULAR_DEMO_JSON: &str = include_str!("../public/cases/tubular-demo.j
 /// The demo packed-cartridge case (an invented scenario), as shipped in `public/cases/`.
 pub const PACKED_BED_DEMO_JSON: &str = include_str!("../public/cases/packed-bed-demo.json");
 
+/// The demo slurry-line case (an invented scenario), as shipped in `public/cases/`.
+pub const SLURRY_DEMO_JSON: &str = include_str!("../public/cases/slurry-demo.json");
+
 /// Which calculator a case is for.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
 #[serde(rename_all = "snake_case")]
@@ -28,6 +32,8 @@ pub enum Calculator {
     TubularReactor,
     /// Packed cartridge (pressure drop, residence time, capacity, lifting, sizing).
     PackedBed,
+    /// Slurry line (settling, deposition, clogging and pressure at every element).
+    SlurryLine,
 }
 
 /// One entry of a calculator's form, in page order.
@@ -83,15 +89,40 @@ const PACKED_BED_LAYOUT: &[FormItem] = &[
     Field(bed::MAX_PRESSURE_DROP),
 ];
 
+const SLURRY_LAYOUT: &[FormItem] = &[
+    Field(slurry::FLOW),
+    Field(slurry::DENSITY),
+    Field(slurry::VISCOSITY),
+    Field(slurry::PARTICLE_DENSITY),
+    Choice(slurry::SIZE_MODE),
+    Field(slurry::PARTICLE_SIZE),
+    Field(slurry::D10),
+    Field(slurry::D50),
+    Field(slurry::D90),
+    Field(slurry::SPHERICITY),
+    Choice(slurry::LOADING_BASIS),
+    Field(slurry::LOADING),
+    Field(slurry::BACK_PRESSURE),
+    Field(slurry::RATING),
+];
+
+const SLURRY_ELEMENT_LAYOUT: &[FormItem] = &[
+    Choice(slurry::ELEMENT_KIND),
+    Choice(slurry::ELEMENT_ORIENTATION),
+    Field(slurry::ELEMENT_INNER_DIAMETER),
+    Field(slurry::ELEMENT_LENGTH),
+];
+
 impl Calculator {
     /// Every calculator, in page order.
-    pub const ALL: [Calculator; 2] = [Calculator::TubularReactor, Calculator::PackedBed];
+    pub const ALL: [Calculator; 3] = [Calculator::TubularReactor, Calculator::PackedBed, Calculator::SlurryLine];
 
     /// Stable key, as in case files.
     pub const fn key(self) -> &'static str {
         match self {
             Calculator::TubularReactor => "tubular_reactor",
             Calculator::PackedBed => "packed_bed",
+            Calculator::SlurryLine => "slurry_line",
         }
     }
 
@@ -100,6 +131,7 @@ impl Calculator {
         match self {
             Calculator::TubularReactor => "Tubular reactor",
             Calculator::PackedBed => "Packed cartridge",
+            Calculator::SlurryLine => "Slurry line",
         }
     }
 
@@ -114,6 +146,10 @@ impl Calculator {
                 "Back-pressure of a packed bed from several published correlations, residence time between the \
                  particles, how long the bed lasts, whether up-flow lifts it, and the bed that meets a target."
             }
+            Calculator::SlurryLine => {
+                "Whether solids stay suspended, settle or plug at every element of the line, from the pump to the \
+                 back-pressure regulator, the pressure it takes, and what would make a failing element work."
+            }
         }
     }
 
@@ -122,6 +158,15 @@ impl Calculator {
         match self {
             Calculator::TubularReactor => TUBULAR_LAYOUT,
             Calculator::PackedBed => PACKED_BED_LAYOUT,
+            Calculator::SlurryLine => SLURRY_LAYOUT,
+        }
+    }
+
+    /// The form of one element of a line, for calculators that take a list of elements.
+    pub const fn element_layout(self) -> Option<&'static [FormItem]> {
+        match self {
+            Calculator::SlurryLine => Some(SLURRY_ELEMENT_LAYOUT),
+            Calculator::TubularReactor | Calculator::PackedBed => None,
         }
     }
 
@@ -130,6 +175,7 @@ impl Calculator {
         match self {
             Calculator::TubularReactor => TUBULAR_DEMO_JSON,
             Calculator::PackedBed => PACKED_BED_DEMO_JSON,
+            Calculator::SlurryLine => SLURRY_DEMO_JSON,
         }
     }
 
@@ -138,20 +184,23 @@ impl Calculator {
         match self {
             Calculator::TubularReactor => "tubular-demo.json",
             Calculator::PackedBed => "packed-bed-demo.json",
+            Calculator::SlurryLine => "slurry-demo.json",
         }
     }
 
     /// Whether `key` names one of this calculator's fields or choices.
     pub fn knows(self, key: &str) -> bool {
-        self.layout().iter().any(|item| match item {
-            Field(f) => f.key == key,
-            Choice(c) => c.key == key,
-        })
+        layout_has(self.layout(), key)
     }
 
-    /// Validates the inputs from `src` and runs the calculator.
-    pub fn evaluate(self, src: &dyn FieldSource) -> Result<Report, CaseError> {
+    /// Validates the inputs from `src` (and, for a line, one source per element) and runs the
+    /// calculator.
+    pub fn evaluate(self, src: &dyn FieldSource, elements: &[&dyn FieldSource]) -> Result<Report, CaseError> {
         match self {
+            Calculator::SlurryLine => {
+                let input = SlurryInput::from_source(src, elements).map_err(CaseError::Inputs)?;
+                slurry::element::evaluate(&input).map_err(CaseError::Numerical)
+            }
             Calculator::TubularReactor => {
                 let input = TubularInput::from_source(src).map_err(CaseError::Inputs)?;
                 tubular::evaluate(&input).map_err(CaseError::Numerical)
@@ -179,6 +228,16 @@ pub enum Entry {
     Choice(String),
 }
 
+fn layout_has(layout: &[FormItem], key: &str) -> bool {
+    layout.iter().any(|item| match item {
+        Field(f) => f.key == key,
+        Choice(c) => c.key == key,
+    })
+}
+
+/// Field key → entry: the inputs of a case, or of one element of a line.
+pub type Entries = BTreeMap<String, Entry>;
+
 /// A saved case.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 #[serde(deny_unknown_fields)]
@@ -191,7 +250,10 @@ pub struct CaseFile {
     /// The calculator the inputs belong to.
     pub calculator: Calculator,
     /// Field key → entry.
-    pub inputs: BTreeMap<String, Entry>,
+    pub inputs: Entries,
+    /// For a line: the elements in flow order, each field key → entry.
+    #[serde(default, skip_serializing_if = "Vec::is_empty")]
+    pub elements: Vec<Entries>,
 }
 
 /// Why a case could not be evaluated.
@@ -240,6 +302,20 @@ impl CaseFile {
         if !unknown.is_empty() {
             return Err(CaseError::Format(format!("unknown input field(s): {}", unknown.join(", "))));
         }
+        match case.calculator.element_layout() {
+            None if !case.elements.is_empty() => {
+                return Err(CaseError::Format(format!("a {} case has no elements", case.calculator.key())));
+            }
+            Some(layout) => {
+                for (i, e) in case.elements.iter().enumerate() {
+                    let unknown: Vec<&str> = e.keys().map(String::as_str).filter(|k| !layout_has(layout, k)).collect();
+                    if !unknown.is_empty() {
+                        return Err(CaseError::Format(format!("element {}: unknown field(s): {}", i + 1, unknown.join(", "))));
+                    }
+                }
+            }
+            None => {}
+        }
         Ok(case)
     }
 
@@ -251,13 +327,18 @@ impl CaseFile {
 
     /// Validates the inputs and runs the calculator.
     pub fn evaluate(&self) -> Result<Report, CaseError> {
-        self.calculator.evaluate(self)
+        let elements: Vec<EntrySource<'_>> = self.elements.iter().map(EntrySource).collect();
+        let sources: Vec<&dyn FieldSource> = elements.iter().map(|e| e as &dyn FieldSource).collect();
+        self.calculator.evaluate(&EntrySource(&self.inputs), &sources)
     }
 }
 
-impl FieldSource for CaseFile {
+/// Entries read as a source of field values.
+pub struct EntrySource<'a>(pub &'a Entries);
+
+impl FieldSource for EntrySource<'_> {
     fn quantity(&self, spec: &FieldSpec) -> Result<f64, InputError> {
-        match self.inputs.get(spec.key) {
+        match self.0.get(spec.key) {
             Some(Entry::Quantity { value, unit }) => spec.accept(*value, spec.unit(unit)?),
             Some(Entry::Choice(text)) => Err(InputError {
                 field: spec.key,
@@ -275,7 +356,7 @@ impl FieldSource for CaseFile {
     }
 
     fn choice(&self, spec: &ChoiceSpec) -> Result<usize, InputError> {
-        match self.inputs.get(spec.key) {
+        match self.0.get(spec.key) {
             Some(Entry::Choice(key)) => spec.index_of(key),
             Some(Entry::Quantity { value, unit }) => Err(InputError {
                 field: spec.key,

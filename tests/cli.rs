@@ -85,3 +85,33 @@ fn packed_bed_demo_evaluates() {
     assert_eq!(estimates.iter().filter(|e| e["recommended"] == true).count(), 1);
     assert_eq!(estimates[0]["model"]["name"], "Ergun");
 }
+
+#[test]
+fn slurry_demo_has_a_verdict_for_every_element() {
+    let out = run(&[concat!(env!("CARGO_MANIFEST_DIR"), "/public/cases/slurry-demo.json")], None);
+    assert!(out.status.success(), "{}", String::from_utf8_lossy(&out.stderr));
+    let v: serde_json::Value = serde_json::from_slice(&out.stdout).unwrap();
+    assert_eq!(v["calculator"], "slurry_line");
+    let checks = v["report"]["checks"].as_array().unwrap();
+    assert_eq!(checks[0]["key"], "line_verdict");
+    for n in 1..=5 {
+        for what in ["settling", "clogging"] {
+            let key = format!("element_{n}_{what}");
+            assert!(checks.iter().any(|c| c["key"] == key.as_str()), "{key}");
+        }
+    }
+    // The demo's horizontal coil deposits (a problem); the verdict carries the plug caution.
+    let coil = checks.iter().find(|c| c["key"] == "element_3_settling").unwrap();
+    assert_eq!(coil["verdict"], "problem");
+    assert!(coil["caution"].as_str().unwrap().contains("plug"));
+}
+
+#[test]
+fn element_errors_name_the_element() {
+    let demo = std::fs::read_to_string(concat!(env!("CARGO_MANIFEST_DIR"), "/public/cases/slurry-demo.json")).unwrap();
+    let bad = demo.replace("\"inner_diameter\": { \"value\": 0.5, \"unit\": \"mm\" }", "\"inner_diameter\": { \"value\": -0.5, \"unit\": \"mm\" }");
+    let out = run(&["-"], Some(&bad));
+    assert_eq!(out.status.code(), Some(1));
+    let err = String::from_utf8(out.stderr).unwrap();
+    assert!(err.contains("element_2_inner_diameter") && err.contains("-0.5 mm"), "{err}");
+}

@@ -8,39 +8,32 @@ use leptos::prelude::*;
 use super::case_io::CaseToolbar;
 use super::field::{FieldState, QuantityField};
 use super::results::{CheckList, ResultTable};
-use crate::case::{Calculator, CaseError, CaseFile, Entry, FORMAT_VERSION, FormItem};
+use crate::case::{Calculator, CaseError, CaseFile, Entries, Entry, FORMAT_VERSION, FormItem};
 use crate::physics::form::{ChoiceSpec, FieldSource};
 use crate::physics::input::{FieldSpec, InputError};
 use crate::physics::report::Report;
 use crate::physics::units::parse_number;
 
-/// The editable state of one calculator: a state per field, a selected index per choice, a title.
+/// The editable state of one set of entries (a calculator's, or one element's): a state per
+/// field and a selected index per choice.
 #[derive(Debug, Clone, PartialEq)]
-pub struct CalculatorForm {
-    /// Which calculator.
-    pub calculator: Calculator,
+pub struct FormState {
     fields: Vec<(FieldSpec, FieldState)>,
     choices: Vec<(ChoiceSpec, RwSignal<usize>)>,
-    /// Case title.
-    pub title: RwSignal<String>,
 }
 
-impl CalculatorForm {
-    /// An empty form in default units, loaded with the calculator's demo case.
-    pub fn new(calculator: Calculator) -> Self {
+impl FormState {
+    /// Empty entries in default units for `layout`.
+    fn new(layout: &[FormItem]) -> Self {
         let mut fields = Vec::new();
         let mut choices = Vec::new();
-        for item in calculator.layout() {
+        for item in layout {
             match item {
                 FormItem::Field(spec) => fields.push((*spec, FieldState::new("", spec.dimension.default_unit().symbol))),
                 FormItem::Choice(spec) => choices.push((*spec, RwSignal::new(0))),
             }
         }
-        let form = Self { calculator, fields, choices, title: RwSignal::new(String::new()) };
-        if let Ok(demo) = CaseFile::from_json(calculator.demo_json()) {
-            form.load(&demo);
-        }
-        form
+        Self { fields, choices }
     }
 
     fn field(&self, key: &str) -> Option<FieldState> {
@@ -51,12 +44,11 @@ impl CalculatorForm {
         self.choices.iter().find(|(s, _)| s.key == key).map(|(_, sig)| *sig)
     }
 
-    /// Fills the form from a case of this calculator. Entries are shown as written; bad ones
-    /// show their error at the field.
-    pub fn load(&self, case: &CaseFile) {
-        self.title.set(case.title.clone());
+    /// Shows `entries` as written; missing quantities become empty fields (which then show
+    /// their error), missing or unknown choices the first option.
+    fn load(&self, entries: &Entries) {
         for (spec, state) in &self.fields {
-            match case.inputs.get(spec.key) {
+            match entries.get(spec.key) {
                 Some(Entry::Quantity { value, unit }) => {
                     state.text.set(value.to_string());
                     state.unit.set(unit.clone());
@@ -65,25 +57,25 @@ impl CalculatorForm {
             }
         }
         for (spec, selected) in &self.choices {
-            if let Some(Entry::Choice(key)) = case.inputs.get(spec.key) {
-                selected.set(spec.index_of(key).unwrap_or(0));
-            }
+            let index = match entries.get(spec.key) {
+                Some(Entry::Choice(key)) => spec.index_of(key).unwrap_or(0),
+                _ => 0,
+            };
+            selected.set(index);
         }
     }
 
-    /// The case as it stands: every field whose text is a number, with its unit, and every
-    /// choice. Fields that apply and are not numbers are reported instead.
-    pub fn to_case(&self) -> Result<CaseFile, Vec<InputError>> {
-        let applicable = untrack(|| applicable_keys(self));
-        let mut inputs = std::collections::BTreeMap::new();
-        let mut errors = Vec::new();
+    /// The entries as they stand: every field whose text is a number, with its unit, and every
+    /// choice. Fields in `needed` whose text is not a number are reported instead.
+    fn to_entries(&self, needed: &[&'static str], errors: &mut Vec<InputError>) -> Entries {
+        let mut entries = Entries::new();
         for (spec, state) in &self.fields {
             let text = state.text.get_untracked();
             match parse_number(&text) {
                 Ok(value) => {
-                    inputs.insert(spec.key.to_owned(), Entry::Quantity { value, unit: state.unit.get_untracked() });
+                    entries.insert(spec.key.to_owned(), Entry::Quantity { value, unit: state.unit.get_untracked() });
                 }
-                Err(e) if applicable.contains(&spec.key) => errors.push(InputError {
+                Err(e) if needed.contains(&spec.key) => errors.push(InputError {
                     field: spec.key,
                     label: spec.label,
                     given: format!("\"{text}\""),
@@ -94,16 +86,24 @@ impl CalculatorForm {
         }
         for (spec, selected) in &self.choices {
             let key = spec.options.get(selected.get_untracked()).map(|o| o.0).unwrap_or_default();
-            inputs.insert(spec.key.to_owned(), Entry::Choice(key.to_owned()));
+            entries.insert(spec.key.to_owned(), Entry::Choice(key.to_owned()));
         }
-        if !errors.is_empty() {
-            return Err(errors);
-        }
-        Ok(CaseFile { clearbore_case: FORMAT_VERSION, title: self.title.get_untracked(), calculator: self.calculator, inputs })
+        entries
+    }
+
+    /// A copy with fresh signals holding the same entries.
+    fn duplicate(&self) -> Self {
+        let fields = self
+            .fields
+            .iter()
+            .map(|(spec, st)| (*spec, FieldState::new(&st.text.get_untracked(), &st.unit.get_untracked())))
+            .collect();
+        let choices = self.choices.iter().map(|(spec, sel)| (*spec, RwSignal::new(sel.get_untracked()))).collect();
+        Self { fields, choices }
     }
 }
 
-impl FieldSource for CalculatorForm {
+impl FieldSource for FormState {
     fn quantity(&self, spec: &FieldSpec) -> Result<f64, InputError> {
         match self.field(spec.key) {
             Some(state) => state.read(spec),
@@ -116,6 +116,95 @@ impl FieldSource for CalculatorForm {
             Some(selected) => Ok(selected.get()),
             None => Err(InputError { field: spec.key, label: spec.label, given: "(missing)".into(), problem: "no such choice on the page".into() }),
         }
+    }
+}
+
+/// One element of a line on the page: a stable id (for the list) and its entries.
+#[derive(Debug, Clone, PartialEq)]
+pub struct ElementForm {
+    id: u32,
+    state: FormState,
+}
+
+/// The editable state of one calculator: its entries, its line elements if it has any, a title.
+#[derive(Debug, Clone, PartialEq)]
+pub struct CalculatorForm {
+    /// Which calculator.
+    pub calculator: Calculator,
+    main: FormState,
+    elements: RwSignal<Vec<ElementForm>>,
+    next_id: RwSignal<u32>,
+    /// Case title.
+    pub title: RwSignal<String>,
+}
+
+impl CalculatorForm {
+    /// A form loaded with the calculator's demo case.
+    pub fn new(calculator: Calculator) -> Self {
+        let form = Self {
+            calculator,
+            main: FormState::new(calculator.layout()),
+            elements: RwSignal::new(Vec::new()),
+            next_id: RwSignal::new(0),
+            title: RwSignal::new(String::new()),
+        };
+        if let Ok(demo) = CaseFile::from_json(calculator.demo_json()) {
+            form.load(&demo);
+        }
+        form
+    }
+
+    fn new_element(&self, state: FormState) -> ElementForm {
+        let id = self.next_id.get_untracked();
+        self.next_id.set(id + 1);
+        ElementForm { id, state }
+    }
+
+    /// Fills the form from a case of this calculator. Entries are shown as written; bad ones
+    /// show their error at the field.
+    pub fn load(&self, case: &CaseFile) {
+        self.title.set(case.title.clone());
+        self.main.load(&case.inputs);
+        if let Some(layout) = self.calculator.element_layout() {
+            let elements = case
+                .elements
+                .iter()
+                .map(|entries| {
+                    let state = FormState::new(layout);
+                    state.load(entries);
+                    self.new_element(state)
+                })
+                .collect();
+            self.elements.set(elements);
+        }
+    }
+
+    /// The case as it stands. Fields that apply and are not numbers are reported instead.
+    pub fn to_case(&self) -> Result<CaseFile, Vec<InputError>> {
+        let needed = untrack(|| run_watched(self).1);
+        let mut errors = Vec::new();
+        let inputs = self.main.to_entries(&needed, &mut errors);
+        let all: Vec<&'static str> = self
+            .calculator
+            .element_layout()
+            .unwrap_or_default()
+            .iter()
+            .map(|item| match item {
+                FormItem::Field(f) => f.key,
+                FormItem::Choice(c) => c.key,
+            })
+            .collect();
+        let elements = self.elements.get_untracked().iter().map(|e| e.state.to_entries(&all, &mut errors)).collect();
+        if !errors.is_empty() {
+            return Err(errors);
+        }
+        Ok(CaseFile {
+            clearbore_case: FORMAT_VERSION,
+            title: self.title.get_untracked(),
+            calculator: self.calculator,
+            inputs,
+            elements,
+        })
     }
 }
 
@@ -137,16 +226,14 @@ impl FieldSource for Watcher<'_> {
     }
 }
 
-/// Runs the calculator on the form and returns the result and the keys it read.
+/// Runs the calculator on the form and returns the result and the keys of the calculator-level
+/// fields and choices it read (those that apply with the current choices).
 fn run_watched(form: &CalculatorForm) -> (Result<Report, CaseError>, Vec<&'static str>) {
-    let watcher = Watcher { inner: form, asked: RefCell::new(Vec::new()) };
-    let result = form.calculator.evaluate(&watcher);
+    let watcher = Watcher { inner: &form.main, asked: RefCell::new(Vec::new()) };
+    let elements = form.elements.get();
+    let sources: Vec<&dyn FieldSource> = elements.iter().map(|e| &e.state as &dyn FieldSource).collect();
+    let result = form.calculator.evaluate(&watcher, &sources);
     (result, watcher.asked.into_inner())
-}
-
-/// The keys of the fields and choices that apply with the current choices.
-fn applicable_keys(form: &CalculatorForm) -> Vec<&'static str> {
-    run_watched(form).1
 }
 
 /// What the results area shows: the latest valid report and whether the entries changed since.
@@ -188,10 +275,10 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                 .iter()
                 .filter_map(|item| match item {
                     FormItem::Field(spec) if keys.contains(&spec.key) => {
-                        form.field(spec.key).map(|state| view! { <QuantityField spec=*spec state=state /> }.into_any())
+                        form.main.field(spec.key).map(|state| view! { <QuantityField spec=*spec state=state /> }.into_any())
                     }
                     FormItem::Choice(spec) if keys.contains(&spec.key) => {
-                        form.choice_signal(spec.key).map(|selected| view! { <ChoicePicker spec=*spec selected=selected /> }.into_any())
+                        form.main.choice_signal(spec.key).map(|selected| view! { <ChoicePicker spec=*spec selected=selected /> }.into_any())
                     }
                     _ => None,
                 })
@@ -205,7 +292,10 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
             <CaseToolbar form=form.clone() />
             <p class="case-title" data-testid="case-title">{move || form.title.get()}</p>
             <div class="columns">
-                <form class="inputs" on:submit=|ev| ev.prevent_default()>{inputs}</form>
+                <form class="inputs" on:submit=|ev| ev.prevent_default()>
+                    {inputs}
+                    {calculator.element_layout().map(|_| view! { <ElementList form=form.clone() /> })}
+                </form>
                 <div class="outputs">
                     {move || outcome.with(|o| o.stale).then(|| view! {
                         <p class="stale" role="status" data-testid="stale-notice">
@@ -252,5 +342,84 @@ fn ChoicePicker(spec: ChoiceSpec, selected: RwSignal<usize>) -> impl IntoView {
                 })
                 .collect_view()}
         </fieldset>
+    }
+}
+
+/// The elements of a line in flow order: each with its kind, orientation, bore and length, and
+/// buttons to move it up, remove it, or add one after the last.
+#[component]
+fn ElementList(form: CalculatorForm) -> impl IntoView {
+    let elements = form.elements;
+    let add = {
+        let form = form.clone();
+        move |_| {
+            let last = form.elements.with_untracked(|e| e.last().map(|e| e.state.duplicate()));
+            let state = last.unwrap_or_else(|| FormState::new(form.calculator.element_layout().unwrap_or_default()));
+            let element = form.new_element(state);
+            form.elements.update(|e| e.push(element));
+        }
+    };
+    let rows = move || {
+        elements
+            .get()
+            .into_iter()
+            .enumerate()
+            .map(|(i, element)| {
+                let id = element.id;
+                let n = i + 1;
+                let remove = move |_| elements.update(|e| e.retain(|x| x.id != id));
+                let raise = move |_| {
+                    elements.update(|e| {
+                        if let Some(p) = e.iter().position(|x| x.id == id).filter(|p| *p > 0) {
+                            e.swap(p, p - 1);
+                        }
+                    })
+                };
+                let items = element.state.clone();
+                view! {
+                    <li class="element" data-testid=format!("element-{n}")>
+                        <div class="element-head">
+                            <strong>{format!("{n}.")}</strong>
+                            {items.choices.iter().map(|(spec, sel)| view! {
+                                <ChoiceSelect spec=*spec selected=*sel name=format!("element_{n}_{}", spec.key) />
+                            }).collect_view()}
+                            <button type="button" class="small" title="Move up" aria-label=format!("Move element {n} up") on:click=raise disabled=n == 1>"↑"</button>
+                            <button type="button" class="small" title="Remove" aria-label=format!("Remove element {n}") data-testid=format!("remove-element-{n}") on:click=remove>"✕"</button>
+                        </div>
+                        <div class="element-fields">
+                            {items.fields.iter().map(|(spec, st)| view! {
+                                <QuantityField spec=*spec state=*st name=format!("element_{n}_{}", spec.key) />
+                            }).collect_view()}
+                        </div>
+                    </li>
+                }
+            })
+            .collect_view()
+    };
+    view! {
+        <fieldset class="elements">
+            <legend>"Line elements, in flow order"</legend>
+            <ol class="element-list">{rows}</ol>
+            <button type="button" data-testid="add-element" on:click=add>"Add element"</button>
+        </fieldset>
+    }
+}
+
+/// A drop-down for a choice field (compact, for element rows). `name` keys its test id.
+#[component]
+fn ChoiceSelect(spec: ChoiceSpec, selected: RwSignal<usize>, name: String) -> impl IntoView {
+    view! {
+        <select
+            aria-label=spec.label
+            data-testid=format!("choice-{name}")
+            prop:value=move || selected.get().to_string()
+            on:change:target=move |ev| {
+                if let Ok(i) = ev.target().value().parse() {
+                    selected.set(i);
+                }
+            }
+        >
+            {spec.options.iter().enumerate().map(|(i, (_, label))| view! { <option value=i.to_string()>{*label}</option> }).collect_view()}
+        </select>
     }
 }

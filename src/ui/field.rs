@@ -34,12 +34,16 @@ fn plain(value: f64) -> String {
     if s.contains('.') && !s.contains('e') { s.trim_end_matches('0').trim_end_matches('.').to_owned() } else { s }
 }
 
-/// One input row. `spec` fixes label, units and allowed range; `state` holds text and unit.
-/// Changing the unit converts a valid entry so the physical value stays the same.
+/// One input row. `spec` fixes label, units and allowed range; `state` holds text and unit;
+/// `name` (default: the field's key) names the element ids and test ids, so that repeated
+/// fields (line elements) stay distinct. Changing the unit converts a valid entry so the
+/// physical value stays the same.
 #[component]
-pub fn QuantityField(spec: FieldSpec, state: FieldState) -> impl IntoView {
+pub fn QuantityField(spec: FieldSpec, state: FieldState, #[prop(optional, into)] name: Option<String>) -> impl IntoView {
     let error = Memo::new(move |_| state.read(&spec).err());
-    let id = format!("in-{}", spec.key);
+    let name = name.unwrap_or_else(|| spec.key.to_owned());
+    let id = format!("in-{name}");
+    let error_id = format!("error-{name}");
     let units = spec.dimension.units();
     let on_unit = move |new_symbol: String| {
         let old = unit_by_symbol(spec.dimension, &state.unit.get_untracked());
@@ -52,7 +56,7 @@ pub fn QuantityField(spec: FieldSpec, state: FieldState) -> impl IntoView {
     let unit_picker = (units.len() > 1).then(|| {
         view! {
             <select
-                data-testid=format!("unit-{}", spec.key)
+                data-testid=format!("unit-{name}")
                 aria-label=format!("{} unit", spec.label)
                 prop:value=move || state.unit.get()
                 on:change:target=move |ev| on_unit(ev.target().value())
@@ -65,7 +69,7 @@ pub fn QuantityField(spec: FieldSpec, state: FieldState) -> impl IntoView {
         }
     });
     view! {
-        <div class="field" class:invalid=move || error.with(Option::is_some) data-testid=format!("field-{}", spec.key)>
+        <div class="field" class:invalid=move || error.with(Option::is_some) data-testid=format!("field-{name}")>
             <label for=id.clone()>{spec.label}</label>
             <div class="entry">
                 <input
@@ -73,7 +77,7 @@ pub fn QuantityField(spec: FieldSpec, state: FieldState) -> impl IntoView {
                     type="text"
                     inputmode="decimal"
                     autocomplete="off"
-                    data-testid=format!("input-{}", spec.key)
+                    data-testid=format!("input-{name}")
                     aria-invalid=move || if error.with(Option::is_some) { "true" } else { "false" }
                     prop:value=move || state.text.get()
                     on:input:target=move |ev| state.text.set(ev.target().value())
@@ -86,7 +90,7 @@ pub fn QuantityField(spec: FieldSpec, state: FieldState) -> impl IntoView {
                     .get()
                     .map(|e| {
                         view! {
-                            <p class="field-error" role="alert" data-testid=format!("error-{}", spec.key)>
+                            <p class="field-error" role="alert" data-testid=error_id.clone()>
                                 {format!("{}: {}", e.given, e.problem)}
                             </p>
                         }

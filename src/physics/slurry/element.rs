@@ -64,7 +64,8 @@ Hartman et al., Org. Process Res. Dev. 2010, 14, 1347, abstract).";
 
 const PLUG_CAUTION: &str = "A plug here stops the flow while a positive-displacement pump keeps pushing: the pressure \
 rises to the pump limit or until the weakest part fails, spraying hot, possibly toxic liquid. \
-Set a pump pressure limit or relief, watch the pressure trend, and keep a flush and bypass ready.";
+Set a pump pressure limit or relief, watch the pressure trend, keep a flush and bypass ready, \
+and follow local codes and institutional rules.";
 
 const OVER_PRESSURE_CAUTION: &str = "Over-pressure can burst tubing or blow a fitting apart and spray hot, possibly toxic liquid. \
 Stay below the lowest-rated component (tubing rating falls with temperature), use a pump \
@@ -194,12 +195,15 @@ fn horizontal(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<
     }
     let d_c = shields::critical_bore(mu, q, dr, line.largest.si());
     let ratio_c = d_c / line.largest.si();
-    reason.push_str(&format!(
-        " a bore of {} mm or less at this flow moves a settled layer (passage ratio {} for d90{});",
-        format_significant(d_c * 1e3, 3),
-        format_significant(ratio_c, 3),
-        if ratio_c < clogging::MARGIN_RATIO { ", too small against clogging" } else { "" }
-    ));
+    // A narrower bore only helps if it is narrower than the one there.
+    if d_c < e.inner_diameter.si() {
+        reason.push_str(&format!(
+            " a bore of {} mm or less at this flow moves a settled layer (passage ratio {} for d90{});",
+            format_significant(d_c * 1e3, 3),
+            format_significant(ratio_c, 3),
+            if ratio_c < clogging::MARGIN_RATIO { ", too small against clogging" } else { "" }
+        ));
+    }
     reason.push_str(&if u > UPFLOW_MARGIN * v90 {
         format!(" routed vertically with up-flow the particles would be carried (U = {} × v_h);", format_significant(u / v90, 3))
     } else {
@@ -377,7 +381,9 @@ fn element(line: &Line, i: usize, e: &LineElement, figures: &mut Vec<Figure>, ch
     if matches!(e.kind, ElementKind::Tubing | ElementKind::Coil) && line.drift != Drift::Neutral {
         figures.push(deposition_reference(line, i, e, re_pipe)?);
     }
-    checks.push(Check { key: keys::SETTLING[i].key, topic: keys::SETTLING[i].label, verdict: settling, reason, caution: None });
+    // Deposits grow into plugs: a settling problem carries the same caution as a clogging one.
+    let caution = (settling == Verdict::Problem).then(|| PLUG_CAUTION.to_owned());
+    checks.push(Check { key: keys::SETTLING[i].key, topic: keys::SETTLING[i].label, verdict: settling, reason, caution });
     let clogging = clogging_check(line, i, e, figures, checks)?;
     Ok(ElementResult { settling, clogging })
 }
@@ -537,7 +543,8 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
         .map(|(i, r)| format!("element {} ({}, {})", i + 1, input.elements[i].kind.word(), r.settling.max(r.clogging).word()))
         .collect();
     let verdict = checks.iter().map(|c| c.verdict).max().unwrap_or(Verdict::Fine);
-    checks.push(Check {
+    // The line verdict first: it is what the user reads before the per-element detail.
+    checks.insert(0, Check {
         key: "line_verdict",
         topic: "Line verdict",
         verdict,
@@ -546,7 +553,7 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
         } else {
             format!("Look at {}; overall {}.", worst.join(", "), verdict.word())
         },
-        caution: None,
+        caution: (verdict == Verdict::Problem).then(|| PLUG_CAUTION.to_owned()),
     });
     Ok(Report { figures, checks })
 }
