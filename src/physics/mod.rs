@@ -3,11 +3,14 @@
 
 pub mod fluids;
 pub mod form;
+pub mod gases;
 pub mod input;
 pub mod numeric;
+pub mod ode;
 pub mod packed_bed;
 pub mod pipe_flow;
 pub mod report;
+pub mod segmented_flow;
 pub mod settling;
 pub mod slurry;
 pub mod tubular;

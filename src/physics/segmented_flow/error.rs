@@ -1,0 +1,72 @@
+//! Why a segmented-flow calculation could not give a number: reported as such, never as NaN.
+
+use serde::Serialize;
+
+use crate::physics::fluids::PropertyError;
+use crate::physics::numeric::RootError;
+use crate::physics::ode::OdeError;
+use crate::physics::report::NumericalError;
+
+/// A numerical failure in the segmented-flow physics.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+#[serde(tag = "kind", rename_all = "snake_case")]
+pub enum SegmentedFlowError {
+    /// A fixed-point iteration did not settle.
+    NoConvergence {
+        /// What was iterated.
+        quantity: &'static str,
+        /// Iterations made.
+        iterations: u32,
+    },
+    /// The pressure profile could not be integrated.
+    Profile(OdeError),
+    /// A root could not be found.
+    Root(RootError),
+    /// A result was not a finite number.
+    Numerical(NumericalError),
+    /// A solvent property had no physical value at this temperature.
+    Property(PropertyError),
+    /// The gas is used up before the outlet: the consumption exceeds the feed.
+    GasExhausted,
+}
+
+impl std::fmt::Display for SegmentedFlowError {
+    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        match self {
+            SegmentedFlowError::NoConvergence { quantity, iterations } => {
+                write!(f, "{quantity} did not converge in {iterations} iterations")
+            }
+            SegmentedFlowError::Profile(e) => write!(f, "pressure profile: {e}"),
+            SegmentedFlowError::Root(e) => write!(f, "root finding: {e}"),
+            SegmentedFlowError::Numerical(e) => e.fmt(f),
+            SegmentedFlowError::Property(e) => e.fmt(f),
+            SegmentedFlowError::GasExhausted => f.write_str("all gas is consumed before the outlet: segmented flow ends inside the coil"),
+        }
+    }
+}
+
+impl std::error::Error for SegmentedFlowError {}
+
+impl From<OdeError> for SegmentedFlowError {
+    fn from(e: OdeError) -> Self {
+        SegmentedFlowError::Profile(e)
+    }
+}
+
+impl From<RootError> for SegmentedFlowError {
+    fn from(e: RootError) -> Self {
+        SegmentedFlowError::Root(e)
+    }
+}
+
+impl From<NumericalError> for SegmentedFlowError {
+    fn from(e: NumericalError) -> Self {
+        SegmentedFlowError::Numerical(e)
+    }
+}
+
+impl From<PropertyError> for SegmentedFlowError {
+    fn from(e: PropertyError) -> Self {
+        SegmentedFlowError::Property(e)
+    }
+}

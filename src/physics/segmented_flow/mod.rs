@@ -1,0 +1,793 @@
+//! Gas–liquid segmented (Taylor) flow in a coil: gas bookkeeping from a reference-state flow,
+//! regime, film, bubble velocity, bubble and slug lengths, interfacial area and k_L a with their
+//! spreads, saturation against residence time, and the pressure profile with the gas expanding
+//! towards the back-pressure regulator; checks on regime, pressure rating, boiling and gas hazards.
+
+pub mod akbar;
+pub mod aussillous_quere;
+pub mod bercic_pintar;
+pub mod bretherton;
+pub mod bubble_velocity;
+pub mod cell;
+pub mod confinement;
+pub mod error;
+pub mod flow;
+pub mod garstecki;
+pub mod kreutzer;
+pub mod lengths;
+pub mod liu;
+pub mod mass_transfer;
+pub mod pressure_profile;
+pub mod qian_lawal;
+pub mod quantities;
+pub mod van_baten_krishna;
+pub mod van_steijn;
+pub mod vandu;
+pub mod yue;
+
+pub use error::SegmentedFlowError;
+pub use pressure_profile::{Coil, GasExpansion, PressureDropModel, Profile};
+
+use serde::Serialize;
+
+use self::cell::UnitCell;
+use self::flow::{CAPILLARY_BUBBLE, range_warnings};
+use super::fluids::{self, Liquid, Solvent};
+use super::form::{ChoiceSpec, Collector, FieldSource};
+use super::gases::reference_state::{self, GAS_CONSTANT};
+use super::gases::{Gas, HenrySolubility, MolarFlow, ReferenceFlow, ReferenceState, henry, sutherland, wilke_chang};
+use super::input::{Allowed, FieldSpec, InputError};
+use super::report::{Check, Estimate, Figure, Finite, ModelInfo, RangeWarning, Report, Verdict};
+use super::units::{
+    Concentration, Diffusivity, Dimension, DynamicViscosity, Length, MolarMass, Pressure, PressureDifference,
+    STANDARD_ATMOSPHERE, Temperature, VolumetricFlow, format_significant,
+};
+
+const fn field(key: &'static str, label: &'static str, dimension: Dimension, allowed: Allowed, help: &'static str) -> FieldSpec {
+    FieldSpec { key, label, dimension, allowed, help }
+}
+
+const NON_NEGATIVE: Allowed = Allowed { low: 0.0, low_inclusive: true, high: None, high_inclusive: false, whole: false };
+const BELOW_ONE: Allowed = Allowed { low: 0.0, low_inclusive: true, high: Some(1.0), high_inclusive: false, whole: false };
+
+/// The gas.
+pub const GAS: ChoiceSpec = ChoiceSpec {
+    key: "gas",
+    label: "Gas",
+    options: &[
+        ("oxygen", "Oxygen (O₂)"),
+        ("hydrogen", "Hydrogen (H₂)"),
+        ("nitrogen", "Nitrogen (N₂)"),
+        ("carbon_monoxide", "Carbon monoxide (CO)"),
+        ("carbon_dioxide", "Carbon dioxide (CO₂)"),
+        ("air", "Air (20.95 % O₂)"),
+    ],
+};
+/// Mole fraction of the named gas in the feed, the rest nitrogen (not read for air and nitrogen).
+pub const GAS_MOLE_FRACTION: FieldSpec = field("gas_mole_fraction", "Gas in the feed (rest N₂)", Dimension::Fraction, Allowed::UNIT_FRACTION, "Mole fraction of the named gas in the cylinder or mixture, the balance nitrogen (e.g. 9 % O₂ in N₂); 100 % for the pure gas.");
+/// Gas flow at the reference state.
+pub const GAS_FLOW: FieldSpec = field("gas_flow", "Gas flow at the reference state", Dimension::VolumetricFlow, Allowed::POSITIVE, "Reading of the mass-flow controller, in volume per time at its reference state (choose the state below).");
+/// Reference state of the gas flow.
+pub const REFERENCE_STATE: ChoiceSpec = ChoiceSpec {
+    key: "reference_state",
+    label: "Reference state of the gas flow",
+    options: &[
+        ("normal", "0 °C, 1 atm (normal, mLn/min; most sccm)"),
+        ("standard_20c", "20 °C, 1 atm (standard, mLs/min)"),
+        ("satp", "25 °C, 1 bar (SATP)"),
+        ("user_defined", "Other (enter temperature and pressure)"),
+    ],
+};
+/// User-defined reference temperature.
+pub const REFERENCE_TEMPERATURE: FieldSpec = field("reference_temperature", "Reference temperature", Dimension::Temperature, Allowed::POSITIVE, "Temperature the flow reading refers to (see the instrument's manual).");
+/// User-defined reference pressure (absolute).
+pub const REFERENCE_PRESSURE: FieldSpec = field("reference_pressure", "Reference pressure (absolute)", Dimension::Pressure, Allowed::POSITIVE, "Absolute pressure the flow reading refers to.");
+/// Liquid flow.
+pub const LIQUID_FLOW: FieldSpec = field("liquid_flow", "Liquid flow", Dimension::VolumetricFlow, Allowed::POSITIVE, "Total liquid pumped into the gas–liquid junction.");
+/// Substrate concentration in the liquid.
+pub const CONCENTRATION: FieldSpec = field("concentration", "Substrate concentration", Dimension::Concentration, Allowed::POSITIVE, "Substrate that consumes the gas, in the liquid after mixing.");
+/// Tube bore.
+pub const INNER_DIAMETER: FieldSpec = field("inner_diameter", "Tube inner diameter", Dimension::Length, Allowed::POSITIVE, "Bore of the coil; the junction is taken to have the same bore.");
+/// Coil length.
+pub const LENGTH: FieldSpec = field("length", "Coil length", Dimension::Length, Allowed::POSITIVE, "From the gas–liquid junction to the back-pressure regulator.");
+/// Temperature.
+pub const TEMPERATURE: FieldSpec = field("temperature", "Temperature", Dimension::Temperature, Allowed::POSITIVE, "Temperature of the coil (taken as uniform).");
+/// Back-pressure regulator set point (gauge).
+pub const BACK_PRESSURE: FieldSpec = field("back_pressure", "Back-pressure (gauge)", Dimension::PressureDifference, NON_NEGATIVE, "Set point of the back-pressure regulator, above atmosphere (taken as 1 atm); 0 if none.");
+/// Lowest component rating (gauge).
+pub const RATING: FieldSpec = field("pressure_rating", "Lowest component rating (gauge)", Dimension::PressureDifference, Allowed::POSITIVE, "Lowest working-pressure rating among tubing at temperature, fittings, mixer, regulator and sensors.");
+/// The liquid.
+pub const SOLVENT: ChoiceSpec = ChoiceSpec {
+    key: "solvent",
+    label: "Liquid",
+    options: &[
+        ("water", "Water"),
+        ("methanol", "Methanol"),
+        ("ethanol", "Ethanol"),
+        ("two_propanol", "2-Propanol"),
+        ("acetonitrile", "Acetonitrile"),
+        ("acetone", "Acetone"),
+        ("thf", "THF"),
+        ("me_thf", "2-MeTHF"),
+        ("ethyl_acetate", "Ethyl acetate"),
+        ("toluene", "Toluene"),
+        ("heptane", "n-Heptane"),
+        ("dichloromethane", "Dichloromethane"),
+        ("dmf", "DMF"),
+        ("dmso", "DMSO"),
+        ("nmp", "NMP"),
+        ("custom", "Other liquid (enter its properties)"),
+    ],
+};
+/// Where the gas solubility comes from for a built-in solvent.
+pub const SOLUBILITY_SOURCE: ChoiceSpec = ChoiceSpec {
+    key: "solubility_source",
+    label: "Gas solubility",
+    options: &[("built_in", "Built-in (water: Sander 2023; organics: order of magnitude)"), ("entered", "Enter a measured value")],
+};
+/// Entered solubility: concentration at 1 bar partial pressure of the gas.
+pub const SOLUBILITY: FieldSpec = field("solubility", "Gas solubility at 1 bar of the gas", Dimension::Concentration, Allowed::POSITIVE, "Dissolved concentration at saturation under 1 bar partial pressure of the gas, at the working temperature.");
+/// Entered diffusivity of the gas in a custom liquid.
+pub const DIFFUSIVITY: FieldSpec = field("diffusivity", "Gas diffusivity in the liquid", Dimension::Diffusivity, Allowed::POSITIVE, "Diffusion coefficient of the dissolved gas (typically 1–10 × 10⁻⁵ cm²/s).");
+/// Whether gas is consumed in the coil.
+pub const CONSUMPTION: ChoiceSpec = ChoiceSpec {
+    key: "consumption",
+    label: "Gas consumption in the coil",
+    options: &[("none", "None (gas passes through)"), ("consumed", "Part of the gas is consumed")],
+};
+/// Share of the fed reactive gas consumed in the coil.
+pub const CONSUMED_FRACTION: FieldSpec = field("consumed_fraction", "Share of the gas consumed in the coil", Dimension::Fraction, BELOW_ONE, "Fraction of the fed gas taken up by reaction or dissolution between junction and regulator, spread evenly along the coil.");
+
+/// Every quantity field, in page order.
+pub const FIELDS: &[FieldSpec] = &[
+    GAS_MOLE_FRACTION, GAS_FLOW, REFERENCE_TEMPERATURE, REFERENCE_PRESSURE, LIQUID_FLOW, CONCENTRATION, INNER_DIAMETER,
+    LENGTH, TEMPERATURE, BACK_PRESSURE, RATING, fluids::CUSTOM_DENSITY, fluids::CUSTOM_VISCOSITY,
+    fluids::CUSTOM_SURFACE_TENSION, SOLUBILITY, DIFFUSIVITY, CONSUMED_FRACTION,
+];
+
+/// Every choice field, in page order.
+pub const CHOICES: &[ChoiceSpec] = &[GAS, REFERENCE_STATE, SOLVENT, SOLUBILITY_SOURCE, CONSUMPTION];
+
+/// The liquid and where its gas data come from.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+#[serde(tag = "kind", rename_all = "snake_case")]
+pub enum LiquidSpec {
+    /// A built-in solvent, properties at the working temperature.
+    Solvent {
+        /// The solvent.
+        solvent: Solvent,
+        /// Entered solubility at 1 bar of the gas, if not built-in.
+        solubility: Option<Concentration>,
+    },
+    /// A liquid with entered properties.
+    Custom {
+        /// Density, viscosity, surface tension.
+        liquid: Liquid,
+        /// Gas diffusivity in it.
+        diffusivity: Diffusivity,
+        /// Solubility at 1 bar of the gas.
+        solubility: Concentration,
+    },
+}
+
+/// Validated inputs of the segmented-flow calculator.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct SegmentedFlowInput {
+    /// The gas.
+    pub gas: Gas,
+    /// Mole fraction of the gas in the feed, the rest nitrogen (air: its O₂ fraction is built in).
+    pub gas_mole_fraction: f64,
+    /// Gas flow with its reference state.
+    pub gas_flow: ReferenceFlow,
+    /// Liquid flow.
+    pub liquid_flow: VolumetricFlow,
+    /// Substrate concentration in the liquid.
+    pub concentration: Concentration,
+    /// Tube bore.
+    pub inner_diameter: Length,
+    /// Coil length.
+    pub length: Length,
+    /// Temperature.
+    pub temperature: Temperature,
+    /// Back-pressure set point, gauge.
+    pub back_pressure: PressureDifference,
+    /// Lowest component rating, gauge.
+    pub rating: PressureDifference,
+    /// The liquid.
+    pub liquid: LiquidSpec,
+    /// Share of the fed reactive gas consumed in the coil, in [0, 1).
+    pub consumed_fraction: f64,
+}
+
+fn gas_of(index: usize) -> Gas {
+    Gas::ALL.get(index).copied().unwrap_or(Gas::Air)
+}
+
+impl SegmentedFlowInput {
+    /// Builds validated inputs from a source, reporting every bad field at once. Fields that the
+    /// choices make irrelevant are not read.
+    pub fn from_source(src: &dyn FieldSource) -> Result<Self, Vec<InputError>> {
+        let mut c = Collector::default();
+        let gas = c.take(src.choice(&GAS)).map(gas_of);
+        let gas_mole_fraction = match gas {
+            Some(Gas::Air | Gas::Nitrogen) => Some(1.0),
+            Some(_) => c.take(src.quantity(&GAS_MOLE_FRACTION)),
+            None => None,
+        };
+        let flow = c.take(src.quantity(&GAS_FLOW));
+        let state = match c.take(src.choice(&REFERENCE_STATE)) {
+            Some(3) => {
+                let t = c.take(src.quantity(&REFERENCE_TEMPERATURE));
+                let p = c.take(src.quantity(&REFERENCE_PRESSURE));
+                match (t, p) {
+                    (Some(t), Some(p)) => Some(ReferenceState::UserDefined { temperature: Temperature::from_si(t), pressure: Pressure::from_si(p) }),
+                    _ => None,
+                }
+            }
+            Some(i) => ReferenceState::BUILT_IN.get(i).copied(),
+            None => None,
+        };
+        let liquid_flow = c.take(src.quantity(&LIQUID_FLOW));
+        let concentration = c.take(src.quantity(&CONCENTRATION));
+        let inner_diameter = c.take(src.quantity(&INNER_DIAMETER));
+        let length = c.take(src.quantity(&LENGTH));
+        let temperature = c.take(src.quantity(&TEMPERATURE));
+        let back_pressure = c.take(src.quantity(&BACK_PRESSURE));
+        let rating = c.take(src.quantity(&RATING));
+        let liquid = match c.take(src.choice(&SOLVENT)) {
+            Some(i) if i < Solvent::ALL.len() => {
+                let solubility = match c.take(src.choice(&SOLUBILITY_SOURCE)) {
+                    Some(0) => Some(None),
+                    Some(_) => c.take(src.quantity(&SOLUBILITY)).map(|s| Some(Concentration::from_si(s))),
+                    None => None,
+                };
+                solubility.map(|solubility| LiquidSpec::Solvent { solvent: Solvent::ALL[i], solubility })
+            }
+            Some(_) => {
+                let rho = c.take(src.quantity(&fluids::CUSTOM_DENSITY));
+                let mu = c.take(src.quantity(&fluids::CUSTOM_VISCOSITY));
+                let sigma = c.take(src.quantity(&fluids::CUSTOM_SURFACE_TENSION));
+                let dm = c.take(src.quantity(&DIFFUSIVITY));
+                let s = c.take(src.quantity(&SOLUBILITY));
+                match (rho, mu, sigma, dm, s) {
+                    (Some(rho), Some(mu), Some(sigma), Some(dm), Some(s)) => c
+                        .take(Liquid::custom(
+                            super::units::Density::from_si(rho),
+                            DynamicViscosity::from_si(mu),
+                            super::units::SurfaceTension::from_si(sigma),
+                            None,
+                        ))
+                        .map(|liquid| LiquidSpec::Custom { liquid, diffusivity: Diffusivity::from_si(dm), solubility: Concentration::from_si(s) }),
+                    _ => None,
+                }
+            }
+            None => None,
+        };
+        let consumed_fraction = match c.take(src.choice(&CONSUMPTION)) {
+            Some(0) => Some(0.0),
+            Some(_) => c.take(src.quantity(&CONSUMED_FRACTION)),
+            None => None,
+        };
+        let (Some(gas), Some(y), Some(flow), Some(state), Some(ql), Some(cn), Some(d), Some(l), Some(t), Some(bp), Some(rating), Some(liquid), Some(consumed)) = (
+            gas, gas_mole_fraction, flow, state, liquid_flow, concentration, inner_diameter, length, temperature, back_pressure, rating,
+            liquid, consumed_fraction,
+        ) else {
+            return Err(c.into_errors());
+        };
+        Ok(Self {
+            gas,
+            gas_mole_fraction: y,
+            gas_flow: ReferenceFlow { flow: VolumetricFlow::from_si(flow), state },
+            liquid_flow: VolumetricFlow::from_si(ql),
+            concentration: Concentration::from_si(cn),
+            inner_diameter: Length::from_si(d),
+            length: Length::from_si(l),
+            temperature: Temperature::from_si(t),
+            back_pressure: PressureDifference::from_si(bp),
+            rating: PressureDifference::from_si(rating),
+            liquid,
+            consumed_fraction: consumed,
+        })
+    }
+
+    /// The dissolving, reacting species and its mole fraction in the feed.
+    pub fn reactive(&self) -> (Gas, f64) {
+        match self.gas {
+            Gas::Air => Gas::Air.reactive_component(),
+            g => (g, self.gas_mole_fraction),
+        }
+    }
+
+    /// Molar mass and viscosity of the feed: the gas's own for air and pure gases; for a mixture
+    /// with nitrogen, mole-fraction averages (a simple rule; both enter only weakly, through the
+    /// gas density and the gas Reynolds number of one k_L a correlation).
+    fn feed_properties(&self) -> (MolarMass, DynamicViscosity, Vec<RangeWarning>) {
+        let t = self.temperature;
+        let own = self.gas.viscosity(t);
+        let y = self.gas_mole_fraction;
+        if self.gas == Gas::Air || y >= 1.0 {
+            return (self.gas.molar_mass(), own.value, own.warnings);
+        }
+        let n2 = Gas::Nitrogen;
+        let m = MolarMass::from_si(y * self.gas.molar_mass().si() + (1.0 - y) * n2.molar_mass().si());
+        let mu = DynamicViscosity::from_si(y * own.value.si() + (1.0 - y) * n2.viscosity(t).value.si());
+        (m, mu, own.warnings)
+    }
+}
+
+/// Fraction of the rating above which the pressure budget is a caution (common practice, no
+/// source: a 20 % margin for pressure pulsation, partial blockage and gauge error).
+pub const PRESSURE_MARGIN: f64 = 0.8;
+
+/// Limiting oxygen concentration taken for common flammable solvents with N₂ diluent at ambient
+/// conditions: ~10 vol % (from memory: NFPA 69 / Zabetakis values as listed in `practice.md`
+/// §4.1; methanol, ethanol, acetone ~10 %, toluene ~9.5 %). It falls with temperature and
+/// pressure (Osterberg et al., Org. Process Res. Dev. 2015).
+pub const LIMITING_OXYGEN: f64 = 0.10;
+/// Share of the LOC kept without continuous O₂ monitoring (from memory: NFPA 69).
+pub const LOC_MARGIN: f64 = 0.6;
+
+/// Back-pressure margin over the vapour pressure (common practice, no source: `practice.md`
+/// §2.2 suggests ≥ 1.5 × p_sat or ≥ 2–3 bar above it).
+pub const BOILING_MARGIN: f64 = 1.5;
+
+/// Metadata of the true liquid residence time.
+pub const RESIDENCE_TIME_INFO: ModelInfo = ModelInfo {
+    name: "Residence time in segmented flow",
+    formula: "τ = ∫ dz / U_B (liquid rides in the slugs at the bubble velocity)",
+    source: "derived (physics.md §3.6), integrated along the pressure profile",
+    validity: &[],
+};
+
+/// Metadata of the liquid-only residence time, for comparison.
+pub const NOMINAL_RESIDENCE_INFO: ModelInfo = ModelInfo {
+    name: "Liquid-only residence time",
+    formula: "τ₀ = (π D²/4) L / Q_L (as if the liquid filled the tube)",
+    source: "definition",
+    validity: &[],
+};
+
+/// Metadata of the inlet pressure.
+pub const INLET_PRESSURE_INFO: ModelInfo = ModelInfo {
+    name: "Pressure profile",
+    formula: "P_in = P_out + ∫ (dP/dz) dz, integrated upstream with the gas expanding (isothermal ideal gas)",
+    source: "derived (physics.md §3.10); gradient by Kreutzer et al. (2005), a = 0.17",
+    validity: &[],
+};
+
+/// Metadata of the outlet pressure.
+pub const OUTLET_PRESSURE_INFO: ModelInfo = ModelInfo {
+    name: "Outlet pressure",
+    formula: "P_out = p_back (gauge) + 1 atm",
+    source: "definition (ambient taken as 101.325 kPa)",
+    validity: &[],
+};
+
+fn definition(key: &'static str, label: &'static str, dimension: Dimension, model: ModelInfo, value: f64) -> Result<Figure, SegmentedFlowError> {
+    Ok(Figure::single(key, label, dimension, model, value, Vec::new())?)
+}
+
+fn estimate(quantity: &'static str, model: ModelInfo, value: f64, recommended: bool, warnings: Vec<RangeWarning>) -> Result<Estimate, SegmentedFlowError> {
+    Ok(Estimate { model, value: Finite::new(quantity, value)?, recommended, warnings })
+}
+
+fn spread(key: &'static str, label: &'static str, dimension: Dimension, recommendation: &'static str, estimates: Vec<Estimate>) -> Result<Figure, SegmentedFlowError> {
+    let value = estimates
+        .iter()
+        .find(|e| e.recommended)
+        .map(|e| e.value)
+        .ok_or(SegmentedFlowError::Numerical(super::report::NumericalError::NotFinite { quantity: label }))?;
+    Ok(Figure { key, label, dimension, value, recommendation, estimates })
+}
+
+fn bar(pa: f64) -> String {
+    format_significant(pa / 1e5, 3)
+}
+
+/// Everything the calculator computes: the report and the profiles for plotting.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct SegmentedFlowResult {
+    /// Figures and checks.
+    pub report: Report,
+    /// Pressure, bubble length and gas fraction along the coil (recommended models).
+    pub profile: Profile,
+}
+
+/// Computes every figure and check for segmented flow.
+pub fn evaluate(input: &SegmentedFlowInput) -> Result<Report, SegmentedFlowError> {
+    Ok(evaluate_with_profile(input)?.report)
+}
+
+/// Computes every figure, check and profile for segmented flow.
+pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlowResult, SegmentedFlowError> {
+    let t = input.temperature;
+    let (liquid, liquid_range_warnings, diffusivity_figure) = liquid_state(input)?;
+    let (reactive, y) = input.reactive();
+    let feed = input.gas_flow.molar_flow();
+    let reactive_feed = MolarFlow::from_si(feed.si() * y);
+    let consumed = MolarFlow::from_si(reactive_feed.si() * input.consumed_fraction);
+    let (molar_mass, gas_viscosity, gas_warnings) = input.feed_properties();
+    let p_out = Pressure::from_gauge(input.back_pressure, STANDARD_ATMOSPHERE);
+    let coil = Coil {
+        diameter: input.inner_diameter,
+        length: input.length,
+        temperature: t,
+        liquid,
+        liquid_flow: input.liquid_flow,
+        gas_feed: feed,
+        gas_molar_mass: molar_mass,
+        gas_viscosity,
+        consumption: consumed,
+        outlet_pressure: p_out,
+        length_model: lengths::RECOMMENDED,
+        pressure_model: pressure_profile::RECOMMENDED,
+        expansion: GasExpansion::Isothermal,
+    };
+    let profile = coil.profile()?;
+    let mut dp_estimates = Vec::new();
+    let outlet_gas = feed.si() - consumed.si();
+    let outlet = UnitCell::with_frequency(coil.flow_at(p_out.pascals(), outlet_gas), profile.frequency)?;
+    let junction = coil.junction_cell(profile.inlet_pressure)?;
+    for model in PressureDropModel::ALL {
+        let dp = if model == pressure_profile::RECOMMENDED {
+            profile.pressure_drop()
+        } else {
+            Coil { pressure_model: model, ..coil }.profile()?.pressure_drop()
+        };
+        let mut warnings = model.warnings(&outlet);
+        for w in model.warnings(&junction) {
+            if !warnings.contains(&w) {
+                warnings.push(w);
+            }
+        }
+        dp_estimates.push(estimate("pressure drop", model.info(), dp, model == pressure_profile::RECOMMENDED, warnings)?);
+    }
+    let dp_figure = spread("pressure_drop", "Coil pressure drop", Dimension::PressureDifference, pressure_profile::RECOMMENDATION, dp_estimates)?;
+    let f = &outlet.flow;
+    let d = f.diameter.si();
+    let u_tp = f.two_phase_velocity();
+    let bond = f.bond();
+
+    let mut figures = vec![
+        definition("gas_molar_flow_mmol_per_min", "Gas fed (mmol/min, all species)", Dimension::Number, reference_state::MOLAR_FLOW_INFO, feed.mmol_per_min())?,
+        definition("gas_equivalents", "Reactive gas per mole of substrate (equivalents)", Dimension::Number, reference_state::EQUIVALENTS_INFO, reactive_feed.equivalents(input.concentration, input.liquid_flow))?,
+        definition("gas_flow_inlet", "Actual gas flow at the inlet", Dimension::VolumetricFlow, reference_state::ACTUAL_FLOW_INFO, feed.si() * GAS_CONSTANT * t.kelvin() / profile.inlet_pressure)?,
+        definition("gas_flow_outlet", "Actual gas flow at the outlet", Dimension::VolumetricFlow, reference_state::ACTUAL_FLOW_INFO, f.gas_flow.si())?,
+        definition("gas_density_outlet", "Gas density at the outlet", Dimension::Density, reference_state::DENSITY_INFO, f.gas_density.si())?,
+        Figure::single("gas_viscosity", "Gas viscosity", Dimension::DynamicViscosity, sutherland::INFO, gas_viscosity.si(), gas_warnings)?,
+        definition("gas_fraction_outlet", "Gas fraction β at the outlet", Dimension::Fraction, flow::BOOKKEEPING_INFO, f.gas_fraction())?,
+        definition("two_phase_velocity_outlet", "Two-phase velocity U_TP at the outlet", Dimension::Velocity, flow::BOOKKEEPING_INFO, u_tp.si())?,
+        Figure::single("bond", "Bond number", Dimension::Number, confinement::INFO, bond, range_warnings(&confinement::INFO, &[(confinement::BOND, bond)]))?,
+        definition("capillary_outlet", "Capillary number Ca (U_TP, outlet)", Dimension::Number, flow::GROUPS_INFO, f.capillary(u_tp))?,
+        definition("reynolds_outlet", "Reynolds number Re (U_TP, outlet)", Dimension::Number, flow::GROUPS_INFO, f.reynolds(u_tp))?,
+        definition("weber_outlet", "Weber number We (U_TP, outlet)", Dimension::Number, flow::GROUPS_INFO, f.weber(u_tp))?,
+    ];
+    let ca_b = outlet.bubble.capillary;
+    let ca_warn = |info: &ModelInfo| range_warnings(info, &[(CAPILLARY_BUBBLE, ca_b), (flow::DIAMETER, d)]);
+    figures.push(spread(
+        "film_thickness",
+        "Wall film thickness at the outlet",
+        Dimension::Length,
+        "Aussillous–Quéré: fitted to Taylor's data up to Ca ≈ 1; Bretherton's asymptote holds only for Ca_B below about 0.003.",
+        vec![
+            estimate("film thickness", aussillous_quere::INFO, outlet.film_thickness(), true, ca_warn(&aussillous_quere::INFO))?,
+            estimate("film thickness", bretherton::FILM_INFO, bretherton::relative_film_thickness(ca_b) * d / 2.0, false, ca_warn(&bretherton::FILM_INFO))?,
+        ],
+    )?);
+    let mut ub = vec![estimate("bubble velocity", bubble_velocity::INFO, outlet.bubble.velocity, true, ca_warn(&bubble_velocity::INFO))?];
+    if let Ok(u) = liu::bubble_velocity(u_tp.si(), f.liquid.viscosity.si(), f.liquid.surface_tension.si()) {
+        ub.push(estimate("bubble velocity", liu::INFO, u, false, range_warnings(&liu::INFO, &[(CAPILLARY_BUBBLE, f.capillary(super::units::Velocity::from_si(u))), (flow::DIAMETER, d)]))?);
+    }
+    figures.push(spread("bubble_velocity", "Bubble velocity at the outlet", Dimension::Velocity, "Continuity with a stationary film: a mass balance, with the best-tested film correlation; Liu et al. is an empirical fit shown for the spread.", ub)?);
+    figures.push(definition("gas_holdup_outlet", "Gas holdup ε_G at the outlet", Dimension::Fraction, cell::INFO, outlet.holdup)?);
+    let (bubble_fig, slug_fig) = lengths::length_spread(&junction.flow)?;
+    figures.push(bubble_fig);
+    figures.push(slug_fig);
+    figures.push(definition("bubble_length_outlet", "Bubble length at the outlet", Dimension::Length, cell::INFO, outlet.bubble_length)?);
+    figures.push(definition("unit_cell_outlet", "Unit-cell length at the outlet", Dimension::Length, cell::INFO, outlet.unit_cell_length())?);
+    figures.push(definition("bubble_frequency_per_s", "Bubble frequency (1/s)", Dimension::Number, cell::INFO, profile.frequency)?);
+    figures.push(definition("interfacial_area_m2_per_m3", "Specific interfacial area (m²/m³), outlet", Dimension::Number, cell::AREA_INFO, outlet.specific_area())?);
+    let dm = diffusivity_figure.value.get();
+    figures.push(diffusivity_figure);
+    let kla = mass_transfer::kla_spread(&outlet, dm)?;
+    let t95 = mass_transfer::saturation_time(kla.value.get());
+    figures.push(kla);
+    figures.push(definition("saturation_time", "Time to 95 % saturation of the liquid", Dimension::Duration, mass_transfer::SATURATION_INFO, t95)?);
+    let tau = profile.residence_time;
+    let tau0 = std::f64::consts::PI * d * d / 4.0 * input.length.si() / input.liquid_flow.si();
+    figures.push(definition("residence_time", "Liquid residence time (segmented)", Dimension::Duration, RESIDENCE_TIME_INFO, tau)?);
+    figures.push(definition("residence_time_liquid_only", "Residence time if the liquid filled the tube", Dimension::Duration, NOMINAL_RESIDENCE_INFO, tau0)?);
+
+    let p_sat = liquid.vapour_pressure;
+    let partial = henry::partial_pressure(y, p_out, p_sat);
+    let solubility = solubility_figure(input, reactive, t, partial)?;
+    let c_sat = Concentration::from_si(solubility.value.get());
+    let share = henry::dissolvable_share(c_sat, input.liquid_flow, reactive_feed);
+    figures.push(solubility);
+    figures.push(definition("dissolvable_share", "Share of the fed gas the liquid could dissolve", Dimension::Number, henry::UPTAKE_INFO, share)?);
+    let dp = dp_figure.value.get();
+    figures.push(dp_figure);
+    figures.push(definition("outlet_pressure", "Outlet pressure (absolute)", Dimension::Pressure, OUTLET_PRESSURE_INFO, p_out.pascals())?);
+    figures.push(definition("inlet_pressure", "Inlet pressure (absolute)", Dimension::Pressure, INLET_PRESSURE_INFO, profile.inlet_pressure)?);
+    // Liquid-property range warnings (temperature outside a solvent fit) go with the figures
+    // that use density, viscosity and surface tension most directly.
+    for fig in figures.iter_mut().filter(|fg| fg.key == "bond" || fg.key == "pressure_drop") {
+        for e in fig.estimates.iter_mut().filter(|e| e.recommended) {
+            for w in &liquid_range_warnings {
+                if !e.warnings.contains(w) {
+                    e.warnings.push(w.clone());
+                }
+            }
+        }
+    }
+
+    let inlet_gauge = profile.inlet_pressure - STANDARD_ATMOSPHERE.pascals();
+    let mut checks = vec![
+        regime_check(&outlet, &junction),
+        pressure_check(inlet_gauge, dp, &figures, input.rating.si()),
+        expansion_check(&profile),
+    ];
+    if let LiquidSpec::Solvent { solvent, .. } = input.liquid {
+        checks.push(boiling_check(solvent, t, p_out)?);
+    }
+    checks.push(gas_hazard_check(input));
+    if let Some(note) = input.gas.compressibility_caveat(t, Pressure::from_si(profile.inlet_pressure)) {
+        checks.push(Check { key: "compressibility", topic: "Ideal-gas assumption", verdict: Verdict::Caution, reason: note, caution: None });
+    }
+    checks.push(mass_transfer_check(t95, tau, share, reactive_feed.equivalents(input.concentration, input.liquid_flow)));
+    Ok(SegmentedFlowResult { report: Report { figures, checks }, profile })
+}
+
+fn liquid_state(input: &SegmentedFlowInput) -> Result<(Liquid, Vec<RangeWarning>, Figure), SegmentedFlowError> {
+    let (reactive, _) = input.reactive();
+    let t = input.temperature;
+    match input.liquid {
+        LiquidSpec::Solvent { solvent, .. } => {
+            let l = solvent.liquid(t)?;
+            let dm = reactive.diffusivity_in(solvent, t)?;
+            let fig = Figure::single("diffusivity", "Gas diffusivity in the liquid (estimate, ±30 %)", Dimension::Diffusivity, wilke_chang::INFO, dm.value.si(), dm.warnings)?;
+            Ok((l.value, l.warnings, fig))
+        }
+        LiquidSpec::Custom { liquid, diffusivity, .. } => {
+            let info = ModelInfo { name: "Entered diffusivity", formula: "D_m as entered", source: "user input", validity: &[] };
+            Ok((liquid, Vec::new(), Figure::single("diffusivity", "Gas diffusivity in the liquid", Dimension::Diffusivity, info, diffusivity.si(), Vec::new())?))
+        }
+    }
+}
+
+fn solubility_figure(input: &SegmentedFlowInput, reactive: Gas, t: Temperature, partial: Pressure) -> Result<Figure, SegmentedFlowError> {
+    let key = "saturation_concentration";
+    let label = "Saturation concentration at the outlet partial pressure";
+    let c = |h: HenrySolubility| henry::saturation_concentration(h, partial).si();
+    let entered = |s: Concentration| HenrySolubility::from_si(s.si() / 1e5);
+    let t_warn = |info: &ModelInfo| info.validity.iter().filter_map(|b| b.check(t.kelvin(), info)).collect::<Vec<_>>();
+    let estimates = match input.liquid {
+        LiquidSpec::Custom { solubility, .. } | LiquidSpec::Solvent { solubility: Some(solubility), .. } => {
+            vec![estimate("saturation concentration", henry::ENTERED_INFO, c(entered(solubility)), true, Vec::new())?]
+        }
+        LiquidSpec::Solvent { solvent: Solvent::Water, solubility: None } => match reactive.henry_water(t) {
+            Some(h) => vec![estimate("saturation concentration", henry::WATER_INFO, c(h.value), true, h.warnings)?],
+            None => return Err(SegmentedFlowError::Numerical(super::report::NumericalError::NotFinite { quantity: "solubility" })),
+        },
+        LiquidSpec::Solvent { solubility: None, .. } => match reactive.henry_organic() {
+            Some(r) => vec![
+                estimate("saturation concentration", henry::ORGANIC_INFO, c(HenrySolubility::from_si(r.low)), true, t_warn(&henry::ORGANIC_INFO))?,
+                estimate("saturation concentration", henry::ORGANIC_INFO, c(HenrySolubility::from_si(r.high)), false, t_warn(&henry::ORGANIC_INFO))?,
+            ],
+            None => return Err(SegmentedFlowError::Numerical(super::report::NumericalError::NotFinite { quantity: "solubility" })),
+        },
+    };
+    let recommendation = if estimates.len() > 1 {
+        "Low end of an order-of-magnitude range for common organic solvents (not this solvent's own value): conservative when the gas supply limits the reaction. Enter a measured solubility if you have one."
+    } else {
+        ""
+    };
+    spread(key, label, Dimension::Concentration, recommendation, estimates)
+}
+
+fn regime_check(outlet: &UnitCell, junction: &UnitCell) -> Check {
+    let f = &outlet.flow;
+    let bond = f.bond();
+    let mut problems = Vec::new();
+    if !confinement::is_confined(bond) {
+        problems.push(format!(
+            "Bo = {} is above 3.37 (Bretherton 1961; number from memory): gravity can move bubbles relative to the liquid (largest confined bore here {} mm), so slugs may not stay regular in vertical or horizontal runs",
+            format_significant(bond, 3),
+            format_significant(confinement::largest_confined_diameter(f.liquid.density.si(), f.gas_density.si(), f.liquid.surface_tension.si()) * 1e3, 3)
+        ));
+    }
+    for (place, c) in [("inlet", junction), ("outlet", outlet)] {
+        let we_gs = c.flow.gas_weber();
+        let we_ls = c.flow.weber(c.flow.liquid_superficial());
+        if !akbar::is_surface_tension_dominated(we_gs, we_ls) {
+            problems.push(format!(
+                "at the {place} We_GS = {} exceeds {} for We_LS = {}: outside the surface-tension-dominated (Taylor) region of the Akbar et al. (2003) map (from memory) — expect transition or annular flow",
+                format_significant(we_gs, 3),
+                format_significant(akbar::gas_weber_limit(we_ls), 3),
+                format_significant(we_ls, 3)
+            ));
+        }
+    }
+    let ca = f.capillary(f.two_phase_velocity());
+    if ca > 0.01 {
+        problems.push(format!(
+            "Ca = {} at the outlet is above 0.01, where the length correlations stop and films thicken (physics.md §3.4)",
+            format_significant(ca, 3)
+        ));
+    }
+    let verdict = if problems.is_empty() { Verdict::Fine } else { Verdict::Caution };
+    let reason = if problems.is_empty() {
+        format!(
+            "Segmented (Taylor) flow expected: Bo = {} < 3.37 (Bretherton 1961), inside the surface-tension-dominated region of Akbar et al. (2003), Ca = {}. A wetting liquid is assumed.",
+            format_significant(bond, 3),
+            format_significant(ca, 3)
+        )
+    } else {
+        format!("{}. The segmented-flow figures assume Taylor flow and are less reliable here.", problems.join("; "))
+    };
+    Check { key: "flow_regime", topic: "Flow regime", verdict, reason, caution: None }
+}
+
+const OVER_PRESSURE_CAUTION: &str = "A gas-filled line stores far more energy than a liquid-filled one at the same pressure, and \
+fails violently. Stay below the lowest-rated component (polymer tubing loses strength with \
+temperature), fit a relief device, shield pressurised parts, and follow local codes and \
+institutional rules.";
+
+fn pressure_check(inlet_gauge: f64, dp: f64, figures: &[Figure], rating: f64) -> Check {
+    let worst_dp = figures.iter().find(|f| f.key == "pressure_drop").map_or(dp, |f| f.spread().1);
+    let ratio = inlet_gauge / rating;
+    let worst_ratio = (inlet_gauge - dp + worst_dp) / rating;
+    let (verdict, note) = if ratio > 1.0 {
+        (Verdict::Problem, ": over the rating")
+    } else if ratio > PRESSURE_MARGIN || worst_ratio > PRESSURE_MARGIN {
+        (Verdict::Caution, ": less than 20 % margin by the recommended or the highest model (common practice, no source)")
+    } else {
+        (Verdict::Fine, "")
+    };
+    Check {
+        key: "pressure_budget",
+        topic: "Pressure budget",
+        verdict,
+        reason: format!(
+            "Inlet pressure {} bar(g) (back-pressure + {} bar coil drop by Kreutzer a = 0.17; models up to {} bar) is {:.0} % of the {} bar(g) rating{note}. Fittings, mixer and regulator add to it.",
+            bar(inlet_gauge),
+            bar(dp),
+            bar(worst_dp),
+            ratio * 100.0,
+            bar(rating)
+        ),
+        caution: (verdict != Verdict::Fine).then(|| OVER_PRESSURE_CAUTION.to_owned()),
+    }
+}
+
+fn expansion_check(profile: &Profile) -> Check {
+    let ratio = profile.pressure_drop() / profile.outlet_pressure;
+    let growth = profile.bubble_length.last().zip(profile.bubble_length.first()).map_or(1.0, |(o, i)| o / i);
+    let big = ratio > 0.1;
+    Check {
+        key: "gas_expansion",
+        topic: "Gas expansion along the coil",
+        verdict: if big { Verdict::Caution } else { Verdict::Fine },
+        reason: format!(
+            "The coil drop is {:.1} % of the outlet pressure; bubbles grow by a factor {} from inlet to outlet (integrated, isothermal ideal gas).{}",
+            ratio * 100.0,
+            format_significant(growth, 3),
+            if big { " Above about 10 % the gas flow, velocity and residence time change markedly along the coil (common practice, no source): read the profile, not single values." } else { "" }
+        ),
+        caution: None,
+    }
+}
+
+fn boiling_check(solvent: Solvent, t: Temperature, p_out: Pressure) -> Result<Check, SegmentedFlowError> {
+    let b = solvent.boiling_check(t, p_out)?;
+    let p_sat = b.value.vapour_pressure.pascals();
+    let (verdict, what) = if b.value.boils {
+        (Verdict::Problem, "boils: the liquid flashes and the gas slugs fill with vapour")
+    } else if p_out.pascals() < BOILING_MARGIN * p_sat {
+        (Verdict::Caution, "stays liquid with less than a 1.5 × margin (common practice, no source); vapour takes a large share of each gas slug")
+    } else {
+        (Verdict::Fine, "stays liquid")
+    };
+    Ok(Check {
+        key: "boiling",
+        topic: "Solvent boiling",
+        verdict,
+        reason: format!(
+            "{} at {} °C has a vapour pressure of {} bar(a) (Antoine fit, fluids module) against {} bar(a) at the regulator: it {what}. The gas partial pressure in the slugs is the total minus the vapour pressure.",
+            solvent.name(),
+            format_significant(t.celsius(), 3),
+            bar(p_sat),
+            bar(p_out.pascals())
+        ),
+        caution: (verdict == Verdict::Problem).then(|| {
+            format!(
+                "Raise the back-pressure to at least {} bar(a), or lower the temperature. A leak of liquid held above its boiling point flashes into a vapour cloud; follow local codes and institutional rules.",
+                bar(BOILING_MARGIN * p_sat)
+            )
+        }),
+    })
+}
+
+fn gas_hazard_check(input: &SegmentedFlowInput) -> Check {
+    let (_, y) = input.reactive();
+    let flammable_solvent = !matches!(input.liquid, LiquidSpec::Solvent { solvent: Solvent::Water, .. });
+    let key = "gas_hazard";
+    let topic = "Gas hazards";
+    let local = " Follow local codes and institutional rules for this gas.";
+    match input.gas {
+        g if g.is_oxidising() && flammable_solvent => {
+            let (verdict, level) = if y > LOC_MARGIN * LIMITING_OXYGEN {
+                (Verdict::Caution, "above 60 % of the limiting oxygen concentration")
+            } else {
+                (Verdict::Fine, "within 60 % of the limiting oxygen concentration")
+            };
+            Check {
+                key,
+                topic,
+                verdict,
+                reason: format!(
+                    "The feed carries {:.1} % O₂ with a flammable (or unknown) liquid: {level} of ~10 vol % taken for common solvents with N₂ (from memory: NFPA 69 / Zabetakis; 60 % margin without O₂ monitoring, NFPA 69, from memory). The LOC falls with temperature and pressure (Osterberg et al., Org. Process Res. Dev. 2015).",
+                    y * 100.0
+                ),
+                caution: Some(format!(
+                    "Gas slugs, the regulator outlet, separator and receiver hold solvent vapour and oxygen: keep every vapour space below the LOC with margin — prefer diluted O₂ (e.g. 8–9 % in N₂) over air or pure O₂, dilute the outlet with N₂, and use oxygen-compatible, oxygen-clean parts with pure O₂. Dichloromethane, non-flammable in air, burns in O₂-enriched atmospheres.{local}"
+                )),
+            }
+        }
+        g if g.is_oxidising() => Check {
+            key,
+            topic,
+            verdict: Verdict::Fine,
+            reason: "Oxygen with water: no flammable vapour from the liquid itself.".to_owned(),
+            caution: Some(format!("Flammable reagents or products can still make the vapour space flammable; with pure O₂ use oxygen-compatible, oxygen-clean parts and open valves slowly (adiabatic compression).{local}")),
+        },
+        Gas::Hydrogen => Check {
+            key,
+            topic,
+            verdict: Verdict::Caution,
+            reason: "Hydrogen is flammable from 4 to 75 vol % in air with a very low ignition energy, leaks through fittings and permeates fluoropolymers (from memory).".to_owned(),
+            caution: Some(format!("Vent the separator and regulator outlet to extraction, use H₂ detection, purge with inert gas before and after, leak-test with inert gas, exclude ignition sources, and handle spent precious-metal catalysts wet.{local}")),
+        },
+        Gas::CarbonMonoxide => Check {
+            key,
+            topic,
+            verdict: Verdict::Caution,
+            reason: "Carbon monoxide is acutely toxic and odourless, and flammable from 12.5 to 74 vol % in air (from memory).".to_owned(),
+            caution: Some(format!("Work in a ventilated enclosure with a CO detector, closed handling and an exhaust for the separator and regulator outlet; never vent to the room.{local}")),
+        },
+        _ => Check {
+            key,
+            topic,
+            verdict: Verdict::Fine,
+            reason: format!("{} is neither flammable nor an oxidiser; in a closed or poorly ventilated space it displaces oxygen (asphyxiant).", input.gas.name()),
+            caution: None,
+        },
+    }
+}
+
+fn mass_transfer_check(t95: f64, tau: f64, share: f64, equivalents: f64) -> Check {
+    let mut notes = Vec::new();
+    let mut verdict = Verdict::Fine;
+    let s = |v: f64| format_significant(v, 3);
+    if t95 > tau {
+        verdict = Verdict::Caution;
+        notes.push(format!("the liquid needs ~{} s to reach 95 % saturation (van Baten–Krishna k_L a) but stays only {} s: it leaves unsaturated, and a gas-consuming reaction may be limited by mass transfer", s(t95), s(tau)));
+    } else {
+        notes.push(format!("95 % saturation in ~{} s of a {} s residence time", s(t95), s(tau)));
+    }
+    if share >= 1.0 {
+        verdict = Verdict::Caution;
+        notes.push(format!("the liquid could dissolve {} times the gas fed: bubbles may shrink or vanish, and the segmented-flow figures assume they persist", s(share)));
+    } else {
+        notes.push(format!("the liquid can hold {} % of the gas fed at saturation", s(share * 100.0)));
+    }
+    if equivalents < 1.0 {
+        verdict = Verdict::Caution;
+        notes.push(format!("only {} mol of gas per mol of substrate is fed: a reaction taking one gas molecule per substrate cannot go to completion", s(equivalents)));
+    }
+    let mut reason = notes.join("; ");
+    if let Some(first) = reason.get(..1) {
+        reason = first.to_uppercase() + reason.get(1..).unwrap_or("") + ".";
+    }
+    Check { key: "gas_supply", topic: "Gas supply and mass transfer", verdict, reason, caution: None }
+}
