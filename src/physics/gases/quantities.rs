@@ -3,31 +3,13 @@
 
 use serde::Serialize;
 
-macro_rules! local_quantity {
-    ($(#[$doc:meta])* $name:ident, $si:literal) => {
-        $(#[$doc])*
-        #[derive(Debug, Clone, Copy, PartialEq, PartialOrd, Serialize)]
-        #[serde(transparent)]
-        pub struct $name(f64);
+use crate::physics::units::si_quantity;
 
-        impl $name {
-            #[doc = concat!("From a value in ", $si, " (SI).")]
-            pub const fn from_si(value: f64) -> Self {
-                Self(value)
-            }
-            #[doc = concat!("The value in ", $si, " (SI).")]
-            pub const fn si(self) -> f64 {
-                self.0
-            }
-        }
-    };
-}
-
-local_quantity!(
+si_quantity!(
     /// An amount-of-substance flow, e.g. of gas from a mass-flow controller.
     MolarFlow, "mol/s"
 );
-local_quantity!(
+si_quantity!(
     /// A Henry's-law solubility H^cp = c / p: dissolved concentration per partial pressure.
     HenrySolubility, "mol/(m³·Pa)"
 );

@@ -3,39 +3,21 @@
 
 use serde::Serialize;
 
-macro_rules! local_quantity {
-    ($(#[$doc:meta])* $name:ident, $si:literal) => {
-        $(#[$doc])*
-        #[derive(Debug, Clone, Copy, PartialEq, PartialOrd, Serialize)]
-        #[serde(transparent)]
-        pub struct $name(f64);
+use crate::physics::units::si_quantity;
 
-        impl $name {
-            #[doc = concat!("From a value in ", $si, " (SI).")]
-            pub const fn from_si(value: f64) -> Self {
-                Self(value)
-            }
-            #[doc = concat!("The value in ", $si, " (SI).")]
-            pub const fn si(self) -> f64 {
-                self.0
-            }
-        }
-    };
-}
-
-local_quantity!(
+si_quantity!(
     /// A mass, e.g. of solid packed in a cartridge.
     Mass, "kg"
 );
-local_quantity!(
+si_quantity!(
     /// An amount of substance.
     Amount, "mol"
 );
-local_quantity!(
+si_quantity!(
     /// Amount of active groups per mass of solid (a loading).
     SpecificAmount, "mol/kg"
 );
-local_quantity!(
+si_quantity!(
     /// A space velocity: feed mass flow per mass of solid.
     SpaceVelocity, "1/s"
 );

@@ -7,4 +7,5 @@ mod table;
 
 pub use format::format_significant;
 pub use quantities::*;
+pub(crate) use quantities::si_quantity;
 pub use table::{Dimension, NumberError, Unit, parse_number, unit_by_symbol};

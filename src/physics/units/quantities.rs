@@ -2,6 +2,7 @@
 
 use serde::Serialize;
 
+/// Defines an SI newtype with `from_si` and `si`, serialised as a plain number.
 macro_rules! si_quantity {
     ($(#[$doc:meta])* $name:ident, $si:literal) => {
         $(#[$doc])*
@@ -21,6 +22,10 @@ macro_rules! si_quantity {
         }
     };
 }
+
+/// The newtype pattern of this module, for quantity types defined next to the physics that
+/// needs them.
+pub(crate) use si_quantity;
 
 si_quantity!(
     /// A length or diameter.
