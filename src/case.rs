@@ -8,7 +8,9 @@ use serde::{Deserialize, Serialize};
 use crate::physics::form::{ChoiceSpec, FieldSource};
 use crate::physics::input::{FieldSpec, InputError};
 use crate::physics::packed_bed::{self as bed, PackedBedInput};
+use crate::physics::fluids;
 use crate::physics::report::{NumericalError, Report};
+use crate::physics::segmented_flow::{self as gas, SegmentedFlowInput};
 use crate::physics::slurry::{self, SlurryInput};
 use crate::physics::tubular::{self, TubularInput};
 
@@ -24,6 +26,9 @@ pub const PACKED_BED_DEMO_JSON: &str = include_str!("../public/cases/packed-bed-
 /// The demo slurry-line case (an invented scenario), as shipped in `public/cases/`.
 pub const SLURRY_DEMO_JSON: &str = include_str!("../public/cases/slurry-demo.json");
 
+/// The demo segmented-flow case (an invented scenario), as shipped in `public/cases/`.
+pub const SEGMENTED_FLOW_DEMO_JSON: &str = include_str!("../public/cases/segmented-flow-demo.json");
+
 /// Which calculator a case is for.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
 #[serde(rename_all = "snake_case")]
@@ -34,6 +39,8 @@ pub enum Calculator {
     PackedBed,
     /// Slurry line (settling, deposition, clogging and pressure at every element).
     SlurryLine,
+    /// Gas–liquid segmented flow (gas bookkeeping, slugs, mass transfer, pressure along the coil).
+    SegmentedFlow,
 }
 
 /// One entry of a calculator's form, in page order.
@@ -113,9 +120,35 @@ const SLURRY_ELEMENT_LAYOUT: &[FormItem] = &[
     Field(slurry::ELEMENT_LENGTH),
 ];
 
+const SEGMENTED_FLOW_LAYOUT: &[FormItem] = &[
+    Choice(gas::GAS),
+    Field(gas::GAS_MOLE_FRACTION),
+    Field(gas::GAS_FLOW),
+    Choice(gas::REFERENCE_STATE),
+    Field(gas::REFERENCE_TEMPERATURE),
+    Field(gas::REFERENCE_PRESSURE),
+    Choice(gas::SOLVENT),
+    Field(fluids::CUSTOM_DENSITY),
+    Field(fluids::CUSTOM_VISCOSITY),
+    Field(fluids::CUSTOM_SURFACE_TENSION),
+    Choice(gas::SOLUBILITY_SOURCE),
+    Field(gas::SOLUBILITY),
+    Field(gas::DIFFUSIVITY),
+    Field(gas::LIQUID_FLOW),
+    Field(gas::CONCENTRATION),
+    Field(gas::INNER_DIAMETER),
+    Field(gas::LENGTH),
+    Field(gas::TEMPERATURE),
+    Field(gas::BACK_PRESSURE),
+    Field(gas::RATING),
+    Choice(gas::CONSUMPTION),
+    Field(gas::CONSUMED_FRACTION),
+];
+
 impl Calculator {
     /// Every calculator, in page order.
-    pub const ALL: [Calculator; 3] = [Calculator::TubularReactor, Calculator::PackedBed, Calculator::SlurryLine];
+    pub const ALL: [Calculator; 4] =
+        [Calculator::TubularReactor, Calculator::PackedBed, Calculator::SlurryLine, Calculator::SegmentedFlow];
 
     /// Stable key, as in case files.
     pub const fn key(self) -> &'static str {
@@ -123,6 +156,7 @@ impl Calculator {
             Calculator::TubularReactor => "tubular_reactor",
             Calculator::PackedBed => "packed_bed",
             Calculator::SlurryLine => "slurry_line",
+            Calculator::SegmentedFlow => "segmented_flow",
         }
     }
 
@@ -132,6 +166,7 @@ impl Calculator {
             Calculator::TubularReactor => "Tubular reactor",
             Calculator::PackedBed => "Packed cartridge",
             Calculator::SlurryLine => "Slurry line",
+            Calculator::SegmentedFlow => "Gas–liquid flow",
         }
     }
 
@@ -150,6 +185,10 @@ impl Calculator {
                 "Whether solids stay suspended, settle or plug at every element of the line, from the pump to the \
                  back-pressure regulator, the pressure it takes, and what would make a failing element work."
             }
+            Calculator::SegmentedFlow => {
+                "How much gas reaches the liquid, the slug pattern it forms, how fast it dissolves against the \
+                 residence time, and the pressure and bubble length along the coil up to the back-pressure regulator."
+            }
         }
     }
 
@@ -159,6 +198,7 @@ impl Calculator {
             Calculator::TubularReactor => TUBULAR_LAYOUT,
             Calculator::PackedBed => PACKED_BED_LAYOUT,
             Calculator::SlurryLine => SLURRY_LAYOUT,
+            Calculator::SegmentedFlow => SEGMENTED_FLOW_LAYOUT,
         }
     }
 
@@ -166,7 +206,7 @@ impl Calculator {
     pub const fn element_layout(self) -> Option<&'static [FormItem]> {
         match self {
             Calculator::SlurryLine => Some(SLURRY_ELEMENT_LAYOUT),
-            Calculator::TubularReactor | Calculator::PackedBed => None,
+            Calculator::TubularReactor | Calculator::PackedBed | Calculator::SegmentedFlow => None,
         }
     }
 
@@ -176,6 +216,7 @@ impl Calculator {
             Calculator::TubularReactor => TUBULAR_DEMO_JSON,
             Calculator::PackedBed => PACKED_BED_DEMO_JSON,
             Calculator::SlurryLine => SLURRY_DEMO_JSON,
+            Calculator::SegmentedFlow => SEGMENTED_FLOW_DEMO_JSON,
         }
     }
 
@@ -185,6 +226,7 @@ impl Calculator {
             Calculator::TubularReactor => "tubular-demo.json",
             Calculator::PackedBed => "packed-bed-demo.json",
             Calculator::SlurryLine => "slurry-demo.json",
+            Calculator::SegmentedFlow => "segmented-flow-demo.json",
         }
     }
 
@@ -200,6 +242,10 @@ impl Calculator {
             Calculator::SlurryLine => {
                 let input = SlurryInput::from_source(src, elements).map_err(CaseError::Inputs)?;
                 slurry::element::evaluate(&input).map_err(CaseError::Numerical)
+            }
+            Calculator::SegmentedFlow => {
+                let input = SegmentedFlowInput::from_source(src).map_err(CaseError::Inputs)?;
+                gas::evaluate(&input).map_err(|e| CaseError::Calculation(e.to_string()))
             }
             Calculator::TubularReactor => {
                 let input = TubularInput::from_source(src).map_err(CaseError::Inputs)?;
@@ -265,6 +311,8 @@ pub enum CaseError {
     Inputs(Vec<InputError>),
     /// The computation failed numerically.
     Numerical(NumericalError),
+    /// The calculation could not give a result (no convergence, gas used up, …), in words.
+    Calculation(String),
 }
 
 impl std::fmt::Display for CaseError {
@@ -281,6 +329,7 @@ impl std::fmt::Display for CaseError {
                 Ok(())
             }
             CaseError::Numerical(e) => write!(f, "{e}"),
+            CaseError::Calculation(m) => f.write_str(m),
         }
     }
 }

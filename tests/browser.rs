@@ -236,3 +236,29 @@ async fn slurry_line_gives_a_verdict_per_element_and_follows_edits() {
     assert_clean(&b).await;
     b.close().await;
 }
+
+#[tokio::test]
+async fn gas_liquid_demo_shows_equivalents_spreads_and_the_oxygen_caution() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    b.click("[data-testid=tab-segmented_flow]").await;
+    b.wait_for("[data-testid=panel-segmented_flow]").await;
+    b.wait_for("[data-testid=result-gas_equivalents]").await;
+    assert_page_matches_cli(&b, Calculator::SegmentedFlow).await;
+    // Several slug-length and kLa correlations, each shown with the spread.
+    assert!(b.exists("[data-testid=spread-bubble_length]").await);
+    assert!(b.exists("[data-testid=spread-kla_per_s]").await);
+    // 9 % O₂ with acetonitrile: a caution with the limiting-oxygen advice beside it.
+    assert!(b.text("[data-testid=verdict-gas_hazard]").await.to_lowercase().contains("caution"));
+    assert!(b.text("[data-testid=caution-gas_hazard]").await.contains("LOC"));
+    b.screenshot("gas-liquid-demo").await;
+    // Another solvent changes the properties and every result that depends on them.
+    let bond = b.text("[data-testid=result-bond]").await;
+    b.choose("choice-solvent", "water").await;
+    b.text_when("[data-testid=result-bond]", |t| t != bond).await;
+    // A custom liquid asks for its properties.
+    b.choose("choice-solvent", "custom").await;
+    b.wait_for("[data-testid=input-liquid_viscosity]").await;
+    assert_clean(&b).await;
+    b.close().await;
+}

@@ -257,8 +257,8 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
         let (result, applicable) = run_watched(&source);
         match result {
             Ok(report) => Outcome { report: Some(report), stale: false, failure: None, applicable },
-            Err(CaseError::Numerical(e)) => {
-                Outcome { report: last, stale: true, failure: Some(CaseError::Numerical(e).to_string()), applicable }
+            Err(e @ (CaseError::Numerical(_) | CaseError::Calculation(_))) => {
+                Outcome { report: last, stale: true, failure: Some(e.to_string()), applicable }
             }
             Err(_) => Outcome { report: last, stale: true, failure: None, applicable },
         }
@@ -315,9 +315,18 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
     }
 }
 
-/// Radio buttons for a choice field.
+/// Radio buttons for a choice field; a drop-down when there are many options.
 #[component]
 fn ChoicePicker(spec: ChoiceSpec, selected: RwSignal<usize>) -> impl IntoView {
+    if spec.options.len() > 4 {
+        return view! {
+            <div class="field">
+                <label>{spec.label}</label>
+                <div class="entry"><ChoiceSelect spec=spec selected=selected name=spec.key.to_owned() /></div>
+            </div>
+        }
+        .into_any();
+    }
     view! {
         <fieldset class="choice" data-testid=format!("choice-{}", spec.key)>
             <legend>{spec.label}</legend>
@@ -343,6 +352,7 @@ fn ChoicePicker(spec: ChoiceSpec, selected: RwSignal<usize>) -> impl IntoView {
                 .collect_view()}
         </fieldset>
     }
+    .into_any()
 }
 
 /// The elements of a line in flow order: each with its kind, orientation, bore and length, and
@@ -405,21 +415,21 @@ fn ElementList(form: CalculatorForm) -> impl IntoView {
     }
 }
 
-/// A drop-down for a choice field (compact, for element rows). `name` keys its test id.
+/// A drop-down for a choice field; option values are the option keys. `name` keys its test id.
 #[component]
 fn ChoiceSelect(spec: ChoiceSpec, selected: RwSignal<usize>, name: String) -> impl IntoView {
     view! {
         <select
             aria-label=spec.label
             data-testid=format!("choice-{name}")
-            prop:value=move || selected.get().to_string()
+            prop:value=move || spec.options.get(selected.get()).map(|o| o.0).unwrap_or_default()
             on:change:target=move |ev| {
-                if let Ok(i) = ev.target().value().parse() {
+                if let Ok(i) = spec.index_of(&ev.target().value()) {
                     selected.set(i);
                 }
             }
         >
-            {spec.options.iter().enumerate().map(|(i, (_, label))| view! { <option value=i.to_string()>{*label}</option> }).collect_view()}
+            {spec.options.iter().map(|(key, label)| view! { <option value=*key>{*label}</option> }).collect_view()}
         </select>
     }
 }
