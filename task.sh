@@ -41,12 +41,12 @@ build() {
   wasm-bindgen --target web --no-typescript --out-dir target/web \
     target/wasm32-unknown-unknown/release/clearbore.wasm
   python3 - <<'PY'
-# Inline the CSS, the JS glue and the wasm (base64) into one self-contained HTML file.
-import base64, pathlib
+# Inline the CSS, the JS glue and the wasm (gzip, then base64) into one self-contained HTML file.
+import base64, gzip, pathlib
 page = pathlib.Path("index.html").read_text()
 style = pathlib.Path("public/style.css").read_text()
 glue = pathlib.Path("target/web/clearbore.js").read_text()
-wasm = base64.b64encode(pathlib.Path("target/web/clearbore_bg.wasm").read_bytes()).decode()
+wasm = base64.b64encode(gzip.compress(pathlib.Path("target/web/clearbore_bg.wasm").read_bytes(), 9, mtime=0)).decode()
 for marker, text in (("/*@CLEARBORE_STYLE@*/", style), ("/*@CLEARBORE_GLUE@*/", glue), ("/*@CLEARBORE_WASM@*/", wasm)):
     assert page.count(marker) == 1, marker
     page = page.replace(marker, text)

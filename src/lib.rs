@@ -6,6 +6,7 @@
 pub mod case;
 pub mod cli;
 pub mod physics;
+pub mod plot;
 
 #[cfg(target_arch = "wasm32")]
 pub mod ui;

@@ -262,3 +262,41 @@ async fn gas_liquid_demo_shows_equivalents_spreads_and_the_oxygen_caution() {
     assert_clean(&b).await;
     b.close().await;
 }
+
+/// The chart `key` is drawn: its canvas backing store is the CSS size times the device pixel
+/// ratio, and it has ink on it (not a blank white canvas).
+async fn assert_chart_drawn(b: &Browser, key: &str) {
+    b.wait_for(&format!("[data-testid=plot-{key}] canvas")).await;
+    let v = b
+        .js(&format!(
+            "const c = document.querySelector('[data-testid=plot-{key}] canvas');
+             const d = c.getContext('2d').getImageData(0, 0, c.width, c.height).data;
+             let ink = 0; for (let i = 0; i < d.length; i += 4) if (d[i] < 200 || d[i+1] < 200 || d[i+2] < 200) ink++;
+             return {{ w: c.width, h: c.height, cw: c.clientWidth, ch: c.clientHeight, r: window.devicePixelRatio, ink }};"
+        ))
+        .await;
+    let f = |k: &str| v[k].as_f64().unwrap();
+    assert_eq!(f("r"), 2.0, "device pixel ratio forced to 2");
+    assert!((f("w") - (f("cw") * f("r")).round()).abs() <= 1.0, "{key}: backing width {v}");
+    assert!((f("h") - (f("ch") * f("r")).round()).abs() <= 1.0, "{key}: backing height {v}");
+    assert!(f("ink") > 2000.0, "{key}: canvas looks blank {v}");
+    b.screenshot_of(&format!("[data-testid=plot-{key}]"), &format!("chart-{key}")).await;
+}
+
+#[tokio::test]
+async fn charts_are_drawn_sharp_on_a_high_density_screen() {
+    let b = Browser::start_scaled(2.0).await;
+    b.open_page().await;
+    b.click("[data-testid=tab-packed_bed]").await;
+    assert_chart_drawn(&b, "bed_pressure_drop_vs_flow").await;
+    b.screenshot("chart-packed-bed").await;
+    b.click("[data-testid=tab-slurry_line]").await;
+    assert_chart_drawn(&b, "settling_vs_size").await;
+    b.click("[data-testid=tab-segmented_flow]").await;
+    for key in ["pressure_profile", "length_profile", "fraction_profile"] {
+        assert_chart_drawn(&b, key).await;
+    }
+    b.screenshot("chart-gas-liquid").await;
+    assert_clean(&b).await;
+    b.close().await;
+}

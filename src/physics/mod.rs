@@ -9,6 +9,7 @@ pub mod numeric;
 pub mod ode;
 pub mod packed_bed;
 pub mod pipe_flow;
+pub mod plot;
 pub mod report;
 pub mod segmented_flow;
 pub mod settling;

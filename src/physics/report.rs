@@ -216,6 +216,9 @@ pub struct Report {
     pub figures: Vec<Figure>,
     /// Checks with verdicts.
     pub checks: Vec<Check>,
+    /// Charts of how the answer changes (flow, size, position along the coil).
+    #[serde(skip_serializing_if = "Vec::is_empty")]
+    pub plots: Vec<super::plot::Plot>,
 }
 
 impl Report {

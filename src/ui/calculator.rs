@@ -6,6 +6,7 @@ use std::cell::RefCell;
 use leptos::prelude::*;
 
 use super::case_io::CaseToolbar;
+use super::charts::PlotList;
 use super::field::{FieldState, QuantityField};
 use super::results::{CheckList, ResultTable};
 use crate::case::{Calculator, CaseError, CaseFile, Entries, Entry, FORMAT_VERSION, FormItem};
@@ -309,6 +310,7 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                     <CheckList report=report />
                     <h3>"Results"</h3>
                     <ResultTable report=report />
+                    <PlotList report=report />
                 </div>
             </div>
         </section>

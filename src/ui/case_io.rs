@@ -9,13 +9,13 @@ use super::calculator::CalculatorForm;
 use super::workbench::use_workbench;
 use crate::case::CaseFile;
 
-/// Offers `json` as a download named `file_name`.
-fn download(file_name: &str, json: &str) -> Result<(), JsValue> {
+/// Offers `text` as a download named `file_name` with the given MIME type.
+pub fn download(file_name: &str, text: &str, mime: &str) -> Result<(), JsValue> {
     let window = web_sys::window().ok_or("no window")?;
     let document = window.document().ok_or("no document")?;
     let options = web_sys::BlobPropertyBag::new();
-    options.set_type("application/json");
-    let parts = js_sys::Array::of1(&JsValue::from_str(json));
+    options.set_type(mime);
+    let parts = js_sys::Array::of1(&JsValue::from_str(text));
     let blob = web_sys::Blob::new_with_str_sequence_and_options(&parts, &options)?;
     let url = web_sys::Url::create_object_url_with_blob(&blob)?;
     let anchor: web_sys::HtmlAnchorElement = document.create_element("a")?.dyn_into()?;
@@ -55,7 +55,7 @@ pub fn CaseToolbar(form: CalculatorForm) -> impl IntoView {
     };
     let save_form = form.clone();
     let on_save = move |_| match save_form.to_case() {
-        Ok(case) => match download(&format!("clearbore-{}.json", case.calculator.key()), &case.to_json()) {
+        Ok(case) => match download(&format!("clearbore-{}.json", case.calculator.key()), &case.to_json(), "application/json") {
             Ok(()) => message.set(format!("Case saved as clearbore-{}.json.", case.calculator.key())),
             Err(_) => message.set("The browser refused the download.".to_owned()),
         },

@@ -4,6 +4,7 @@
 mod app;
 mod calculator;
 mod case_io;
+mod charts;
 mod display;
 mod field;
 mod panic_banner;

@@ -41,6 +41,11 @@ impl Browser {
     /// Starts ChromeDriver and Chromium. Every request to the network goes to a dead proxy on
     /// loopback, so the page is tested as it runs offline.
     pub async fn start() -> Browser {
+        Self::start_scaled(1.0).await
+    }
+
+    /// As [`Browser::start`], with the screen's device pixel ratio forced to `scale`.
+    pub async fn start_scaled(scale: f64) -> Browser {
         let page = page_path();
         assert!(page.exists(), "{} is missing: run ./task.sh build first", page.display());
         let port = free_port();
@@ -60,6 +65,7 @@ impl Browser {
                     "--headless=new", "--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage",
                     "--disable-background-networking", "--disable-component-update", "--no-first-run",
                     "--disable-sync", "--disable-quic", "--window-size=1280,1400",
+                    format!("--force-device-scale-factor={scale}"),
                     format!("--user-data-dir={}", profile.display()),
                     format!("--proxy-server=http://127.0.0.1:{dead_proxy}"), "--proxy-bypass-list=<-loopback>",
                 ]
@@ -151,6 +157,14 @@ impl Browser {
         let dir = PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("target/screenshots");
         std::fs::create_dir_all(&dir).unwrap();
         let png = self.client.screenshot().await.unwrap();
+        std::fs::write(dir.join(format!("{name}.png")), png).unwrap();
+    }
+
+    /// Saves a screenshot of the element matching `css` under `target/screenshots/`.
+    pub async fn screenshot_of(&self, css: &str, name: &str) {
+        let dir = PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("target/screenshots");
+        std::fs::create_dir_all(&dir).unwrap();
+        let png = self.client.find(Locator::Css(css)).await.unwrap().screenshot().await.unwrap();
         std::fs::write(dir.join(format!("{name}.png")), png).unwrap();
     }
 

@@ -17,6 +17,7 @@ pub mod mehta_hawley;
 pub mod minimum_fluidisation;
 pub mod montillet_akkari_comiti;
 pub mod packing;
+pub mod plots;
 pub mod pressure_drop;
 pub mod quantities;
 pub mod sizing;
@@ -656,11 +657,9 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
         figures.push(f.clone());
     }
     let whsv = capacity::weight_hourly_space_velocity(input.flow, input.density, input.solid_mass);
-    // Dimension has no reciprocal time yet: shown as a plain number in h⁻¹, said so in the key and label.
     figures.push(definition("whsv", "Weight hourly space velocity", Dimension::Frequency, capacity::WHSV_INFO, whsv.si())?);
     if let BedRole::Reagent { loading, concentration, stoichiometry } = input.role {
         let n = capacity::active_amount(input.solid_mass, loading);
-        // Dimension has no amount of substance yet: shown as a plain number in mol.
         figures.push(definition("active_amount", "Active groups on the bed", Dimension::Amount, capacity::ACTIVE_AMOUNT_INFO, n.si())?);
         figures.push(definition(
             "consumption_time",
@@ -680,5 +679,7 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
     if let Some(target) = &input.sizing {
         checks.push(sizing_figures_and_check(input, target, eps, &mut figures)?);
     }
-    Ok(Report { figures, checks })
+    let lifting_flow = umf.as_ref().map(|f| f.value.get() * crate::physics::pipe_flow::bore_area(input.tube_diameter));
+    let plots = vec![plots::pressure_drop_vs_flow(input, &bed, lifting_flow)?];
+    Ok(Report { figures, checks, plots })
 }

@@ -17,6 +17,7 @@ pub mod kreutzer;
 pub mod lengths;
 pub mod liu;
 pub mod mass_transfer;
+pub mod plots;
 pub mod pressure_profile;
 pub mod qian_lawal;
 pub mod quantities;
@@ -535,7 +536,8 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
         checks.push(Check { key: "compressibility", topic: "Ideal-gas assumption", verdict: Verdict::Caution, reason: note, caution: None });
     }
     checks.push(mass_transfer_check(t95, tau, share, reactive_feed.equivalents(input.concentration, input.liquid_flow)));
-    Ok(SegmentedFlowResult { report: Report { figures, checks }, profile })
+    let plots = plots::profiles(&profile, input.rating);
+    Ok(SegmentedFlowResult { report: Report { figures, checks, plots }, profile })
 }
 
 fn liquid_state(input: &SegmentedFlowInput) -> Result<(Liquid, Vec<RangeWarning>, Figure), SegmentedFlowError> {

@@ -555,7 +555,8 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
         },
         caution: (verdict == Verdict::Problem).then(|| PLUG_CAUTION.to_owned()),
     });
-    Ok(Report { figures, checks })
+    let plots = if drift == Drift::Neutral { Vec::new() } else { vec![super::plots::settling_vs_size(input, phi)?] };
+    Ok(Report { figures, checks, plots })
 }
 
 /// Metadata of the fitted log-normal spread.

@@ -10,6 +10,7 @@ pub mod fuchs_thomas;
 pub mod keys;
 pub mod krieger_dougherty;
 pub mod oroskar_turian;
+pub mod plots;
 pub mod series;
 pub mod shields;
 pub mod size_distribution;

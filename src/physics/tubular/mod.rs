@@ -253,5 +253,5 @@ pub fn evaluate(input: &TubularInput) -> Result<Report, NumericalError> {
     }
 
     let checks = vec![pressure_check(inlet, dp, input.rating), regime_check(re)];
-    Ok(Report { figures, checks })
+    Ok(Report { figures, checks, plots: Vec::new() })
 }

@@ -1,0 +1,68 @@
+//! `PlotList` and `PlotView`: the physics' charts drawn on canvases (backing store scaled by
+//! devicePixelRatio, so they stay sharp) with an SVG download of each for print and records.
+
+use leptos::html::Canvas;
+use leptos::prelude::*;
+use plotters::prelude::IntoDrawingArea;
+use plotters_canvas::CanvasBackend;
+
+use super::case_io::download;
+use crate::physics::plot::Plot;
+use crate::physics::report::Report;
+
+/// CSS height of a chart, px.
+const HEIGHT: f64 = 340.0;
+
+/// Every chart of the report, one after the other.
+#[component]
+pub fn PlotList(report: Signal<Option<Report>>) -> impl IntoView {
+    let keys = Memo::new(move |_| {
+        report.with(|r| r.as_ref().map(|r| r.plots.iter().map(|p| p.key).collect::<Vec<_>>()).unwrap_or_default())
+    });
+    view! {
+        <For each=move || keys.get() key=|k| *k let:key>
+            <PlotView plot=Signal::derive(move || report.with(|r| r.as_ref().and_then(|r| r.plots.iter().find(|p| p.key == key).cloned()))) key=key />
+        </For>
+    }
+}
+
+/// Draws one chart whenever its data change. `key` names the chart for test ids and file names.
+#[component]
+fn PlotView(plot: Signal<Option<Plot>>, key: &'static str) -> impl IntoView {
+    let canvas = NodeRef::<Canvas>::new();
+    let failure = RwSignal::new(None::<String>);
+    Effect::new(move |_| {
+        let (Some(plot), Some(canvas)) = (plot.get(), canvas.get()) else { return };
+        let ratio = web_sys::window().map(|w| w.device_pixel_ratio()).unwrap_or(1.0).max(1.0);
+        let css_width = f64::from(canvas.client_width().max(320));
+        canvas.set_width((css_width * ratio).round() as u32);
+        canvas.set_height((HEIGHT * ratio).round() as u32);
+        let Some(backend) = CanvasBackend::with_canvas_object(canvas) else {
+            failure.set(Some("This browser gave no 2-D canvas to draw on.".to_owned()));
+            return;
+        };
+        failure.set(crate::plot::draw(&backend.into_drawing_area(), &plot, ratio).err().map(|e| format!("The chart could not be drawn: {e}")));
+    });
+    let save = move |_| {
+        if let Some(p) = plot.get_untracked() {
+            match crate::plot::to_svg(&p, 900, 540) {
+                Ok(svg) => {
+                    if download(&format!("clearbore-{key}.svg"), &svg, "image/svg+xml").is_err() {
+                        failure.set(Some("The browser refused the download.".to_owned()));
+                    }
+                }
+                Err(e) => failure.set(Some(format!("The chart could not be drawn: {e}"))),
+            }
+        }
+    };
+    view! {
+        <figure class="chart" data-testid=format!("plot-{key}")>
+            <canvas node_ref=canvas style=format!("width: 100%; height: {HEIGHT}px;") role="img"
+                aria-label=move || plot.with(|p| p.as_ref().map(|p| p.title).unwrap_or("")) />
+            <figcaption>
+                {move || failure.get().map(|f| view! { <span class="failure">{f}</span> })}
+                <button type="button" class="small no-print" data-testid=format!("svg-{key}") on:click=save>"Download SVG"</button>
+            </figcaption>
+        </figure>
+    }
+}
