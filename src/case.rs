@@ -73,7 +73,11 @@ const TUBULAR_LAYOUT: &[FormItem] = &[
 const PACKED_BED_LAYOUT: &[FormItem] = &[
     Field(bed::TUBE_DIAMETER),
     Field(bed::BED_LENGTH),
+    Choice(bed::SIZE_MODE),
     Field(bed::PARTICLE_DIAMETER),
+    Field(bed::D10),
+    Field(bed::D50),
+    Field(bed::D90),
     Choice(bed::PARTICLE_SHAPE),
     Field(bed::SPHERICITY),
     Field(bed::PARTICLE_DENSITY),

@@ -293,7 +293,7 @@ async fn charts_are_drawn_sharp_on_a_high_density_screen() {
     b.click("[data-testid=tab-slurry_line]").await;
     assert_chart_drawn(&b, "settling_vs_size").await;
     b.click("[data-testid=tab-segmented_flow]").await;
-    for key in ["pressure_profile", "length_profile", "fraction_profile"] {
+    for key in ["pressure_profile", "length_profile", "fraction_profile", "bubble_length_vs_gas_fraction", "slug_length_vs_gas_fraction"] {
         assert_chart_drawn(&b, key).await;
     }
     b.screenshot("chart-gas-liquid").await;

@@ -503,6 +503,7 @@ fn case() -> Case {
             ("max_pressure_drop", (10.0, "bar")),
         ]),
         choices: HashMap::from([
+            ("size_mode", "single"),
             ("particle_shape", "sphere"),
             ("voidage_source", "entered"),
             ("flow_direction", "down"),
@@ -670,4 +671,27 @@ fn every_field_and_choice_is_listed() {
     for k in case().choices.keys() {
         assert!(choices.contains(k), "{k} not in CHOICES");
     }
+}
+
+#[test]
+fn a_size_distribution_uses_d10_and_says_so() {
+    // Fines set the pressure drop: with d10/d50/d90 = 60/100/160 µm every correlation uses d10,
+    // so the bed behaves as a bed of 60 µm particles (common practice, no source).
+    let mut single = case();
+    single.quantities.insert("particle_diameter", (60.0, "µm"));
+    let mut spread = case();
+    spread.choices.insert("size_mode", "distribution");
+    spread.quantities.insert("d10", (60.0, "µm"));
+    spread.quantities.insert("d50", (100.0, "µm"));
+    spread.quantities.insert("d90", (160.0, "µm"));
+    let a = run(&single);
+    let b = run(&spread);
+    let dp = |r: &Report| r.figure("bed_pressure_drop").unwrap().value.get();
+    assert_eq!(dp(&a), dp(&b));
+    assert!(b.check("pressure_budget").unwrap().reason.contains("d10 = 60.0 µm"));
+    assert!(!a.check("pressure_budget").unwrap().reason.contains("d10"));
+    // d10 must be the smallest.
+    spread.quantities.insert("d10", (120.0, "µm"));
+    let errors = PackedBedInput::from_source(&spread).unwrap_err();
+    assert!(errors.iter().any(|e| e.field == "d50" && e.problem.contains("d10 < d50 < d90")), "{errors:?}");
 }

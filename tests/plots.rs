@@ -105,3 +105,25 @@ fn pressure_falls_along_the_coil_to_the_regulator_setting() {
         assert!((0.0..=1.0).contains(v));
     }
 }
+
+#[test]
+fn junction_lengths_follow_the_squeezing_law_across_gas_fractions() {
+    // Garstecki et al. (2006), α = 1: L_B/W = 1 + Q_G/Q_L = 1 + β/(1 − β), and the no-slip slug
+    // L_S = L_B (1 − β)/β; W = the 1 mm bore of the demo.
+    let r = demo(Calculator::SegmentedFlow);
+    let bubble = r.plots.iter().find(|p| p.key == "bubble_length_vs_gas_fraction").unwrap();
+    let slug = r.plots.iter().find(|p| p.key == "slug_length_vs_gas_fraction").unwrap();
+    for ((beta, lb), (_, ls)) in line(bubble, "Garstecki").iter().zip(line(slug, "Garstecki")) {
+        let expected = 1e-3 * (1.0 + beta / (1.0 - beta));
+        assert!((lb - expected).abs() < 1e-12, "β = {beta}: {lb} vs {expected}");
+        assert!((ls - expected * (1.0 - beta) / beta).abs() < 1e-12);
+    }
+    // The operating point is the bubble-length figure at the junction.
+    let Some(Marker::Point { y, .. }) = bubble.markers.first() else { panic!("no point") };
+    assert!((y - r.figure("bubble_length").unwrap().value.get()).abs() < 1e-12);
+    // Every correlation's bubble grows with the gas fraction.
+    for s in &bubble.series {
+        let Series::Line { points, .. } = s else { continue };
+        assert!(points.windows(2).all(|w| w[1].1 > w[0].1));
+    }
+}

@@ -55,6 +55,19 @@ pub const BED_LENGTH: FieldSpec = field("bed_length", "Bed length", Dimension::L
 /// Volume-equivalent particle diameter.
 pub const PARTICLE_DIAMETER: FieldSpec = field("particle_diameter", "Particle diameter", Dimension::Length, Allowed::POSITIVE, "Volume-equivalent diameter of the particles as packed; fines and a wide size distribution raise the pressure drop.");
 /// Particle shape.
+/// One particle size, or a size distribution by d10/d50/d90.
+pub const SIZE_MODE: ChoiceSpec = ChoiceSpec {
+    key: "size_mode",
+    label: "Particle size",
+    options: &[("single", "One size"), ("distribution", "d10 / d50 / d90 (fines set the pressure drop: d10 is used)")],
+};
+/// d10 of a size distribution.
+pub const D10: FieldSpec = field("d10", "d10", Dimension::Length, Allowed::POSITIVE, "10 % of the solid volume is in smaller particles; used for the pressure drop, lifting and sizing.");
+/// d50 of a size distribution.
+pub const D50: FieldSpec = field("d50", "d50", Dimension::Length, Allowed::POSITIVE, "Median size by volume.");
+/// d90 of a size distribution.
+pub const D90: FieldSpec = field("d90", "d90", Dimension::Length, Allowed::POSITIVE, "90 % of the solid volume is in smaller particles.");
+/// Particle shape.
 pub const PARTICLE_SHAPE: ChoiceSpec = ChoiceSpec {
     key: "particle_shape",
     label: "Particle shape",
@@ -121,12 +134,12 @@ pub const MAX_PRESSURE_DROP: FieldSpec = field("max_pressure_drop", "Largest bed
 
 /// Every quantity field, in page order.
 pub const FIELDS: &[FieldSpec] = &[
-    TUBE_DIAMETER, BED_LENGTH, PARTICLE_DIAMETER, SPHERICITY, VOIDAGE, PARTICLE_DENSITY, FLOW, DENSITY, VISCOSITY,
+    TUBE_DIAMETER, BED_LENGTH, PARTICLE_DIAMETER, D10, D50, D90, SPHERICITY, VOIDAGE, PARTICLE_DENSITY, FLOW, DENSITY, VISCOSITY,
     BACK_PRESSURE, RATING, SOLID_MASS, LOADING, CONCENTRATION, STOICHIOMETRY, TARGET_RESIDENCE_TIME, MAX_PRESSURE_DROP,
 ];
 
 /// Every choice field, in page order.
-pub const CHOICES: &[ChoiceSpec] = &[PARTICLE_SHAPE, VOIDAGE_SOURCE, FLOW_DIRECTION, CONFINEMENT, BED_ROLE, SIZING];
+pub const CHOICES: &[ChoiceSpec] = &[SIZE_MODE, PARTICLE_SHAPE, VOIDAGE_SOURCE, FLOW_DIRECTION, CONFINEMENT, BED_ROLE, SIZING];
 
 /// Direction of flow through the bed.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
@@ -173,8 +186,10 @@ pub struct PackedBedInput {
     pub tube_diameter: Length,
     /// Bed length L.
     pub bed_length: Length,
-    /// Volume-equivalent particle diameter d_v.
+    /// Volume-equivalent particle diameter d_v used in every correlation (d10 of a distribution).
     pub particle_diameter: Length,
+    /// d10, d50, d90 when a distribution was entered.
+    pub distribution: Option<[Length; 3]>,
     /// Particle shape.
     pub shape: ParticleShape,
     /// Bed voidage source.
@@ -209,7 +224,33 @@ impl PackedBedInput {
         let mut c = Collector::default();
         let tube_diameter = c.take(src.quantity(&TUBE_DIAMETER));
         let bed_length = c.take(src.quantity(&BED_LENGTH));
-        let particle_diameter = c.take(src.quantity(&PARTICLE_DIAMETER));
+        let sizes = match c.take(src.choice(&SIZE_MODE)) {
+            Some(0) => c.take(src.quantity(&PARTICLE_DIAMETER)).map(|d| (d, None)),
+            Some(_) => {
+                let d10 = c.take(src.quantity(&D10));
+                let d50 = c.take(src.quantity(&D50));
+                let d90 = c.take(src.quantity(&D90));
+                match (d10, d50, d90) {
+                    (Some(a), Some(b), Some(g)) if a < b && b < g => {
+                        Some((a, Some([Length::from_si(a), Length::from_si(b), Length::from_si(g)])))
+                    }
+                    (Some(a), Some(b), Some(g)) => {
+                        let um = |v: f64| format_significant(v * 1e6, 4);
+                        c.take::<()>(Err(InputError {
+                            field: D50.key,
+                            label: D50.label,
+                            given: format!("d10 {} µm, d50 {} µm, d90 {} µm", um(a), um(b), um(g)),
+                            problem: "allowed: 0 < d10 < d50 < d90".to_owned(),
+                        }));
+                        None
+                    }
+                    _ => None,
+                }
+            }
+            None => None,
+        };
+        let particle_diameter = sizes.map(|s| s.0);
+        let distribution = sizes.and_then(|s| s.1);
         let shape = match c.take(src.choice(&PARTICLE_SHAPE)) {
             Some(0) => Some(ParticleShape::Sphere),
             Some(1) => c.take(src.quantity(&SPHERICITY)).map(|sphericity| ParticleShape::Irregular { sphericity }),
@@ -283,6 +324,7 @@ impl PackedBedInput {
             tube_diameter: Length::from_si(dt),
             bed_length: Length::from_si(l),
             particle_diameter: Length::from_si(dv),
+            distribution,
             shape,
             voidage,
             particle_density: Density::from_si(rho_p),
@@ -312,6 +354,17 @@ impl PackedBedInput {
             }
         }
         Ok(input)
+    }
+}
+
+/// Says which size the correlations used when a distribution was entered.
+fn size_note(input: &PackedBedInput) -> String {
+    match input.distribution {
+        Some([d10, ..]) => format!(
+            ", with d10 = {} µm: the fines fill the gaps between larger particles and set the pressure drop, so d10 is used (a conservative choice)",
+            format_significant(d10.si() * 1e6, 3)
+        ),
+        None => String::new(),
     }
 }
 
@@ -383,7 +436,7 @@ fn voidage_figure(voidage: &Voidage, input: &PackedBedInput) -> Result<Figure, N
     }
 }
 
-fn pressure_check(inlet: f64, dp: &Figure, back: f64, rating: f64) -> Check {
+fn pressure_check(inlet: f64, dp: &Figure, back: f64, rating: f64, size_note: &str) -> Check {
     let ratio = inlet / rating;
     let (_, worst_dp) = dp.spread();
     let worst_ratio = (back + worst_dp) / rating;
@@ -408,7 +461,7 @@ fn pressure_check(inlet: f64, dp: &Figure, back: f64, rating: f64) -> Check {
         topic: "Pressure budget",
         verdict,
         reason: format!(
-            "Inlet pressure {} bar(g) (back-pressure + {} bar bed drop by Ergun; correlations span {}–{} bar) is {:.0} % of the {} bar(g) rating{note}. A fresh bed of fines, compaction and swelling raise it further.",
+            "Inlet pressure {} bar(g) (back-pressure + {} bar bed drop by Ergun{size_note}; correlations span {}–{} bar) is {:.0} % of the {} bar(g) rating{note}. A fresh bed of fines, compaction and swelling raise it further.",
             bar(inlet),
             bar(dp.value.get()),
             bar(dp.spread().0),
@@ -671,7 +724,7 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
     }
 
     let mut checks = vec![
-        pressure_check(inlet, &dp, input.back_pressure.si(), input.rating.si()),
+        pressure_check(inlet, &dp, input.back_pressure.si(), input.rating.si(), &size_note(input)),
         lifting_check(input, u_s, umf.as_ref()),
         wall_check(diameter_ratio, &bed),
         plug_flow_check(length_ratio),

@@ -536,7 +536,8 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
         checks.push(Check { key: "compressibility", topic: "Ideal-gas assumption", verdict: Verdict::Caution, reason: note, caution: None });
     }
     checks.push(mass_transfer_check(t95, tau, share, reactive_feed.equivalents(input.concentration, input.liquid_flow)));
-    let plots = plots::profiles(&profile, input.rating);
+    let mut plots = plots::profiles(&profile, input.rating);
+    plots.extend(plots::lengths_vs_gas_fraction(&junction.flow));
     Ok(SegmentedFlowResult { report: Report { figures, checks, plots }, profile })
 }
 
