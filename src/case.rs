@@ -101,6 +101,8 @@ const PACKED_BED_LAYOUT: &[FormItem] = &[
 ];
 
 const SLURRY_LAYOUT: &[FormItem] = &[
+    Choice(slurry::OPERATION),
+    Field(slurry::PASSES),
     Field(slurry::FLOW),
     Field(slurry::DENSITY),
     Field(slurry::VISCOSITY),

@@ -111,6 +111,7 @@ fn line(elements: Vec<LineElement>) -> SlurryInput {
         loading: Loading::Mass(Fraction::from_percent(5.0)),
         back_pressure: PressureDifference::from_bar(5.0),
         rating: PressureDifference::from_bar(40.0),
+        passes: 1,
     }
 }
 
@@ -411,7 +412,7 @@ fn line_case() -> Case {
             ("back_pressure", (5.0, "bar")),
             ("pressure_rating", (40.0, "bar")),
         ]),
-        choices: HashMap::from([("size_mode", "distribution"), ("loading_basis", "mass")]),
+        choices: HashMap::from([("size_mode", "distribution"), ("loading_basis", "mass"), ("operation", "single_pass")]),
     }
 }
 
@@ -445,4 +446,21 @@ fn from_source_reports_every_bad_field_with_element_keys() {
     assert!(fields.contains(&"element_2_orientation"), "{fields:?}");
     assert!(!fields.iter().any(|f| f.starts_with("element_1")), "{fields:?}");
     assert!(SlurryInput::from_source(&line_case(), &[]).unwrap_err().iter().any(|x| x.field == "elements"));
+}
+
+#[test]
+fn a_recirculation_loop_adds_up_the_deposition_of_every_pass() {
+    // Each pass through a stirred reservoir deposits η of what reaches the element, so after n
+    // passes 1 − (1 − η)ⁿ has reached the wall (probability arithmetic, no further source).
+    let tube = LineElement { kind: ElementKind::Tubing, inner_diameter: Length::from_mm(1.0), length: Length::from_mm(1.0), orientation: Orientation::Horizontal };
+    let once = run(line(vec![tube]));
+    let eta = value(&once, "element_1_deposited_fraction");
+    assert!(eta > 0.001 && eta < 0.5, "{eta}");
+    let looped = run(SlurryInput { passes: 4, ..line(vec![tube]) });
+    let eta4 = value(&looped, "element_1_deposited_fraction");
+    assert!((eta4 - (1.0 - (1.0 - eta).powi(4))).abs() < 1e-12, "{eta4} vs {eta}");
+    assert!(verdict(&looped, "element_1_settling") >= verdict(&once, "element_1_settling"));
+    assert!(looped.check("element_1_settling").unwrap().reason.contains("over the 4 passes"));
+    let zero = SlurryInput { passes: 0, ..line(vec![tube]) }.validated().unwrap_err();
+    assert!(zero.iter().any(|e| e.field == "passes"), "{zero:?}");
 }

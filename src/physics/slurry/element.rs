@@ -121,6 +121,12 @@ fn deposited_mass_fraction(classes: &[SizeClass], speeds: &[f64], e: &LineElemen
         .clamp(0.0, 1.0)
 }
 
+/// Fraction deposited over `passes` passes when each pass deposits `per_pass` of what reaches
+/// the element: 1 − (1 − η)ⁿ (the reservoir is stirred, so every pass starts uniform).
+pub fn over_passes(per_pass: f64, passes: u32) -> f64 {
+    1.0 - (1.0 - per_pass).powf(f64::from(passes))
+}
+
 struct ElementResult {
     settling: Verdict,
     clogging: Verdict,
@@ -132,7 +138,8 @@ fn horizontal(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<
     let v90 = line.hindered(line.largest, e.inner_diameter)?;
     let z90 = fuchs_thomas::settling_number(e.length.si(), v90, d, u);
     let speeds = line.classes.iter().map(|c| line.hindered(c.diameter, e.inner_diameter)).collect::<Result<Vec<_>, _>>()?;
-    let eta = deposited_mass_fraction(&line.classes, &speeds, e, u);
+    let passes = line.input.passes;
+    let eta = over_passes(deposited_mass_fraction(&line.classes, &speeds, e, u), passes);
     let dr = line.delta_rho();
     let mu = line.input.viscosity.si();
     let theta = shields::shields_number(mu, u, d, dr, line.largest.si());
@@ -151,7 +158,7 @@ fn horizontal(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<
     };
     let tau = e.length.si() / u;
     let mut reason = format!(
-        "Horizontal {}: d90 particles fall across the {} mm bore in {} s (v_h = {} mm/s, Richardson–Zaki on the recommended drag law) against a liquid residence time of {} s (Z = {}); {} % of the solids reach the wall (Thomas/Fuchs laminar formula, integrated over the size distribution). Laminar Shields number {} for d90: {} (θ_c ≈ 0.12, Ouriemi et al. 2009, from memory).",
+        "Horizontal {}: d90 particles fall across the {} mm bore in {} s (v_h = {} mm/s, Richardson–Zaki on the recommended drag law) against a liquid residence time of {} s (Z = {}); {} % of the solids reach the wall{} (Thomas/Fuchs laminar formula, integrated over the size distribution). Laminar Shields number {} for d90: {} (θ_c ≈ 0.12, Ouriemi et al. 2009, from memory).",
         e.kind.word(),
         format_significant(d * 1e3, 3),
         format_significant(d / v90, 3),
@@ -159,6 +166,7 @@ fn horizontal(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<
         format_significant(tau, 3),
         format_significant(z90, 3),
         format_significant(eta * 100.0, 3),
+        if passes > 1 { format!(" over the {passes} passes of the loop") } else { String::new() },
         format_significant(theta, 3),
         if moving { "a settled layer is pushed along as bed load but can still grow" } else { "a settled layer stays put and grows" },
     );
@@ -168,7 +176,7 @@ fn horizontal(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<
     reason.push_str(" To fix:");
     // Minimum flow for η ≤ 1 %: Z ∝ 1/U, so η falls with flow; solved in ln Q.
     let q = line.input.flow.si();
-    let at = |ln_q: f64| deposited_mass_fraction(&line.classes, &speeds, e, ln_q.exp() / area) - DEPOSIT_CAUTION;
+    let at = |ln_q: f64| over_passes(deposited_mass_fraction(&line.classes, &speeds, e, ln_q.exp() / area), passes) - DEPOSIT_CAUTION;
     match brent(at, q.ln(), (q * FLOW_SEARCH_FACTOR).ln(), Tolerance::TIGHT) {
         Ok(ln_q) => {
             let q_min = ln_q.exp();
@@ -181,7 +189,7 @@ fn horizontal(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<
     reason.push_str(&format!(" {} mL/min would move a settled d90 layer (θ = θ_c);", ml_min(q_c)));
     // Largest single size with η ≤ 1 % at this flow: v_h rises with d; solved in ln d.
     let size_at = |ln_d: f64| match line.hindered(Length::from_si(ln_d.exp()), e.inner_diameter) {
-        Ok(v) => fuchs_thomas::deposited_fraction(fuchs_thomas::settling_number(e.length.si(), v, d, u)) - DEPOSIT_CAUTION,
+        Ok(v) => over_passes(fuchs_thomas::deposited_fraction(fuchs_thomas::settling_number(e.length.si(), v, d, u)), passes) - DEPOSIT_CAUTION,
         Err(_) => f64::NAN,
     };
     match brent(size_at, SMALLEST_SEARCHED.ln(), line.largest.si().ln(), Tolerance::TIGHT) {

@@ -75,6 +75,14 @@ pub const ELEMENT_LENGTH: FieldSpec = field("length", "Length", Dimension::Lengt
 
 /// One size or a distribution.
 pub const SIZE_MODE: ChoiceSpec = ChoiceSpec { key: "size_mode", label: "Particle size", options: &[("single", "One size"), ("distribution", "d10 / d50 / d90")] };
+/// Single pass or a recirculation loop through a stirred reservoir.
+pub const OPERATION: ChoiceSpec = ChoiceSpec {
+    key: "operation",
+    label: "Operation",
+    options: &[("single_pass", "Single pass"), ("recirculation", "Recirculation loop (stirred reservoir)")],
+};
+/// Passes of the slurry through the line in a recirculation loop.
+pub const PASSES: FieldSpec = field("passes", "Number of passes", Dimension::Number, Allowed::COUNT, "How many times the slurry goes round the loop; deposition adds up over the passes.");
 /// Loading by mass or by volume.
 pub const LOADING_BASIS: ChoiceSpec = ChoiceSpec { key: "loading_basis", label: "Loading basis", options: &[("mass", "wt %"), ("volume", "vol %")] };
 /// Element kind.
@@ -207,6 +215,8 @@ pub struct SlurryInput {
     pub back_pressure: PressureDifference,
     /// Lowest component rating, gauge.
     pub rating: PressureDifference,
+    /// Passes through the line: 1 for a single pass, more in a recirculation loop.
+    pub passes: u32,
 }
 
 /// Field name used for errors about the list of elements as a whole.
@@ -266,6 +276,9 @@ impl SlurryInput {
         }
         if !(self.back_pressure.si().is_finite() && self.back_pressure.si() >= 0.0) {
             errors.push(InputError { field: BACK_PRESSURE.key, label: BACK_PRESSURE.label, given: format!("{} Pa", self.back_pressure.si()), problem: "allowed: ≥ 0".to_owned() });
+        }
+        if self.passes == 0 {
+            errors.push(InputError { field: PASSES.key, label: PASSES.label, given: "0".to_owned(), problem: "allowed: ≥ 1, whole number".to_owned() });
         }
         if !(self.sphericity > 0.0 && self.sphericity <= 1.0) {
             errors.push(InputError { field: SPHERICITY.key, label: SPHERICITY.label, given: format!("{}", self.sphericity), problem: "allowed: > 0 and ≤ 1".to_owned() });
@@ -361,9 +374,15 @@ impl SlurryInput {
         let loading_value = c.take(src.quantity(&LOADING));
         let back_pressure = c.take(src.quantity(&BACK_PRESSURE));
         let rating = c.take(src.quantity(&RATING));
+        let passes = match c.take(src.choice(&OPERATION)) {
+            // Validated as a whole number ≥ 1; saturates only beyond u32::MAX.
+            Some(1) => c.take(src.quantity(&PASSES)).map(|n| n.min(f64::from(u32::MAX)) as u32),
+            Some(_) => Some(1),
+            None => None,
+        };
         let errors = c.into_errors();
-        let (Some(flow), Some(rho), Some(mu), Some(rho_p), Some(size), Some(phi), Some(basis), Some(w), Some(bp), Some(rating), true) =
-            (flow, density, viscosity, particle_density, size, sphericity, basis, loading_value, back_pressure, rating, errors.is_empty())
+        let (Some(flow), Some(rho), Some(mu), Some(rho_p), Some(size), Some(phi), Some(basis), Some(w), Some(bp), Some(rating), Some(passes), true) =
+            (flow, density, viscosity, particle_density, size, sphericity, basis, loading_value, back_pressure, rating, passes, errors.is_empty())
         else {
             return Err(errors);
         };
@@ -378,6 +397,7 @@ impl SlurryInput {
             loading: if basis == 0 { Loading::Mass(Fraction::from_si(w)) } else { Loading::Volume(Fraction::from_si(w)) },
             back_pressure: PressureDifference::from_si(bp),
             rating: PressureDifference::from_si(rating),
+            passes,
         }
         .validated()
     }
