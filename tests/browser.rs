@@ -300,3 +300,29 @@ async fn charts_are_drawn_sharp_on_a_high_density_screen() {
     assert_clean(&b).await;
     b.close().await;
 }
+
+#[tokio::test]
+async fn choosing_a_solvent_and_temperature_updates_properties_and_flags_boiling() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    b.click("[data-testid=tab-slurry_line]").await;
+    b.wait_for("[data-testid=result-liquid_density]").await;
+    // Acetonitrile at 25 °C from the fitted model (0.7769 g/mL; thermo 0.6.1 reference values).
+    assert_eq!(b.text("[data-testid=result-liquid_density]").await, "0.7769");
+    let dp = b.text("[data-testid=result-total_pressure_drop]").await;
+    b.choose("choice-liquid", "dichloromethane").await;
+    b.text_when("[data-testid=result-liquid_density]", |t| t != "0.7769").await;
+    b.text_when("[data-testid=result-total_pressure_drop]", |t| t != dp).await;
+    // DCM at 60 °C with no back-pressure boils: a problem with its caution beside it.
+    b.type_into("temperature", "60").await;
+    b.type_into("back_pressure", "0").await;
+    b.text_when("[data-testid=verdict-boiling]", |t| t.to_lowercase().contains("problem")).await;
+    assert!(b.text("[data-testid=caution-boiling]").await.contains("back-pressure"));
+    // Outside the fitted range the property row is marked and the warning is in its details.
+    b.type_into("back_pressure", "20").await;
+    b.type_into("temperature", "130").await;
+    b.wait_for("[data-testid=results] tr.warned [data-testid=result-liquid_density]").await;
+    b.screenshot("solvent-boiling").await;
+    assert_clean(&b).await;
+    b.close().await;
+}

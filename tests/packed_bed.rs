@@ -504,6 +504,7 @@ fn case() -> Case {
         ]),
         choices: HashMap::from([
             ("size_mode", "single"),
+            ("liquid", "custom"),
             ("particle_shape", "sphere"),
             ("voidage_source", "entered"),
             ("flow_direction", "down"),

@@ -5,6 +5,7 @@
 
 use std::collections::HashMap;
 
+use clearbore::physics::fluids::selection::LiquidSelection;
 use clearbore::physics::form::{ChoiceSpec, FieldSource};
 use clearbore::physics::input::{FieldSpec, InputError};
 use clearbore::physics::pipe_flow::hagen_poiseuille;
@@ -103,6 +104,7 @@ fn line(elements: Vec<LineElement>) -> SlurryInput {
     SlurryInput {
         elements,
         flow: VolumetricFlow::from_ml_per_min(1.0),
+        liquid: LiquidSelection::Custom { density: Density::from_kg_per_m3(776.0), viscosity: DynamicViscosity::from_mpa_s(0.34) },
         density: Density::from_kg_per_m3(776.0),
         viscosity: DynamicViscosity::from_mpa_s(0.34),
         particle_density: Density::from_kg_per_m3(2430.0),
@@ -412,7 +414,7 @@ fn line_case() -> Case {
             ("back_pressure", (5.0, "bar")),
             ("pressure_rating", (40.0, "bar")),
         ]),
-        choices: HashMap::from([("size_mode", "distribution"), ("loading_basis", "mass"), ("operation", "single_pass")]),
+        choices: HashMap::from([("size_mode", "distribution"), ("loading_basis", "mass"), ("operation", "single_pass"), ("liquid", "custom")]),
     }
 }
 

@@ -3,6 +3,7 @@
 
 pub mod mixtures;
 pub mod models;
+pub mod selection;
 pub mod solvent_data;
 pub mod solvents;
 

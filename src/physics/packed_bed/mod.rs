@@ -32,6 +32,7 @@ use self::packing::{ParticleShape, Voidage, VoidageSource};
 use self::pressure_drop::RECOMMENDED;
 use self::quantities::{Mass, SpecificAmount};
 use self::sizing::SizingProblem;
+use super::fluids::selection::{self, LiquidSelection};
 use super::form::{ChoiceSpec, Collector, FieldSource};
 use super::input::{Allowed, FieldSpec, InputError};
 use super::numeric::RootError;
@@ -134,12 +135,12 @@ pub const MAX_PRESSURE_DROP: FieldSpec = field("max_pressure_drop", "Largest bed
 
 /// Every quantity field, in page order.
 pub const FIELDS: &[FieldSpec] = &[
-    TUBE_DIAMETER, BED_LENGTH, PARTICLE_DIAMETER, D10, D50, D90, SPHERICITY, VOIDAGE, PARTICLE_DENSITY, FLOW, DENSITY, VISCOSITY,
+    selection::TEMPERATURE, TUBE_DIAMETER, BED_LENGTH, PARTICLE_DIAMETER, D10, D50, D90, SPHERICITY, VOIDAGE, PARTICLE_DENSITY, FLOW, DENSITY, VISCOSITY,
     BACK_PRESSURE, RATING, SOLID_MASS, LOADING, CONCENTRATION, STOICHIOMETRY, TARGET_RESIDENCE_TIME, MAX_PRESSURE_DROP,
 ];
 
 /// Every choice field, in page order.
-pub const CHOICES: &[ChoiceSpec] = &[SIZE_MODE, PARTICLE_SHAPE, VOIDAGE_SOURCE, FLOW_DIRECTION, CONFINEMENT, BED_ROLE, SIZING];
+pub const CHOICES: &[ChoiceSpec] = &[selection::LIQUID, SIZE_MODE, PARTICLE_SHAPE, VOIDAGE_SOURCE, FLOW_DIRECTION, CONFINEMENT, BED_ROLE, SIZING];
 
 /// Direction of flow through the bed.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
@@ -200,7 +201,9 @@ pub struct PackedBedInput {
     pub flow: VolumetricFlow,
     /// Flow direction and confinement.
     pub direction: FlowDirection,
-    /// Liquid density.
+    /// The liquid: a built-in solvent at a temperature, or entered properties.
+    pub liquid: LiquidSelection,
+    /// Liquid density at the working temperature (from `liquid`).
     pub density: Density,
     /// Liquid viscosity.
     pub viscosity: DynamicViscosity,
@@ -273,8 +276,22 @@ impl PackedBedInput {
             },
             None => None,
         };
-        let density = c.take(src.quantity(&DENSITY));
-        let viscosity = c.take(src.quantity(&VISCOSITY));
+        let liquid = selection::read(src, &mut c, &DENSITY, &VISCOSITY);
+        let properties = match liquid.map(|l| l.properties()) {
+            Some(Ok(p)) => Some(p),
+            Some(Err(e)) => {
+                c.take::<()>(Err(InputError {
+                    field: selection::TEMPERATURE.key,
+                    label: selection::TEMPERATURE.label,
+                    given: format!("{} K", format_significant(e.temperature_k, 4)),
+                    problem: e.to_string(),
+                }));
+                None
+            }
+            None => None,
+        };
+        let density = properties.as_ref().map(|p| p.0.si());
+        let viscosity = properties.as_ref().map(|p| p.1.si());
         let back_pressure = c.take(src.quantity(&BACK_PRESSURE));
         let rating = c.take(src.quantity(&RATING));
         let solid_mass = c.take(src.quantity(&SOLID_MASS));
@@ -330,6 +347,7 @@ impl PackedBedInput {
             particle_density: Density::from_si(rho_p),
             flow: VolumetricFlow::from_si(q),
             direction,
+            liquid: liquid.unwrap_or(LiquidSelection::Custom { density: Density::from_si(rho), viscosity: DynamicViscosity::from_si(mu) }),
             density: Density::from_si(rho),
             viscosity: DynamicViscosity::from_si(mu),
             back_pressure: PressureDifference::from_si(bp),
@@ -723,6 +741,7 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
         )?);
     }
 
+    figures.splice(0..0, input.liquid.figures()?);
     let mut checks = vec![
         pressure_check(inlet, &dp, input.back_pressure.si(), input.rating.si(), &size_note(input)),
         lifting_check(input, u_s, umf.as_ref()),
@@ -732,6 +751,7 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
     if let Some(target) = &input.sizing {
         checks.push(sizing_figures_and_check(input, target, eps, &mut figures)?);
     }
+    checks.extend(input.liquid.boiling_check(crate::physics::units::Pressure::from_gauge(input.back_pressure, crate::physics::units::STANDARD_ATMOSPHERE)));
     let lifting_flow = umf.as_ref().map(|f| f.value.get() * crate::physics::pipe_flow::bore_area(input.tube_diameter));
     let plots = vec![plots::pressure_drop_vs_flow(input, &bed, lifting_flow)?];
     Ok(Report { figures, checks, plots })

@@ -98,28 +98,7 @@ pub const BACK_PRESSURE: FieldSpec = field("back_pressure", "Back-pressure (gaug
 /// Lowest component rating (gauge).
 pub const RATING: FieldSpec = field("pressure_rating", "Lowest component rating (gauge)", Dimension::PressureDifference, Allowed::POSITIVE, "Lowest working-pressure rating among tubing at temperature, fittings, mixer, regulator and sensors.");
 /// The liquid.
-pub const SOLVENT: ChoiceSpec = ChoiceSpec {
-    key: "solvent",
-    label: "Liquid",
-    options: &[
-        ("water", "Water"),
-        ("methanol", "Methanol"),
-        ("ethanol", "Ethanol"),
-        ("two_propanol", "2-Propanol"),
-        ("acetonitrile", "Acetonitrile"),
-        ("acetone", "Acetone"),
-        ("thf", "THF"),
-        ("me_thf", "2-MeTHF"),
-        ("ethyl_acetate", "Ethyl acetate"),
-        ("toluene", "Toluene"),
-        ("heptane", "n-Heptane"),
-        ("dichloromethane", "Dichloromethane"),
-        ("dmf", "DMF"),
-        ("dmso", "DMSO"),
-        ("nmp", "NMP"),
-        ("custom", "Other liquid (enter its properties)"),
-    ],
-};
+pub const SOLVENT: ChoiceSpec = ChoiceSpec { key: "solvent", label: "Liquid", options: fluids::selection::LIQUID_OPTIONS };
 /// Where the gas solubility comes from for a built-in solvent.
 pub const SOLUBILITY_SOURCE: ChoiceSpec = ChoiceSpec {
     key: "solubility_source",

@@ -460,7 +460,8 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
     let drift = input.particle(largest).drift();
     let line = Line { input, phi, mu_s, drift, classes: input.size.classes(), largest };
 
-    let mut figures = vec![Figure::single("solids_volume_fraction", "Solids volume fraction", Dimension::Fraction, FRACTION_INFO, phi, Vec::new())?, mu_fig.clone()];
+    let mut figures = input.liquid.figures()?;
+    figures.extend([Figure::single("solids_volume_fraction", "Solids volume fraction", Dimension::Fraction, FRACTION_INFO, phi, Vec::new())?, mu_fig.clone()]);
     let mut checks = Vec::new();
     if drift != Drift::Neutral {
         figures.push(terminal_velocity_spread(&input.particle(input.size.median()), "terminal_velocity", "Terminal settling velocity (d50, single particle)")?);
@@ -550,6 +551,7 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
         .filter(|(_, r)| r.settling.max(r.clogging) != Verdict::Fine)
         .map(|(i, r)| format!("element {} ({}, {})", i + 1, input.elements[i].kind.word(), r.settling.max(r.clogging).word()))
         .collect();
+    checks.extend(input.liquid.boiling_check(crate::physics::units::Pressure::from_gauge(input.back_pressure, crate::physics::units::STANDARD_ATMOSPHERE)));
     let verdict = checks.iter().map(|c| c.verdict).max().unwrap_or(Verdict::Fine);
     // The line verdict first: it is what the user reads before the per-element detail.
     checks.insert(0, Check {

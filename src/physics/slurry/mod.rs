@@ -21,6 +21,7 @@ use serde::Serialize;
 
 use self::keys::MAX_ELEMENTS;
 use self::size_distribution::ParticleSize;
+use super::fluids::selection::{self, LiquidSelection};
 use super::form::{ChoiceSpec, Collector, FieldSource};
 use super::input::{Allowed, FieldSpec, InputError};
 use super::settling::Particle;
@@ -199,7 +200,9 @@ pub struct SlurryInput {
     pub elements: Vec<LineElement>,
     /// Total flow.
     pub flow: VolumetricFlow,
-    /// Liquid density.
+    /// The liquid: a built-in solvent at a temperature, or entered properties.
+    pub liquid: LiquidSelection,
+    /// Liquid density at the working temperature (from `liquid`).
     pub density: Density,
     /// Liquid viscosity.
     pub viscosity: DynamicViscosity,
@@ -353,8 +356,22 @@ impl SlurryInput {
             }
         }
         let flow = c.take(src.quantity(&FLOW));
-        let density = c.take(src.quantity(&DENSITY));
-        let viscosity = c.take(src.quantity(&VISCOSITY));
+        let liquid = selection::read(src, &mut c, &DENSITY, &VISCOSITY);
+        let properties = match liquid.map(|l| l.properties()) {
+            Some(Ok(p)) => Some(p),
+            Some(Err(e)) => {
+                c.take::<()>(Err(InputError {
+                    field: selection::TEMPERATURE.key,
+                    label: selection::TEMPERATURE.label,
+                    given: format!("{} K", format_significant(e.temperature_k, 4)),
+                    problem: e.to_string(),
+                }));
+                None
+            }
+            None => None,
+        };
+        let density = properties.as_ref().map(|p| p.0.si());
+        let viscosity = properties.as_ref().map(|p| p.1.si());
         let particle_density = c.take(src.quantity(&PARTICLE_DENSITY));
         let size = match c.take(src.choice(&SIZE_MODE)) {
             Some(0) => c.take(src.quantity(&PARTICLE_SIZE)).map(|d| ParticleSize::Single { diameter: Length::from_si(d) }),
@@ -389,6 +406,7 @@ impl SlurryInput {
         Self {
             elements: line,
             flow: VolumetricFlow::from_si(flow),
+            liquid: liquid.unwrap_or(LiquidSelection::Custom { density: Density::from_si(rho), viscosity: DynamicViscosity::from_si(mu) }),
             density: Density::from_si(rho),
             viscosity: DynamicViscosity::from_si(mu),
             particle_density: Density::from_si(rho_p),
