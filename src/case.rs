@@ -72,6 +72,7 @@ const TUBULAR_LAYOUT: &[FormItem] = &[
 
 const PACKED_BED_LAYOUT: &[FormItem] = &[
     Field(bed::TUBE_DIAMETER),
+    Choice(bed::BED_LENGTH_SOURCE),
     Field(bed::BED_LENGTH),
     Choice(bed::SIZE_MODE),
     Field(bed::PARTICLE_DIAMETER),
@@ -91,7 +92,9 @@ const PACKED_BED_LAYOUT: &[FormItem] = &[
     Field(bed::DENSITY),
     Field(bed::VISCOSITY),
     Field(bed::BACK_PRESSURE),
+    Field(bed::PUMP_LIMIT),
     Field(bed::RATING),
+    Field(bed::FITTING_RATING),
     Field(bed::SOLID_MASS),
     Choice(bed::BED_ROLE),
     Field(bed::LOADING),

@@ -494,7 +494,9 @@ fn case() -> Case {
             ("density", (1.0, "g/mL")),
             ("viscosity", (1.0, "mPa·s")),
             ("back_pressure", (5.0, "bar")),
+            ("pump_limit", (100.0, "bar")),
             ("pressure_rating", (40.0, "bar")),
+            ("fitting_rating", (60.0, "bar")),
             ("solid_mass", (2.0, "g")),
             ("loading", (1.5, "mmol/g")),
             ("concentration", (0.2, "mol/L")),
@@ -504,6 +506,7 @@ fn case() -> Case {
         ]),
         choices: HashMap::from([
             ("size_mode", "single"),
+            ("bed_length_source", "entered"),
             ("liquid", "custom"),
             ("particle_shape", "sphere"),
             ("voidage_source", "entered"),
@@ -695,4 +698,42 @@ fn a_size_distribution_uses_d10_and_says_so() {
     spread.quantities.insert("d10", (120.0, "µm"));
     let errors = PackedBedInput::from_source(&spread).unwrap_err();
     assert!(errors.iter().any(|e| e.field == "d50" && e.problem.contains("d10 < d50 < d90")), "{errors:?}");
+}
+
+#[test]
+fn bed_length_can_follow_from_the_mass_packed() {
+    // L = m / (ρ_p (1 − ε) π D_t²/4): 2 g at 2500 kg/m³ with ε = 0.4 in 6.6 mm is
+    // 2e-3 / (2500 × 0.6 × π × 3.3e-3²) = 38.97 mm (hand calculation).
+    let mut c = case();
+    c.choices.insert("bed_length_source", "from_mass");
+    let input = PackedBedInput::from_source(&c).unwrap();
+    let expected = 2e-3 / (2500.0 * 0.6 * std::f64::consts::PI * 3.3e-3 * 3.3e-3);
+    assert!((input.bed_length.si() / expected - 1.0).abs() < 1e-12, "{}", input.bed_length.si());
+    assert!((expected - 0.038_97).abs() < 1e-5);
+    // The full bed then holds exactly the mass packed.
+    let r = run(&c);
+    assert!((r.figure("packed_mass").unwrap().value.get() - 2e-3).abs() < 1e-12);
+}
+
+#[test]
+fn sizing_gives_the_narrowest_cartridge_for_these_particles() {
+    let r = run(&case());
+    let d = r.figure("narrowest_tube_diameter").unwrap().value.get();
+    let l = r.figure("narrowest_tube_length").unwrap().value.get();
+    // The pair keeps the 2 min residence time at ε = 0.4: L = τ Q / (ε π D²/4).
+    let expected_l = 120.0 * (1e-6 / 60.0) / (0.4 * std::f64::consts::PI * d * d / 4.0);
+    assert!((l / expected_l - 1.0).abs() < 1e-9);
+    assert!(r.check("sizing").unwrap().reason.contains("narrowest cartridge"));
+}
+
+#[test]
+fn the_weakest_of_pump_cartridge_and_fittings_sets_the_limit() {
+    let mut c = case();
+    c.quantities.insert("fitting_rating", (25.0, "bar"));
+    let input = PackedBedInput::from_source(&c).unwrap();
+    assert_eq!((input.rating.si(), input.rating_part), (25e5, "fittings and tubing"));
+    let r = run(&c);
+    assert!(r.check("pressure_budget").unwrap().reason.contains("limit of the fittings and tubing"));
+    c.quantities.insert("pump_limit", (10.0, "bar"));
+    assert_eq!(PackedBedInput::from_source(&c).unwrap().rating_part, "pump");
 }

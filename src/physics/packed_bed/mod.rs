@@ -56,6 +56,12 @@ pub const BED_LENGTH: FieldSpec = field("bed_length", "Bed length", Dimension::L
 /// Volume-equivalent particle diameter.
 pub const PARTICLE_DIAMETER: FieldSpec = field("particle_diameter", "Particle diameter", Dimension::Length, Allowed::POSITIVE, "Volume-equivalent diameter of the particles as packed; fines and a wide size distribution raise the pressure drop.");
 /// Particle shape.
+/// Whether the bed length is entered or follows from the mass packed.
+pub const BED_LENGTH_SOURCE: ChoiceSpec = ChoiceSpec {
+    key: "bed_length_source",
+    label: "Bed length",
+    options: &[("entered", "Enter the bed length"), ("from_mass", "From the mass packed: L = m / (ρ_p (1 − ε) π D_t²/4)")],
+};
 /// One particle size, or a size distribution by d10/d50/d90.
 pub const SIZE_MODE: ChoiceSpec = ChoiceSpec {
     key: "size_mode",
@@ -107,7 +113,11 @@ pub const VISCOSITY: FieldSpec = field("viscosity", "Liquid viscosity", Dimensio
 /// Back-pressure regulator set point (gauge).
 pub const BACK_PRESSURE: FieldSpec = field("back_pressure", "Back-pressure (gauge)", Dimension::PressureDifference, NON_NEGATIVE, "Set point of the back-pressure regulator after the cartridge, above atmosphere; 0 if none.");
 /// Rating of the weakest component (gauge).
-pub const RATING: FieldSpec = field("pressure_rating", "Lowest component rating (gauge)", Dimension::PressureDifference, Allowed::POSITIVE, "Lowest working-pressure rating among cartridge, frits, fittings, tubing at temperature and sensors.");
+pub const RATING: FieldSpec = field("pressure_rating", "Cartridge rating (gauge)", Dimension::PressureDifference, Allowed::POSITIVE, "Working-pressure rating of the cartridge body with its frits and end fittings.");
+/// Pump pressure limit (gauge).
+pub const PUMP_LIMIT: FieldSpec = field("pump_limit", "Pump pressure limit (gauge)", Dimension::PressureDifference, Allowed::POSITIVE, "Highest pressure the pump delivers, or its pressure-limit setting.");
+/// Rating of the weakest fitting, tubing at temperature or sensor (gauge).
+pub const FITTING_RATING: FieldSpec = field("fitting_rating", "Fittings and tubing rating (gauge)", Dimension::PressureDifference, Allowed::POSITIVE, "Lowest rating among fittings, valves, sensors and the tubing at its temperature.");
 /// Mass of solid in the bed.
 pub const SOLID_MASS: FieldSpec = field("solid_mass", "Mass of solid packed", Dimension::Mass, Allowed::POSITIVE, "Catalyst, supported reagent or scavenger weighed into the cartridge.");
 /// Role of the solid.
@@ -136,11 +146,11 @@ pub const MAX_PRESSURE_DROP: FieldSpec = field("max_pressure_drop", "Largest bed
 /// Every quantity field, in page order.
 pub const FIELDS: &[FieldSpec] = &[
     selection::TEMPERATURE, TUBE_DIAMETER, BED_LENGTH, PARTICLE_DIAMETER, D10, D50, D90, SPHERICITY, VOIDAGE, PARTICLE_DENSITY, FLOW, DENSITY, VISCOSITY,
-    BACK_PRESSURE, RATING, SOLID_MASS, LOADING, CONCENTRATION, STOICHIOMETRY, TARGET_RESIDENCE_TIME, MAX_PRESSURE_DROP,
+    BACK_PRESSURE, PUMP_LIMIT, RATING, FITTING_RATING, SOLID_MASS, LOADING, CONCENTRATION, STOICHIOMETRY, TARGET_RESIDENCE_TIME, MAX_PRESSURE_DROP,
 ];
 
 /// Every choice field, in page order.
-pub const CHOICES: &[ChoiceSpec] = &[selection::LIQUID, SIZE_MODE, PARTICLE_SHAPE, VOIDAGE_SOURCE, FLOW_DIRECTION, CONFINEMENT, BED_ROLE, SIZING];
+pub const CHOICES: &[ChoiceSpec] = &[BED_LENGTH_SOURCE, selection::LIQUID, SIZE_MODE, PARTICLE_SHAPE, VOIDAGE_SOURCE, FLOW_DIRECTION, CONFINEMENT, BED_ROLE, SIZING];
 
 /// Direction of flow through the bed.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
@@ -211,6 +221,8 @@ pub struct PackedBedInput {
     pub back_pressure: PressureDifference,
     /// Lowest component rating, gauge.
     pub rating: PressureDifference,
+    /// Which part sets `rating`: "pump", "cartridge" or "fittings and tubing".
+    pub rating_part: &'static str,
     /// Mass of solid packed.
     pub solid_mass: Mass,
     /// Catalyst or consumed reagent.
@@ -226,7 +238,14 @@ impl PackedBedInput {
     pub fn from_source(src: &dyn FieldSource) -> Result<Self, Vec<InputError>> {
         let mut c = Collector::default();
         let tube_diameter = c.take(src.quantity(&TUBE_DIAMETER));
-        let bed_length = c.take(src.quantity(&BED_LENGTH));
+        // From the mass packed, the length is computed once the voidage is known (below); the
+        // placeholder 1 m never reaches a result.
+        let bed_length = match c.take(src.choice(&BED_LENGTH_SOURCE)) {
+            Some(0) => c.take(src.quantity(&BED_LENGTH)),
+            Some(_) => Some(1.0),
+            None => None,
+        };
+        let length_from_mass = matches!(src.choice(&BED_LENGTH_SOURCE), Ok(1));
         let sizes = match c.take(src.choice(&SIZE_MODE)) {
             Some(0) => c.take(src.quantity(&PARTICLE_DIAMETER)).map(|d| (d, None)),
             Some(_) => {
@@ -293,7 +312,15 @@ impl PackedBedInput {
         let density = properties.as_ref().map(|p| p.0.si());
         let viscosity = properties.as_ref().map(|p| p.1.si());
         let back_pressure = c.take(src.quantity(&BACK_PRESSURE));
-        let rating = c.take(src.quantity(&RATING));
+        let ratings = [
+            (c.take(src.quantity(&PUMP_LIMIT)), "pump"),
+            (c.take(src.quantity(&RATING)), "cartridge"),
+            (c.take(src.quantity(&FITTING_RATING)), "fittings and tubing"),
+        ];
+        // The weakest part sets the limit.
+        let lowest = ratings.iter().try_fold((f64::INFINITY, ""), |acc, (r, part)| r.map(|r| if r < acc.0 { (r, *part) } else { acc }));
+        let rating = lowest.map(|l| l.0);
+        let rating_part = lowest.map_or("", |l| l.1);
         let solid_mass = c.take(src.quantity(&SOLID_MASS));
         let role = match c.take(src.choice(&BED_ROLE)) {
             Some(0) => Some(BedRole::Catalyst),
@@ -352,10 +379,20 @@ impl PackedBedInput {
             viscosity: DynamicViscosity::from_si(mu),
             back_pressure: PressureDifference::from_si(bp),
             rating: PressureDifference::from_si(rating),
+            rating_part,
             solid_mass: Mass::from_si(mass),
             role,
             sizing,
         };
+        let mut input = input;
+        if length_from_mass {
+            let eps = match input.voidage {
+                VoidageSource::Entered(f) => f.si(),
+                VoidageSource::Estimated => packing::estimated_voidage(input.shape, input.particle_diameter, input.tube_diameter).0.si(),
+            };
+            let area = crate::physics::pipe_flow::bore_area(input.tube_diameter);
+            input.bed_length = Length::from_si(input.solid_mass.si() / (input.particle_density.si() * (1.0 - eps) * area));
+        }
         if input.voidage == VoidageSource::Estimated {
             let (estimate, info, _) = packing::estimated_voidage(input.shape, input.particle_diameter, input.tube_diameter);
             if !(estimate.si() > 0.0 && estimate.si() < 1.0) {
@@ -385,6 +422,14 @@ fn size_note(input: &PackedBedInput) -> String {
         None => String::new(),
     }
 }
+
+/// The narrowest cartridge for a target residence time and pressure-drop limit.
+pub const NARROWEST_TUBE_INFO: ModelInfo = ModelInfo {
+    name: "Sizing (Ergun)",
+    formula: "narrowest D_t with ΔP_Ergun(L = τ Q / (ε π D_t²/4)) = ΔP_max, solved by Brent's method",
+    source: "Ergun (1952) with the bed-volume definition",
+    validity: &[],
+};
 
 /// Fraction of the rating above which the pressure budget is a caution (common practice, no
 /// source: a 20 % margin for pressure pulsation, partial blockage and gauge error).
@@ -454,7 +499,7 @@ fn voidage_figure(voidage: &Voidage, input: &PackedBedInput) -> Result<Figure, N
     }
 }
 
-fn pressure_check(inlet: f64, dp: &Figure, back: f64, rating: f64, size_note: &str) -> Check {
+fn pressure_check(inlet: f64, dp: &Figure, back: f64, rating: f64, rating_part: &str, size_note: &str) -> Check {
     let ratio = inlet / rating;
     let (_, worst_dp) = dp.spread();
     let worst_ratio = (back + worst_dp) / rating;
@@ -479,7 +524,7 @@ fn pressure_check(inlet: f64, dp: &Figure, back: f64, rating: f64, size_note: &s
         topic: "Pressure budget",
         verdict,
         reason: format!(
-            "Inlet pressure {} bar(g) (back-pressure + {} bar bed drop by Ergun{size_note}; correlations span {}–{} bar) is {:.0} % of the {} bar(g) rating{note}. A fresh bed of fines, compaction and swelling raise it further.",
+            "Inlet pressure {} bar(g) (back-pressure + {} bar bed drop by Ergun{size_note}; correlations span {}–{} bar) is {:.0} % of the {} bar(g) limit of the {rating_part}, the lowest of pump, cartridge and fittings{note}. A fresh bed of fines, compaction and swelling raise it further.",
             bar(inlet),
             bar(dp.value.get()),
             bar(dp.spread().0),
@@ -629,6 +674,18 @@ fn sizing_figures_and_check(input: &PackedBedInput, target: &SizingTarget, voida
         if fits { "within" } else { "over" },
         bar(target.max_pressure_drop.si())
     );
+    let pair = match problem.narrowest_tube(input.particle_diameter) {
+        Ok((d, sized)) => {
+            figures.push(definition("narrowest_tube_diameter", "Narrowest cartridge ID within the limit (these particles)", Dimension::Length, NARROWEST_TUBE_INFO, d.si())?);
+            figures.push(definition("narrowest_tube_length", "Bed length in that cartridge", Dimension::Length, NARROWEST_TUBE_INFO, sized.length.si())?);
+            format!(" With these particles the narrowest cartridge within the limit is {} mm ID × {} mm.", mm(d), mm(sized.length))
+        }
+        Err(RootError::NoBracket { f_low, .. }) if f_low < 0.0 => {
+            " With these particles even a 0.2 mm ID cartridge stays within the limit.".to_owned()
+        }
+        Err(_) => " No cartridge from 0.2 to 200 mm ID keeps these particles within the limit.".to_owned(),
+    };
+    let head = head + &pair;
     let (search_low, search_high) = problem.search_interval();
     let tail = match problem.smallest_particle_diameter() {
         Ok(sized) => {
@@ -743,7 +800,7 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
 
     figures.splice(0..0, input.liquid.figures()?);
     let mut checks = vec![
-        pressure_check(inlet, &dp, input.back_pressure.si(), input.rating.si(), &size_note(input)),
+        pressure_check(inlet, &dp, input.back_pressure.si(), input.rating.si(), input.rating_part, &size_note(input)),
         lifting_check(input, u_s, umf.as_ref()),
         wall_check(diameter_ratio, &bed),
         plug_flow_check(length_ratio),

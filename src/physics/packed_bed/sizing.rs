@@ -99,10 +99,44 @@ impl SizingProblem {
     }
 }
 
+/// Narrowest and widest cartridge bores searched for [`SizingProblem::narrowest_tube`].
+pub const TUBE_SEARCH: (f64, f64) = (0.2e-3, 0.2);
+
+impl SizingProblem {
+    /// The narrowest cartridge bore whose bed of `particle`-sized solid meets the residence time
+    /// with ΔP equal to the limit, and that bed (the ID/length pair). ΔP falls as the bore
+    /// widens (shorter, slower bed: ΔP ∝ 1/D_t⁴ at low Re), so the root is unique.
+    ///
+    /// `RootError::NoBracket` with `f_low < 0` means even the narrowest bore searched
+    /// ([`TUBE_SEARCH`], and at least four particle diameters) stays within the limit.
+    pub fn narrowest_tube(&self, particle: Length) -> Result<(Length, SizedBed), RootError> {
+        let limit = self.max_pressure_drop.si();
+        let at = |ln_d: f64| SizingProblem { tube_diameter: Length::from_si(ln_d.exp()), ..*self }.sized(particle);
+        let residual = |ln_d: f64| at(ln_d).map_or(f64::NAN, |s| (s.pressure_drop.si() / limit).ln());
+        let low = TUBE_SEARCH.0.max(4.0 * particle.si());
+        let ln_d = brent(residual, low.ln(), TUBE_SEARCH.1.ln(), Tolerance::TIGHT)?;
+        let d = Length::from_si(ln_d.exp());
+        at(ln_d).map(|bed| (d, bed)).ok_or(RootError::NotFinite { x: d.si() })
+    }
+}
+
 #[cfg(test)]
 #[allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
 mod tests {
     use super::*;
+
+    #[test]
+    fn narrowest_tube_meets_the_limit_and_a_narrower_one_does_not() {
+        let p = problem(5.0, VoidageSource::Entered(Fraction::from_si(0.4)));
+        let d_p = Length::from_si(20e-6);
+        let (d, bed) = p.narrowest_tube(d_p).unwrap();
+        assert!((bed.pressure_drop.si() / 5e5 - 1.0).abs() < 1e-9);
+        let narrower = SizingProblem { tube_diameter: Length::from_si(d.si() * 0.99), ..p }.sized(d_p).unwrap();
+        assert!(narrower.pressure_drop.si() > 5e5);
+        // The pair keeps the residence time: L = τ Q / (ε π D² / 4).
+        let l = 120.0 * (1e-6 / 60.0) / (0.4 * std::f64::consts::PI * d.si() * d.si() / 4.0);
+        assert!((bed.length.si() / l - 1.0).abs() < 1e-12);
+    }
 
     fn problem(max_bar: f64, voidage: VoidageSource) -> SizingProblem {
         SizingProblem {
