@@ -150,6 +150,8 @@ const SEGMENTED_FLOW_LAYOUT: &[FormItem] = &[
     Field(gas::LIQUID_FLOW),
     Field(gas::CONCENTRATION),
     Field(gas::INNER_DIAMETER),
+    Choice(gas::JUNCTION),
+    Field(gas::JUNCTION_WIDTH),
     Field(gas::LENGTH),
     Field(gas::TEMPERATURE),
     Field(gas::BACK_PRESSURE),

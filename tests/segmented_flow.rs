@@ -46,6 +46,7 @@ fn water() -> Liquid {
 fn flow(d_mm: f64, ql: f64, qg: f64) -> TwoPhaseFlow {
     TwoPhaseFlow {
         diameter: Length::from_mm(d_mm),
+        junction_width: Length::from_mm(d_mm),
         liquid_flow: VolumetricFlow::from_ml_per_min(ql),
         gas_flow: VolumetricFlow::from_ml_per_min(qg),
         liquid: water(),
@@ -57,6 +58,7 @@ fn flow(d_mm: f64, ql: f64, qg: f64) -> TwoPhaseFlow {
 fn coil(length_m: f64, p_out_bar: f64, expansion: GasExpansion) -> Coil {
     Coil {
         diameter: Length::from_mm(1.0),
+        junction_width: Length::from_mm(1.0),
         length: Length::from_m(length_m),
         temperature: Temperature::from_celsius(25.0),
         liquid: water(),
@@ -81,6 +83,7 @@ fn dimensionless_groups_match_fluids_core() {
     for p in r["groups"].as_array().unwrap() {
         let f = TwoPhaseFlow {
             diameter: Length::from_si(num(p, "D")),
+            junction_width: Length::from_si(num(p, "D")),
             liquid_flow: VolumetricFlow::from_si(1e-8),
             gas_flow: VolumetricFlow::from_si(1e-8),
             liquid: Liquid {
@@ -378,6 +381,7 @@ fn case() -> Case {
             ("liquid_flow", (0.5, "mL/min")),
             ("concentration", (0.1, "mol/L")),
             ("inner_diameter", (1.0, "mm")),
+            ("junction_width", (1.0, "mm")),
             ("length", (5.0, "m")),
             ("temperature", (40.0, "°C")),
             ("back_pressure", (5.0, "bar")),
@@ -390,6 +394,7 @@ fn case() -> Case {
             ("solvent", "methanol"),
             ("solubility_source", "built_in"),
             ("consumption", "none"),
+            ("junction", "tee"),
         ]),
     }
 }
@@ -582,4 +587,20 @@ fn choice_keys_follow_the_enums() {
     for (i, g) in Gas::ALL.iter().enumerate() {
         assert_eq!(serde_json::to_value(g).unwrap(), sf::GAS.options[i].0);
     }
+}
+
+#[test]
+fn a_narrower_junction_forms_smaller_bubbles_by_volume() {
+    // Garstecki et al. (2006): L_B/W = 1 + α Q_G/Q_L in the junction channel; the same volume in
+    // the 1 mm tube is (W/D)² as long. With W = 0.5 mm: L_B,tube = 0.5 mm (1 + r) / 4.
+    let wide = run(&case());
+    let mut c = case();
+    c.quantities.insert("junction_width", (0.5, "mm"));
+    let narrow = run(&c);
+    let lb = |r: &Report| r.figure("bubble_length").unwrap().value.get();
+    // Same gas-to-liquid ratio at the junction up to the small change of inlet pressure.
+    assert!((lb(&narrow) / lb(&wide) - 0.125).abs() < 0.01, "{} vs {}", lb(&narrow), lb(&wide));
+    assert!(narrow.check("junction").is_none());
+    c.choices.insert("junction", "cross");
+    assert_eq!(run(&c).check("junction").unwrap().verdict, Verdict::Caution);
 }

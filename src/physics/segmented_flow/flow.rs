@@ -28,6 +28,9 @@ pub const DIAMETER: &str = "tube inner diameter D";
 pub struct TwoPhaseFlow {
     /// Tube inner diameter D.
     pub diameter: Length,
+    /// Main-channel width W of the T-junction where the bubbles form (the bore D when the
+    /// tube itself forms the junction).
+    pub junction_width: Length,
     /// Liquid volumetric flow Q_L.
     pub liquid_flow: VolumetricFlow,
     /// Actual gas volumetric flow Q_G at the local pressure and temperature.

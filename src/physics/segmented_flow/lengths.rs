@@ -42,17 +42,22 @@ impl LengthModel {
         }
     }
 
-    /// (bubble length, slug length) in m at the junction, W = D.
+    /// (bubble length, slug length) in m in the tube. The correlation gives them in the
+    /// junction's main channel of width W; a bore D ≠ W takes the same bubble and slug volumes,
+    /// so both lengths scale by (W/D)² (cylindrical bubbles, caps and film ignored; Qian–Lawal's
+    /// Re and Ca stay on the tube's two-phase velocity).
     pub fn lengths(self, flow: &TwoPhaseFlow) -> (f64, f64) {
-        let d = flow.diameter.si();
-        match self {
-            LengthModel::Garstecki => garstecki::lengths(garstecki::ALPHA, d, flow.gas_flow.si(), flow.liquid_flow.si()),
-            LengthModel::VanSteijn => garstecki::lengths(van_steijn::ALPHA, d, flow.gas_flow.si(), flow.liquid_flow.si()),
+        let w = flow.junction_width.si();
+        let (bubble, slug) = match self {
+            LengthModel::Garstecki => garstecki::lengths(garstecki::ALPHA, w, flow.gas_flow.si(), flow.liquid_flow.si()),
+            LengthModel::VanSteijn => garstecki::lengths(van_steijn::ALPHA, w, flow.gas_flow.si(), flow.liquid_flow.si()),
             LengthModel::QianLawal => {
                 let u = flow.two_phase_velocity();
-                qian_lawal::lengths(d, flow.gas_fraction(), flow.reynolds(u), flow.capillary(u))
+                qian_lawal::lengths(w, flow.gas_fraction(), flow.reynolds(u), flow.capillary(u))
             }
-        }
+        };
+        let scale = (w / flow.diameter.si()).powi(2);
+        (bubble * scale, slug * scale)
     }
 
     /// Inputs outside this correlation's range.

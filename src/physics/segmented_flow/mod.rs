@@ -99,6 +99,14 @@ pub const BACK_PRESSURE: FieldSpec = field("back_pressure", "Back-pressure (gaug
 pub const RATING: FieldSpec = field("pressure_rating", "Lowest component rating (gauge)", Dimension::PressureDifference, Allowed::POSITIVE, "Lowest working-pressure rating among tubing at temperature, fittings, mixer, regulator and sensors.");
 /// The liquid.
 pub const SOLVENT: ChoiceSpec = ChoiceSpec { key: "solvent", label: "Liquid", options: fluids::selection::LIQUID_OPTIONS };
+/// The gas–liquid junction.
+pub const JUNCTION: ChoiceSpec = ChoiceSpec {
+    key: "junction",
+    label: "Gas–liquid junction",
+    options: &[("tee", "T-junction"), ("cross", "Cross (flow-focusing) junction")],
+};
+/// Main-channel width of the junction.
+pub const JUNCTION_WIDTH: FieldSpec = field("junction_width", "Junction main-channel width", Dimension::Length, Allowed::POSITIVE, "Bore of the junction's main (liquid) channel where the bubbles pinch off; the tube's bore if the tube forms the junction.");
 /// Where the gas solubility comes from for a built-in solvent.
 pub const SOLUBILITY_SOURCE: ChoiceSpec = ChoiceSpec {
     key: "solubility_source",
@@ -120,13 +128,13 @@ pub const CONSUMED_FRACTION: FieldSpec = field("consumed_fraction", "Share of th
 
 /// Every quantity field, in page order.
 pub const FIELDS: &[FieldSpec] = &[
-    GAS_MOLE_FRACTION, GAS_FLOW, REFERENCE_TEMPERATURE, REFERENCE_PRESSURE, LIQUID_FLOW, CONCENTRATION, INNER_DIAMETER,
+    GAS_MOLE_FRACTION, GAS_FLOW, REFERENCE_TEMPERATURE, REFERENCE_PRESSURE, LIQUID_FLOW, CONCENTRATION, INNER_DIAMETER, JUNCTION_WIDTH,
     LENGTH, TEMPERATURE, BACK_PRESSURE, RATING, fluids::CUSTOM_DENSITY, fluids::CUSTOM_VISCOSITY,
     fluids::CUSTOM_SURFACE_TENSION, SOLUBILITY, DIFFUSIVITY, CONSUMED_FRACTION,
 ];
 
 /// Every choice field, in page order.
-pub const CHOICES: &[ChoiceSpec] = &[GAS, REFERENCE_STATE, SOLVENT, SOLUBILITY_SOURCE, CONSUMPTION];
+pub const CHOICES: &[ChoiceSpec] = &[GAS, REFERENCE_STATE, SOLVENT, SOLUBILITY_SOURCE, CONSUMPTION, JUNCTION];
 
 /// The liquid and where its gas data come from.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
@@ -165,6 +173,10 @@ pub struct SegmentedFlowInput {
     pub concentration: Concentration,
     /// Tube bore.
     pub inner_diameter: Length,
+    /// Junction kind: true for a cross (flow-focusing) junction, false for a T-junction.
+    pub cross_junction: bool,
+    /// Main-channel width of the junction.
+    pub junction_width: Length,
     /// Coil length.
     pub length: Length,
     /// Temperature.
@@ -210,6 +222,8 @@ impl SegmentedFlowInput {
         let liquid_flow = c.take(src.quantity(&LIQUID_FLOW));
         let concentration = c.take(src.quantity(&CONCENTRATION));
         let inner_diameter = c.take(src.quantity(&INNER_DIAMETER));
+        let cross_junction = c.take(src.choice(&JUNCTION)).map(|i| i == 1);
+        let junction_width = c.take(src.quantity(&JUNCTION_WIDTH));
         let length = c.take(src.quantity(&LENGTH));
         let temperature = c.take(src.quantity(&TEMPERATURE));
         let back_pressure = c.take(src.quantity(&BACK_PRESSURE));
@@ -248,9 +262,9 @@ impl SegmentedFlowInput {
             Some(_) => c.take(src.quantity(&CONSUMED_FRACTION)),
             None => None,
         };
-        let (Some(gas), Some(y), Some(flow), Some(state), Some(ql), Some(cn), Some(d), Some(l), Some(t), Some(bp), Some(rating), Some(liquid), Some(consumed)) = (
+        let (Some(gas), Some(y), Some(flow), Some(state), Some(ql), Some(cn), Some(d), Some(l), Some(t), Some(bp), Some(rating), Some(liquid), Some(consumed), Some(cross), Some(w)) = (
             gas, gas_mole_fraction, flow, state, liquid_flow, concentration, inner_diameter, length, temperature, back_pressure, rating,
-            liquid, consumed_fraction,
+            liquid, consumed_fraction, cross_junction, junction_width,
         ) else {
             return Err(c.into_errors());
         };
@@ -261,6 +275,8 @@ impl SegmentedFlowInput {
             liquid_flow: VolumetricFlow::from_si(ql),
             concentration: Concentration::from_si(cn),
             inner_diameter: Length::from_si(d),
+            cross_junction: cross,
+            junction_width: Length::from_si(w),
             length: Length::from_si(l),
             temperature: Temperature::from_si(t),
             back_pressure: PressureDifference::from_si(bp),
@@ -390,6 +406,7 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
     let p_out = Pressure::from_gauge(input.back_pressure, STANDARD_ATMOSPHERE);
     let coil = Coil {
         diameter: input.inner_diameter,
+        junction_width: input.junction_width,
         length: input.length,
         temperature: t,
         liquid,
@@ -509,6 +526,15 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
     ];
     if let LiquidSpec::Solvent { solvent, .. } = input.liquid {
         checks.push(boiling_check(solvent, t, p_out)?);
+    }
+    if input.cross_junction {
+        checks.push(Check {
+            key: "junction",
+            topic: "Junction",
+            verdict: Verdict::Caution,
+            reason: "The bubble- and slug-length correlations were fitted on T-junctions; a cross (flow-focusing) junction pinches bubbles off differently, so the lengths, the unit cell, the interfacial area and kLa here are indicative only. Measure the slug lengths in your own mixer.".to_owned(),
+            caution: None,
+        });
     }
     checks.push(gas_hazard_check(input));
     if let Some(note) = input.gas.compressibility_caveat(t, Pressure::from_si(profile.inlet_pressure)) {

@@ -141,6 +141,8 @@ pub enum GasExpansion {
 pub struct Coil {
     /// Tube inner diameter.
     pub diameter: Length,
+    /// Main-channel width of the junction where the bubbles form.
+    pub junction_width: Length,
     /// Coil length from the junction to the back-pressure regulator.
     pub length: Length,
     /// Temperature (isothermal).
@@ -224,6 +226,7 @@ impl Coil {
         };
         TwoPhaseFlow {
             diameter: self.diameter,
+            junction_width: self.junction_width,
             liquid_flow: self.liquid_flow,
             gas_flow: VolumetricFlow::from_si(n * GAS_CONSTANT * t / p_volume),
             liquid: self.liquid,
