@@ -124,6 +124,8 @@ const SLURRY_LAYOUT: &[FormItem] = &[
     Field(slurry::LOADING),
     Field(slurry::BACK_PRESSURE),
     Field(slurry::RATING),
+    Choice(crate::physics::tubing::MATERIAL),
+    Choice(crate::physics::tubing::SIZE),
 ];
 
 const SLURRY_ELEMENT_LAYOUT: &[FormItem] = &[

@@ -114,6 +114,7 @@ fn line(elements: Vec<LineElement>) -> SlurryInput {
         back_pressure: PressureDifference::from_bar(5.0),
         rating: PressureDifference::from_bar(40.0),
         passes: 1,
+        tubing: None,
     }
 }
 
@@ -414,7 +415,7 @@ fn line_case() -> Case {
             ("back_pressure", (5.0, "bar")),
             ("pressure_rating", (40.0, "bar")),
         ]),
-        choices: HashMap::from([("size_mode", "distribution"), ("loading_basis", "mass"), ("operation", "single_pass"), ("liquid", "custom")]),
+        choices: HashMap::from([("size_mode", "distribution"), ("loading_basis", "mass"), ("operation", "single_pass"), ("liquid", "custom"), ("tubing_material", "none")]),
     }
 }
 

@@ -14,5 +14,6 @@ pub mod report;
 pub mod segmented_flow;
 pub mod settling;
 pub mod slurry;
+pub mod tubing;
 pub mod tubular;
 pub mod units;

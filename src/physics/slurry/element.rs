@@ -524,6 +524,13 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
     };
     let inlet = input.back_pressure.si() + total;
     checks.push(pressure_check(inlet, &total_fig, input.back_pressure.si(), input.rating.si()));
+    if let Some(tubing) = &input.tubing {
+        let solvent = match input.liquid {
+            crate::physics::fluids::selection::LiquidSelection::Solvent { solvent, .. } => Some(solvent),
+            crate::physics::fluids::selection::LiquidSelection::Custom { .. } => None,
+        };
+        checks.push(crate::physics::tubing::check(tubing, crate::physics::units::PressureDifference::from_si(inlet), solvent));
+    }
     figures.push(total_fig);
     figures.push(Figure::single("inlet_pressure", "Inlet pressure (gauge)", Dimension::PressureDifference, INLET_INFO, inlet, Vec::new())?);
 

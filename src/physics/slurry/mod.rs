@@ -220,6 +220,8 @@ pub struct SlurryInput {
     pub rating: PressureDifference,
     /// Passes through the line: 1 for a single pass, more in a recirculation loop.
     pub passes: u32,
+    /// The line's tubing from the table, for its rating at temperature.
+    pub tubing: Option<crate::physics::tubing::TubingChoice>,
 }
 
 /// Field name used for errors about the list of elements as a whole.
@@ -391,6 +393,7 @@ impl SlurryInput {
         let loading_value = c.take(src.quantity(&LOADING));
         let back_pressure = c.take(src.quantity(&BACK_PRESSURE));
         let rating = c.take(src.quantity(&RATING));
+        let tubing = crate::physics::tubing::read(src, &mut c, &selection::TEMPERATURE);
         let passes = match c.take(src.choice(&OPERATION)) {
             // Validated as a whole number ≥ 1; saturates only beyond u32::MAX.
             Some(1) => c.take(src.quantity(&PASSES)).map(|n| n.min(f64::from(u32::MAX)) as u32),
@@ -398,8 +401,8 @@ impl SlurryInput {
             None => None,
         };
         let errors = c.into_errors();
-        let (Some(flow), Some(rho), Some(mu), Some(rho_p), Some(size), Some(phi), Some(basis), Some(w), Some(bp), Some(rating), Some(passes), true) =
-            (flow, density, viscosity, particle_density, size, sphericity, basis, loading_value, back_pressure, rating, passes, errors.is_empty())
+        let (Some(flow), Some(rho), Some(mu), Some(rho_p), Some(size), Some(phi), Some(basis), Some(w), Some(bp), Some(rating), Some(passes), Some(tubing), true) =
+            (flow, density, viscosity, particle_density, size, sphericity, basis, loading_value, back_pressure, rating, passes, tubing, errors.is_empty())
         else {
             return Err(errors);
         };
@@ -416,6 +419,7 @@ impl SlurryInput {
             back_pressure: PressureDifference::from_si(bp),
             rating: PressureDifference::from_si(rating),
             passes,
+            tubing,
         }
         .validated()
     }
