@@ -5,7 +5,7 @@ use serde::Serialize;
 
 use super::{PropertyError, Property, Solvent};
 use crate::physics::form::{ChoiceSpec, Collector, FieldSource};
-use crate::physics::input::{Allowed, FieldSpec};
+use crate::physics::input::{Allowed, FieldSpec, InputError};
 use crate::physics::report::{Check, Figure, ModelInfo, NumericalError, RangeWarning, Verdict};
 use crate::physics::units::{Density, Dimension, DynamicViscosity, Pressure, Temperature, format_significant};
 
@@ -75,6 +75,31 @@ pub fn read(src: &dyn FieldSource, c: &mut Collector, density: &FieldSpec, visco
             Some(LiquidSelection::Custom { density: Density::from_si(rho?), viscosity: DynamicViscosity::from_si(mu?) })
         }
     }
+}
+
+/// As [`read`], and also the density and viscosity (SI) at the working temperature; a solvent
+/// asked for far outside its models becomes an input error on the temperature field.
+pub fn read_with_properties(
+    src: &dyn FieldSource,
+    c: &mut Collector,
+    density: &FieldSpec,
+    viscosity: &FieldSpec,
+) -> (Option<LiquidSelection>, Option<f64>, Option<f64>) {
+    let liquid = read(src, c, density, viscosity);
+    let properties = match liquid.map(|l| l.properties()) {
+        Some(Ok(p)) => Some(p),
+        Some(Err(e)) => {
+            c.take::<()>(Err(InputError {
+                field: TEMPERATURE.key,
+                label: TEMPERATURE.label,
+                given: format!("{} K", format_significant(e.temperature_k, 4)),
+                problem: e.to_string(),
+            }));
+            None
+        }
+        None => None,
+    };
+    (liquid, properties.as_ref().map(|p| p.0.si()), properties.as_ref().map(|p| p.1.si()))
 }
 
 const ENTERED_DENSITY: ModelInfo = ModelInfo { name: "Entered", formula: "ρ as entered", source: "user input", validity: &[] };

@@ -358,22 +358,7 @@ impl SlurryInput {
             }
         }
         let flow = c.take(src.quantity(&FLOW));
-        let liquid = selection::read(src, &mut c, &DENSITY, &VISCOSITY);
-        let properties = match liquid.map(|l| l.properties()) {
-            Some(Ok(p)) => Some(p),
-            Some(Err(e)) => {
-                c.take::<()>(Err(InputError {
-                    field: selection::TEMPERATURE.key,
-                    label: selection::TEMPERATURE.label,
-                    given: format!("{} K", format_significant(e.temperature_k, 4)),
-                    problem: e.to_string(),
-                }));
-                None
-            }
-            None => None,
-        };
-        let density = properties.as_ref().map(|p| p.0.si());
-        let viscosity = properties.as_ref().map(|p| p.1.si());
+        let (liquid, density, viscosity) = selection::read_with_properties(src, &mut c, &DENSITY, &VISCOSITY);
         let particle_density = c.take(src.quantity(&PARTICLE_DENSITY));
         let size = match c.take(src.choice(&SIZE_MODE)) {
             Some(0) => c.take(src.quantity(&PARTICLE_SIZE)).map(|d| ParticleSize::Single { diameter: Length::from_si(d) }),
