@@ -44,11 +44,15 @@ term. At lab flows (Re_m well below 1) only its viscous constant 150 matters and
 estimates bracket it (119.8 × wall factor for Harrison–Brunner–Hecker up to 180 for \
 Kozeny–Carman and Carman), so the spread shows the real uncertainty of the constant. Below \
 Re_m = 1 it is outside the range quoted for it and reduces to its Blake–Kozeny viscous term. It \
-has no wall term: for D_t/d_p below about 20 read the Mehta–Hawley estimate too.";
+has no wall term: for D_t/d_p below about 20 read Harrison–Brunner–Hecker (wall terms) and the \
+wall-effect check too.";
 
 impl PressureDropModel {
     /// All models, the recommended one first.
-    pub const ALL: [PressureDropModel; 9] = [
+    /// The Mehta–Hawley wall correction is not among them: its formula is from memory with no
+    /// published check here, so it only annotates the wall-effect check; Harrison–Brunner–Hecker
+    /// (checked against fluids) carries the wall effect in the spread.
+    pub const ALL: [PressureDropModel; 8] = [
         PressureDropModel::Ergun,
         PressureDropModel::KozenyCarman,
         PressureDropModel::Carman,
@@ -57,7 +61,6 @@ impl PressureDropModel {
         PressureDropModel::ErdimAkgirayDemir,
         PressureDropModel::HarrisonBrunnerHecker,
         PressureDropModel::MontilletAkkariComiti,
-        PressureDropModel::MehtaHawley,
     ];
 
     /// Metadata: name, formula, source, validity bounds.
