@@ -3,10 +3,11 @@
 //! calculator's checks end to end.
 #![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
 
+mod common;
+
 use std::collections::HashMap;
 
-use clearbore::physics::form::{ChoiceSpec, FieldSource};
-use clearbore::physics::input::{FieldSpec, InputError};
+use common::Case;
 use clearbore::physics::packed_bed::flow::{BedFlow, DIAMETER_RATIO, MODIFIED_REYNOLDS, PARTICLE_REYNOLDS, VOIDAGE};
 use clearbore::physics::packed_bed::minimum_fluidisation::{FluidisationInput, minimum_fluidisation_spread};
 use clearbore::physics::packed_bed::packing::{ParticleShape, VoidageSource};
@@ -459,26 +460,6 @@ fn sizing_solution_meets_the_pressure_limit() {
 
 // ---------------------------------------------------------------- the calculator
 
-struct Case {
-    quantities: HashMap<&'static str, (f64, &'static str)>,
-    choices: HashMap<&'static str, &'static str>,
-}
-
-impl FieldSource for Case {
-    fn quantity(&self, spec: &FieldSpec) -> Result<f64, InputError> {
-        let (v, u) = self.quantities.get(spec.key).copied().ok_or_else(|| InputError {
-            field: spec.key,
-            label: spec.label,
-            given: "(missing)".to_owned(),
-            problem: "required".to_owned(),
-        })?;
-        spec.accept(v, spec.unit(u)?)
-    }
-
-    fn choice(&self, spec: &ChoiceSpec) -> Result<usize, InputError> {
-        spec.index_of(self.choices.get(spec.key).copied().unwrap_or("(missing)"))
-    }
-}
 
 /// An invented lab case: 100 µm silica-like spheres in a 6.6 mm × 50 mm cartridge, water-like
 /// liquid at 1 mL/min, down-flow, 5 bar back-pressure, 40 bar rating.

@@ -3,13 +3,14 @@
 //! of the pressure profile, validity-edge warnings, invariants, and the calculator end to end.
 #![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
 
+mod common;
+
 use std::collections::HashMap;
 
+use common::Case;
 use clearbore::physics::fluids::Liquid;
-use clearbore::physics::form::{ChoiceSpec, FieldSource};
 use clearbore::physics::gases::MolarFlow;
 use clearbore::physics::gases::reference_state::GAS_CONSTANT;
-use clearbore::physics::input::{FieldSpec, InputError};
 use clearbore::physics::report::{Report, Verdict};
 use clearbore::physics::segmented_flow::cell::UnitCell;
 use clearbore::physics::segmented_flow::flow::TwoPhaseFlow;
@@ -350,26 +351,6 @@ fn pressure_drop_rises_with_flow_for_every_model() {
 
 // ------------------------------------------------------------- the calculator
 
-struct Case {
-    quantities: HashMap<&'static str, (f64, &'static str)>,
-    choices: HashMap<&'static str, &'static str>,
-}
-
-impl FieldSource for Case {
-    fn quantity(&self, spec: &FieldSpec) -> Result<f64, InputError> {
-        let (v, u) = self.quantities.get(spec.key).copied().ok_or_else(|| InputError {
-            field: spec.key,
-            label: spec.label,
-            given: "(missing)".to_owned(),
-            problem: "required".to_owned(),
-        })?;
-        spec.accept(v, spec.unit(u)?)
-    }
-
-    fn choice(&self, spec: &ChoiceSpec) -> Result<usize, InputError> {
-        spec.index_of(self.choices.get(spec.key).copied().unwrap_or("(missing)"))
-    }
-}
 
 /// An invented lab case: 9 % O₂ in N₂ at 10 mLn/min with 0.5 mL/min methanol, 0.1 M substrate,
 /// 1 mm × 5 m coil at 40 °C, 5 bar back-pressure, 20 bar rating.

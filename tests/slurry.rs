@@ -3,11 +3,12 @@
 //! carrying, clogging, pressure, fixes, input errors, warnings and plot series).
 #![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
 
+mod common;
+
 use std::collections::HashMap;
 
+use common::Case;
 use clearbore::physics::fluids::selection::LiquidSelection;
-use clearbore::physics::form::{ChoiceSpec, FieldSource};
-use clearbore::physics::input::{FieldSpec, InputError};
 use clearbore::physics::pipe_flow::hagen_poiseuille;
 use clearbore::physics::report::{Report, Verdict};
 use clearbore::physics::settling::Particle;
@@ -379,26 +380,6 @@ fn cross_field_errors_name_the_field() {
     assert!(fields.contains(&"sphericity") && fields.contains(&"viscosity"), "{fields:?}");
 }
 
-struct Case {
-    quantities: HashMap<&'static str, (f64, &'static str)>,
-    choices: HashMap<&'static str, &'static str>,
-}
-
-impl FieldSource for Case {
-    fn quantity(&self, spec: &FieldSpec) -> Result<f64, InputError> {
-        let (v, u) = self.quantities.get(spec.key).copied().ok_or_else(|| InputError {
-            field: spec.key,
-            label: spec.label,
-            given: "(missing)".to_owned(),
-            problem: "required".to_owned(),
-        })?;
-        spec.accept(v, spec.unit(u)?)
-    }
-
-    fn choice(&self, spec: &ChoiceSpec) -> Result<usize, InputError> {
-        spec.index_of(self.choices.get(spec.key).copied().unwrap_or("(missing)"))
-    }
-}
 
 fn line_case() -> Case {
     Case {

@@ -163,6 +163,17 @@ impl Figure {
         })
     }
 
+    /// A figure given by a defining formula (no validity range, no warnings).
+    pub fn definition(
+        key: &'static str,
+        label: &'static str,
+        dimension: Dimension,
+        model: ModelInfo,
+        value: f64,
+    ) -> Result<Self, NumericalError> {
+        Self::single(key, label, dimension, model, value, Vec::new())
+    }
+
     /// Lowest and highest estimate, SI.
     pub fn spread(&self) -> (f64, f64) {
         self.estimates.iter().fold((f64::INFINITY, f64::NEG_INFINITY), |(lo, hi), e| {
@@ -170,6 +181,10 @@ impl Figure {
         })
     }
 }
+
+/// Fraction of a pressure rating above which a pressure budget is a caution (common practice, no
+/// source: a 20 % margin for pulsation, partial blockage and gauge error).
+pub const PRESSURE_MARGIN: f64 = 0.8;
 
 /// Outcome of a check, from harmless to stop-and-fix.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, PartialOrd, Ord, Serialize)]

@@ -416,9 +416,7 @@ pub const NARROWEST_TUBE_INFO: ModelInfo = ModelInfo {
     validity: &[],
 };
 
-/// Fraction of the rating above which the pressure budget is a caution (common practice, no
-/// source: a 20 % margin for pressure pulsation, partial blockage and gauge error).
-pub const PRESSURE_MARGIN: f64 = 0.8;
+pub use crate::physics::report::PRESSURE_MARGIN;
 
 const OVER_PRESSURE_CAUTION: &str = "Over-pressure can burst a cartridge or tubing or blow a fitting apart and spray hot, possibly \
 toxic liquid and catalyst. Stay below the lowest-rated component (polymer and glass parts lose \
@@ -456,10 +454,6 @@ pub const LENGTH_FOR_TIME_INFO: ModelInfo = ModelInfo {
 
 fn bar(p: f64) -> String {
     format_significant(p / 1e5, 3)
-}
-
-fn definition(key: &'static str, label: &'static str, dimension: Dimension, model: ModelInfo, value: f64) -> Result<Figure, NumericalError> {
-    Figure::single(key, label, dimension, model, value, Vec::new())
 }
 
 fn voidage_figure(voidage: &Voidage, input: &PackedBedInput) -> Result<Figure, NumericalError> {
@@ -640,7 +634,7 @@ fn sizing_figures_and_check(input: &PackedBedInput, target: &SizingTarget, voida
         tube_diameter: input.tube_diameter,
     };
     let dp = RECOMMENDED.pressure_drop(&bed).si();
-    figures.push(definition("sized_bed_length", "Bed length for the target residence time", Dimension::Length, LENGTH_FOR_TIME_INFO, length.si())?);
+    figures.push(Figure::definition("sized_bed_length", "Bed length for the target residence time", Dimension::Length, LENGTH_FOR_TIME_INFO, length.si())?);
     figures.push(Figure::single(
         "sized_bed_pressure_drop",
         "Pressure drop of that bed (these particles)",
@@ -661,8 +655,8 @@ fn sizing_figures_and_check(input: &PackedBedInput, target: &SizingTarget, voida
     );
     let pair = match problem.narrowest_tube(input.particle_diameter) {
         Ok((d, sized)) => {
-            figures.push(definition("narrowest_tube_diameter", "Narrowest cartridge ID within the limit (these particles)", Dimension::Length, NARROWEST_TUBE_INFO, d.si())?);
-            figures.push(definition("narrowest_tube_length", "Bed length in that cartridge", Dimension::Length, NARROWEST_TUBE_INFO, sized.length.si())?);
+            figures.push(Figure::definition("narrowest_tube_diameter", "Narrowest cartridge ID within the limit (these particles)", Dimension::Length, NARROWEST_TUBE_INFO, d.si())?);
+            figures.push(Figure::definition("narrowest_tube_length", "Bed length in that cartridge", Dimension::Length, NARROWEST_TUBE_INFO, sized.length.si())?);
             format!(" With these particles the narrowest cartridge within the limit is {} mm ID × {} mm.", mm(d), mm(sized.length))
         }
         Err(RootError::NoBracket { f_low, .. }) if f_low < 0.0 => {
@@ -740,12 +734,12 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
 
     let mut figures = vec![
         voidage_figure(&voidage, input)?,
-        definition("bed_volume", "Bed volume", Dimension::Volume, geometry::BED_VOLUME_INFO, v_bed.si())?,
-        definition("void_volume", "Void volume between particles", Dimension::Volume, geometry::VOID_VOLUME_INFO, v_void.si())?,
-        definition("residence_time", "Residence time between particles", Dimension::Duration, geometry::RESIDENCE_TIME_INFO, geometry::residence_time(v_void, input.flow).si())?,
-        definition("superficial_velocity", "Superficial velocity", Dimension::Velocity, geometry::SUPERFICIAL_VELOCITY_INFO, u_s.si())?,
-        definition("interstitial_velocity", "Interstitial velocity", Dimension::Velocity, geometry::INTERSTITIAL_VELOCITY_INFO, geometry::interstitial_velocity(u_s, eps).si())?,
-        definition("particle_reynolds", "Particle Reynolds number", Dimension::Number, geometry::PARTICLE_REYNOLDS_INFO, bed.particle_reynolds())?,
+        Figure::definition("bed_volume", "Bed volume", Dimension::Volume, geometry::BED_VOLUME_INFO, v_bed.si())?,
+        Figure::definition("void_volume", "Void volume between particles", Dimension::Volume, geometry::VOID_VOLUME_INFO, v_void.si())?,
+        Figure::definition("residence_time", "Residence time between particles", Dimension::Duration, geometry::RESIDENCE_TIME_INFO, geometry::residence_time(v_void, input.flow).si())?,
+        Figure::definition("superficial_velocity", "Superficial velocity", Dimension::Velocity, geometry::SUPERFICIAL_VELOCITY_INFO, u_s.si())?,
+        Figure::definition("interstitial_velocity", "Interstitial velocity", Dimension::Velocity, geometry::INTERSTITIAL_VELOCITY_INFO, geometry::interstitial_velocity(u_s, eps).si())?,
+        Figure::definition("particle_reynolds", "Particle Reynolds number", Dimension::Number, geometry::PARTICLE_REYNOLDS_INFO, bed.particle_reynolds())?,
         Figure::single(
             "diameter_ratio",
             "Tube-to-particle diameter ratio",
@@ -763,18 +757,18 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
             flow::range_warnings(&geometry::LENGTH_RATIO_INFO, &[(geometry::LENGTH_RATIO, length_ratio)]),
         )?,
         dp.clone(),
-        definition("inlet_pressure", "Inlet pressure (gauge)", Dimension::PressureDifference, INLET_PRESSURE_INFO, inlet)?,
-        definition("packed_mass", "Mass a full bed holds", Dimension::Mass, geometry::PACKED_MASS_INFO, geometry::packed_mass(v_bed, eps, input.particle_density).si())?,
+        Figure::definition("inlet_pressure", "Inlet pressure (gauge)", Dimension::PressureDifference, INLET_PRESSURE_INFO, inlet)?,
+        Figure::definition("packed_mass", "Mass a full bed holds", Dimension::Mass, geometry::PACKED_MASS_INFO, geometry::packed_mass(v_bed, eps, input.particle_density).si())?,
     ];
     if let Some(f) = &umf {
         figures.push(f.clone());
     }
     let whsv = capacity::weight_hourly_space_velocity(input.flow, input.density, input.solid_mass);
-    figures.push(definition("whsv", "Weight hourly space velocity", Dimension::Frequency, capacity::WHSV_INFO, whsv.si())?);
+    figures.push(Figure::definition("whsv", "Weight hourly space velocity", Dimension::Frequency, capacity::WHSV_INFO, whsv.si())?);
     if let BedRole::Reagent { loading, concentration, stoichiometry } = input.role {
         let n = capacity::active_amount(input.solid_mass, loading);
-        figures.push(definition("active_amount", "Active groups on the bed", Dimension::Amount, capacity::ACTIVE_AMOUNT_INFO, n.si())?);
-        figures.push(definition(
+        figures.push(Figure::definition("active_amount", "Active groups on the bed", Dimension::Amount, capacity::ACTIVE_AMOUNT_INFO, n.si())?);
+        figures.push(Figure::definition(
             "consumption_time",
             "Time to consume the bed at this feed",
             Dimension::Duration,

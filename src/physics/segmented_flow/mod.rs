@@ -311,9 +311,7 @@ impl SegmentedFlowInput {
     }
 }
 
-/// Fraction of the rating above which the pressure budget is a caution (common practice, no
-/// source: a 20 % margin for pressure pulsation, partial blockage and gauge error).
-pub const PRESSURE_MARGIN: f64 = 0.8;
+pub use crate::physics::report::PRESSURE_MARGIN;
 
 /// Limiting oxygen concentration taken for common flammable solvents with N₂ diluent at ambient
 /// conditions: ~10 vol % (from memory: NFPA 69 / Zabetakis values as listed in `practice.md`
@@ -358,10 +356,6 @@ pub const OUTLET_PRESSURE_INFO: ModelInfo = ModelInfo {
     source: "definition (ambient taken as 101.325 kPa)",
     validity: &[],
 };
-
-fn definition(key: &'static str, label: &'static str, dimension: Dimension, model: ModelInfo, value: f64) -> Result<Figure, SegmentedFlowError> {
-    Ok(Figure::single(key, label, dimension, model, value, Vec::new())?)
-}
 
 fn estimate(quantity: &'static str, model: ModelInfo, value: f64, recommended: bool, warnings: Vec<RangeWarning>) -> Result<Estimate, SegmentedFlowError> {
     Ok(Estimate { model, value: Finite::new(quantity, value)?, recommended, warnings })
@@ -446,18 +440,18 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
     let bond = f.bond();
 
     let mut figures = vec![
-        definition("gas_molar_flow_mmol_per_min", "Gas fed (mmol/min, all species)", Dimension::Number, reference_state::MOLAR_FLOW_INFO, feed.mmol_per_min())?,
-        definition("gas_equivalents", "Reactive gas per mole of substrate (equivalents)", Dimension::Number, reference_state::EQUIVALENTS_INFO, reactive_feed.equivalents(input.concentration, input.liquid_flow))?,
-        definition("gas_flow_inlet", "Actual gas flow at the inlet", Dimension::VolumetricFlow, reference_state::ACTUAL_FLOW_INFO, feed.si() * GAS_CONSTANT * t.kelvin() / profile.inlet_pressure)?,
-        definition("gas_flow_outlet", "Actual gas flow at the outlet", Dimension::VolumetricFlow, reference_state::ACTUAL_FLOW_INFO, f.gas_flow.si())?,
-        definition("gas_density_outlet", "Gas density at the outlet", Dimension::Density, reference_state::DENSITY_INFO, f.gas_density.si())?,
+        Figure::definition("gas_molar_flow_mmol_per_min", "Gas fed (mmol/min, all species)", Dimension::Number, reference_state::MOLAR_FLOW_INFO, feed.mmol_per_min())?,
+        Figure::definition("gas_equivalents", "Reactive gas per mole of substrate (equivalents)", Dimension::Number, reference_state::EQUIVALENTS_INFO, reactive_feed.equivalents(input.concentration, input.liquid_flow))?,
+        Figure::definition("gas_flow_inlet", "Actual gas flow at the inlet", Dimension::VolumetricFlow, reference_state::ACTUAL_FLOW_INFO, feed.si() * GAS_CONSTANT * t.kelvin() / profile.inlet_pressure)?,
+        Figure::definition("gas_flow_outlet", "Actual gas flow at the outlet", Dimension::VolumetricFlow, reference_state::ACTUAL_FLOW_INFO, f.gas_flow.si())?,
+        Figure::definition("gas_density_outlet", "Gas density at the outlet", Dimension::Density, reference_state::DENSITY_INFO, f.gas_density.si())?,
         Figure::single("gas_viscosity", "Gas viscosity", Dimension::DynamicViscosity, sutherland::INFO, gas_viscosity.si(), gas_warnings)?,
-        definition("gas_fraction_outlet", "Gas fraction β at the outlet", Dimension::Fraction, flow::BOOKKEEPING_INFO, f.gas_fraction())?,
-        definition("two_phase_velocity_outlet", "Two-phase velocity U_TP at the outlet", Dimension::Velocity, flow::BOOKKEEPING_INFO, u_tp.si())?,
+        Figure::definition("gas_fraction_outlet", "Gas fraction β at the outlet", Dimension::Fraction, flow::BOOKKEEPING_INFO, f.gas_fraction())?,
+        Figure::definition("two_phase_velocity_outlet", "Two-phase velocity U_TP at the outlet", Dimension::Velocity, flow::BOOKKEEPING_INFO, u_tp.si())?,
         Figure::single("bond", "Bond number", Dimension::Number, confinement::INFO, bond, range_warnings(&confinement::INFO, &[(confinement::BOND, bond)]))?,
-        definition("capillary_outlet", "Capillary number Ca (U_TP, outlet)", Dimension::Number, flow::GROUPS_INFO, f.capillary(u_tp))?,
-        definition("reynolds_outlet", "Reynolds number Re (U_TP, outlet)", Dimension::Number, flow::GROUPS_INFO, f.reynolds(u_tp))?,
-        definition("weber_outlet", "Weber number We (U_TP, outlet)", Dimension::Number, flow::GROUPS_INFO, f.weber(u_tp))?,
+        Figure::definition("capillary_outlet", "Capillary number Ca (U_TP, outlet)", Dimension::Number, flow::GROUPS_INFO, f.capillary(u_tp))?,
+        Figure::definition("reynolds_outlet", "Reynolds number Re (U_TP, outlet)", Dimension::Number, flow::GROUPS_INFO, f.reynolds(u_tp))?,
+        Figure::definition("weber_outlet", "Weber number We (U_TP, outlet)", Dimension::Number, flow::GROUPS_INFO, f.weber(u_tp))?,
     ];
     let ca_b = outlet.bubble.capillary;
     let ca_warn = |info: &ModelInfo| range_warnings(info, &[(CAPILLARY_BUBBLE, ca_b), (flow::DIAMETER, d)]);
@@ -476,24 +470,24 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
         ub.push(estimate("bubble velocity", liu::INFO, u, false, range_warnings(&liu::INFO, &[(CAPILLARY_BUBBLE, f.capillary(super::units::Velocity::from_si(u))), (flow::DIAMETER, d)]))?);
     }
     figures.push(spread("bubble_velocity", "Bubble velocity at the outlet", Dimension::Velocity, "Continuity with a stationary film: a mass balance, with the best-tested film correlation; Liu et al. is an empirical fit shown for the spread.", ub)?);
-    figures.push(definition("gas_holdup_outlet", "Gas holdup ε_G at the outlet", Dimension::Fraction, cell::INFO, outlet.holdup)?);
+    figures.push(Figure::definition("gas_holdup_outlet", "Gas holdup ε_G at the outlet", Dimension::Fraction, cell::INFO, outlet.holdup)?);
     let (bubble_fig, slug_fig) = lengths::length_spread(&junction.flow)?;
     figures.push(bubble_fig);
     figures.push(slug_fig);
-    figures.push(definition("bubble_length_outlet", "Bubble length at the outlet", Dimension::Length, cell::INFO, outlet.bubble_length)?);
-    figures.push(definition("unit_cell_outlet", "Unit-cell length at the outlet", Dimension::Length, cell::INFO, outlet.unit_cell_length())?);
-    figures.push(definition("bubble_frequency_per_s", "Bubble frequency (1/s)", Dimension::Number, cell::INFO, profile.frequency)?);
-    figures.push(definition("interfacial_area_m2_per_m3", "Specific interfacial area (m²/m³), outlet", Dimension::Number, cell::AREA_INFO, outlet.specific_area())?);
+    figures.push(Figure::definition("bubble_length_outlet", "Bubble length at the outlet", Dimension::Length, cell::INFO, outlet.bubble_length)?);
+    figures.push(Figure::definition("unit_cell_outlet", "Unit-cell length at the outlet", Dimension::Length, cell::INFO, outlet.unit_cell_length())?);
+    figures.push(Figure::definition("bubble_frequency_per_s", "Bubble frequency (1/s)", Dimension::Number, cell::INFO, profile.frequency)?);
+    figures.push(Figure::definition("interfacial_area_m2_per_m3", "Specific interfacial area (m²/m³), outlet", Dimension::Number, cell::AREA_INFO, outlet.specific_area())?);
     let dm = diffusivity_figure.value.get();
     figures.push(diffusivity_figure);
     let kla = mass_transfer::kla_spread(&outlet, dm)?;
     let t95 = mass_transfer::saturation_time(kla.value.get());
     figures.push(kla);
-    figures.push(definition("saturation_time", "Time to 95 % saturation of the liquid", Dimension::Duration, mass_transfer::SATURATION_INFO, t95)?);
+    figures.push(Figure::definition("saturation_time", "Time to 95 % saturation of the liquid", Dimension::Duration, mass_transfer::SATURATION_INFO, t95)?);
     let tau = profile.residence_time;
     let tau0 = std::f64::consts::PI * d * d / 4.0 * input.length.si() / input.liquid_flow.si();
-    figures.push(definition("residence_time", "Liquid residence time (segmented)", Dimension::Duration, RESIDENCE_TIME_INFO, tau)?);
-    figures.push(definition("residence_time_liquid_only", "Residence time if the liquid filled the tube", Dimension::Duration, NOMINAL_RESIDENCE_INFO, tau0)?);
+    figures.push(Figure::definition("residence_time", "Liquid residence time (segmented)", Dimension::Duration, RESIDENCE_TIME_INFO, tau)?);
+    figures.push(Figure::definition("residence_time_liquid_only", "Residence time if the liquid filled the tube", Dimension::Duration, NOMINAL_RESIDENCE_INFO, tau0)?);
 
     let p_sat = liquid.vapour_pressure;
     let partial = henry::partial_pressure(y, p_out, p_sat);
@@ -501,11 +495,11 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
     let c_sat = Concentration::from_si(solubility.value.get());
     let share = henry::dissolvable_share(c_sat, input.liquid_flow, reactive_feed);
     figures.push(solubility);
-    figures.push(definition("dissolvable_share", "Share of the fed gas the liquid could dissolve", Dimension::Number, henry::UPTAKE_INFO, share)?);
+    figures.push(Figure::definition("dissolvable_share", "Share of the fed gas the liquid could dissolve", Dimension::Number, henry::UPTAKE_INFO, share)?);
     let dp = dp_figure.value.get();
     figures.push(dp_figure);
-    figures.push(definition("outlet_pressure", "Outlet pressure (absolute)", Dimension::Pressure, OUTLET_PRESSURE_INFO, p_out.pascals())?);
-    figures.push(definition("inlet_pressure", "Inlet pressure (absolute)", Dimension::Pressure, INLET_PRESSURE_INFO, profile.inlet_pressure)?);
+    figures.push(Figure::definition("outlet_pressure", "Outlet pressure (absolute)", Dimension::Pressure, OUTLET_PRESSURE_INFO, p_out.pascals())?);
+    figures.push(Figure::definition("inlet_pressure", "Inlet pressure (absolute)", Dimension::Pressure, INLET_PRESSURE_INFO, profile.inlet_pressure)?);
     // Liquid-property range warnings (temperature outside a solvent fit) go with the figures
     // that use density, viscosity and surface tension most directly.
     for fig in figures.iter_mut().filter(|fg| fg.key == "bond" || fg.key == "pressure_drop") {

@@ -25,9 +25,7 @@ pub const DEPOSIT_PROBLEM: f64 = 0.1;
 /// Up-flow margin: U ≥ 5 v_h keeps the wall zone slower than the particles below 10 % of the bore
 /// area (this tool's margin: common practice, no source).
 pub const UPFLOW_MARGIN: f64 = 5.0;
-/// Fraction of the rating above which the pressure budget is a caution (common practice, no
-/// source: a 20 % margin for pulsation, partial blockage and gauge error).
-pub const PRESSURE_MARGIN: f64 = 0.8;
+pub use crate::physics::report::PRESSURE_MARGIN;
 /// Smallest particle size searched when solving for the largest tolerable size, 0.1 µm.
 pub const SMALLEST_SEARCHED: f64 = 1e-7;
 /// Largest flow searched, as a multiple of the entered flow.

@@ -12,12 +12,10 @@ use serde::Serialize;
 
 use super::form::ChoiceSpec;
 use super::report::{ModelInfo, RangeWarning, ValidityBound};
-use super::units::{Dimension, Length, PressureDifference, Temperature};
+use super::units::{Dimension, PressureDifference, Temperature};
 
 /// psi to Pa (NIST SP 811: 6.894 757 E+03).
 const PSI: f64 = 6_894.757;
-/// inch to m (exact).
-const INCH: f64 = 0.0254;
 
 /// Tubing material.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
@@ -204,11 +202,6 @@ impl std::fmt::Display for TubingError {
             }
         }
     }
-}
-
-/// Inner diameter of a size.
-pub fn inner_diameter(size: &Size) -> Length {
-    Length::from_si(size.id_in * INCH)
 }
 
 /// Working pressure (gauge) of `material` tubing of `size` at `t`, with a warning below the

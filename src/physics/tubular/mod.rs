@@ -11,7 +11,7 @@ use serde::Serialize;
 use super::form::{ChoiceSpec, Collector, FieldSource};
 use super::input::{Allowed, FieldSpec, InputError};
 use super::pipe_flow::{self, hagen_poiseuille};
-use super::report::{Check, Figure, ModelInfo, NumericalError, Report, Verdict};
+use super::report::{Check, Figure, NumericalError, Report, Verdict};
 use super::units::{
     Concentration, Density, Dimension, DynamicViscosity, Fraction, Length, MolarMass,
     PressureDifference, Volume, VolumetricFlow, format_significant,
@@ -61,9 +61,6 @@ pub const FIELDS: &[FieldSpec] = &[
     INNER_DIAMETER, LENGTH, FLOW, CONCENTRATION, YIELD, MOLAR_MASS, DENSITY, VISCOSITY,
     BACK_PRESSURE, RATING, RESERVOIR, PASSES,
 ];
-
-/// Quantity fields used only in a recirculation loop.
-pub const LOOP_FIELDS: &[FieldSpec] = &[RESERVOIR, PASSES];
 
 /// How the tube is operated.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
@@ -162,9 +159,7 @@ impl TubularInput {
     }
 }
 
-/// Fraction of the rating above which the pressure budget is a caution (common practice, no
-/// source: a 20 % margin for pressure pulsation, partial blockage and gauge error).
-pub const PRESSURE_MARGIN: f64 = 0.8;
+pub use crate::physics::report::PRESSURE_MARGIN;
 
 const OVER_PRESSURE_CAUTION: &str = "Over-pressure can burst tubing or blow a fitting apart and spray hot, possibly toxic \
 liquid. Stay below the lowest-rated component (tubing rating falls with temperature), use a pump \
@@ -213,10 +208,6 @@ fn regime_check(re: f64) -> Check {
     }
 }
 
-fn definition(key: &'static str, label: &'static str, dimension: Dimension, model: ModelInfo, value: f64) -> Result<Figure, NumericalError> {
-    Figure::single(key, label, dimension, model, value, Vec::new())
-}
-
 /// Computes every figure and check for the tubular reactor.
 pub fn evaluate(input: &TubularInput) -> Result<Report, NumericalError> {
     let volume = reactor::internal_volume(input.inner_diameter, input.length);
@@ -232,24 +223,24 @@ pub fn evaluate(input: &TubularInput) -> Result<Report, NumericalError> {
         .collect();
 
     let mut figures = vec![
-        definition("internal_volume", "Internal volume", Dimension::Volume, VOLUME_INFO, volume.si())?,
-        definition("residence_time", "Residence time", Dimension::Duration, RESIDENCE_TIME_INFO, tau.si())?,
-        definition("mean_velocity", "Mean velocity", Dimension::Velocity, pipe_flow::VELOCITY_INFO, u.si())?,
-        definition("reynolds", "Reynolds number", Dimension::Number, pipe_flow::REYNOLDS_INFO, re)?,
+        Figure::definition("internal_volume", "Internal volume", Dimension::Volume, VOLUME_INFO, volume.si())?,
+        Figure::definition("residence_time", "Residence time", Dimension::Duration, RESIDENCE_TIME_INFO, tau.si())?,
+        Figure::definition("mean_velocity", "Mean velocity", Dimension::Velocity, pipe_flow::VELOCITY_INFO, u.si())?,
+        Figure::definition("reynolds", "Reynolds number", Dimension::Number, pipe_flow::REYNOLDS_INFO, re)?,
         Figure::single("pressure_drop", "Line pressure drop", Dimension::PressureDifference, hagen_poiseuille::INFO, dp.si(), dp_warnings)?,
-        definition("inlet_pressure", "Inlet pressure (gauge)", Dimension::PressureDifference, pipe_flow::INLET_PRESSURE_INFO, inlet.si())?,
+        Figure::definition("inlet_pressure", "Inlet pressure (gauge)", Dimension::PressureDifference, pipe_flow::INLET_PRESSURE_INFO, inlet.si())?,
     ];
 
     let production = reactor::production(input, volume);
-    figures.push(definition("productivity", "Productivity", Dimension::MassFlow, PRODUCTIVITY_INFO, production.rate.si())?);
-    figures.push(definition("space_time_yield", "Space-time yield", Dimension::SpaceTimeYield, PRODUCTIVITY_INFO, production.space_time_yield)?);
+    figures.push(Figure::definition("productivity", "Productivity", Dimension::MassFlow, PRODUCTIVITY_INFO, production.rate.si())?);
+    figures.push(Figure::definition("space_time_yield", "Space-time yield", Dimension::SpaceTimeYield, PRODUCTIVITY_INFO, production.space_time_yield)?);
     if let Some(lp) = production.recirculation {
-        figures.push(definition("batch_volume", "Circulating batch", Dimension::Volume, LOOP_INFO, lp.batch.si())?);
-        figures.push(definition("turnover_time", "Time per pass of the batch", Dimension::Duration, LOOP_INFO, lp.turnover.si())?);
-        figures.push(definition("total_time", "Total run time", Dimension::Duration, LOOP_INFO, lp.total.si())?);
-        figures.push(definition("contact_time", "Mean time in the tube per element", Dimension::Duration, LOOP_INFO, lp.contact.si())?);
-        figures.push(definition("batch_product", "Product per batch", Dimension::Mass, LOOP_INFO, lp.product_mass_kg)?);
-        figures.push(definition("single_pass_flow", "Single-pass flow for the same contact time", Dimension::VolumetricFlow, LOOP_INFO, lp.equivalent_flow.si())?);
+        figures.push(Figure::definition("batch_volume", "Circulating batch", Dimension::Volume, LOOP_INFO, lp.batch.si())?);
+        figures.push(Figure::definition("turnover_time", "Time per pass of the batch", Dimension::Duration, LOOP_INFO, lp.turnover.si())?);
+        figures.push(Figure::definition("total_time", "Total run time", Dimension::Duration, LOOP_INFO, lp.total.si())?);
+        figures.push(Figure::definition("contact_time", "Mean time in the tube per element", Dimension::Duration, LOOP_INFO, lp.contact.si())?);
+        figures.push(Figure::definition("batch_product", "Product per batch", Dimension::Mass, LOOP_INFO, lp.product_mass_kg)?);
+        figures.push(Figure::definition("single_pass_flow", "Single-pass flow for the same contact time", Dimension::VolumetricFlow, LOOP_INFO, lp.equivalent_flow.si())?);
     }
 
     let checks = vec![pressure_check(inlet, dp, input.rating), regime_check(re)];
