@@ -329,3 +329,30 @@ async fn choosing_a_solvent_and_temperature_updates_properties_and_flags_boiling
     assert_clean(&b).await;
     b.close().await;
 }
+
+#[tokio::test]
+async fn choosing_a_solid_sets_its_density_and_a_porous_support_asks_for_its_porosity() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    b.click("[data-testid=tab-slurry_line]").await;
+    b.wait_for("[data-testid=result-particle_density_used]").await;
+    // Demo: potassium phosphate from the solids table, 2.564 g/mL (CRC via chemicals 1.5.2).
+    assert_eq!(b.text("[data-testid=result-particle_density_used]").await, "2.564");
+    assert!(!b.exists("[data-testid=input-particle_density]").await, "no density entry for a tabulated solid");
+    assert!(!b.exists("[data-testid=input-particle_porosity]").await, "no porosity for a dense solid");
+    let settling = b.text("[data-testid=result-terminal_velocity_d90]").await;
+    // Silica gel: its porosity is asked for, and at 60 % it settles as 2196 × 0.4 + 0.6 × 0.7769
+    // = 1.345 g/mL, more slowly than the phosphate.
+    b.choose("choice-solid", "silica_gel").await;
+    b.wait_for("[data-testid=input-particle_porosity]").await;
+    b.type_into("particle_porosity", "60").await;
+    b.text_when("[data-testid=result-particle_density_used]", |t| t == "1.345").await;
+    b.text_when("[data-testid=result-terminal_velocity_d90]", |t| t != settling).await;
+    // An entered density brings its field back.
+    b.choose("choice-solid", "entered").await;
+    b.wait_for("[data-testid=input-particle_density]").await;
+    b.text_when("[data-testid=result-particle_density_used]", |t| t == "2.560").await;
+    b.screenshot("solid-choice").await;
+    assert_clean(&b).await;
+    b.close().await;
+}

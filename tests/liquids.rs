@@ -3,27 +3,19 @@
 //! warns outside the fitted range, and is checked for boiling at the outlet pressure.
 #![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
 
-use clearbore::case::{Calculator, CaseFile};
+mod common;
+
+use clearbore::case::Calculator;
 use clearbore::physics::fluids::Solvent;
-use clearbore::physics::report::{Report, Verdict};
+use clearbore::physics::report::Verdict;
 use clearbore::physics::units::Temperature;
 use serde_json::json;
 
-fn with(calculator: Calculator, changes: &[(&str, serde_json::Value)]) -> Report {
-    let mut case: serde_json::Value = serde_json::from_str(calculator.demo_json()).unwrap();
-    for (k, v) in changes {
-        case["inputs"][*k] = v.clone();
-    }
-    CaseFile::from_json(&case.to_string()).unwrap().evaluate().unwrap()
-}
-
-fn value(r: &Report, key: &str) -> f64 {
-    r.figure(key).unwrap_or_else(|| panic!("no figure {key}")).value.get()
-}
+use common::{demo_with as with, value};
 
 #[test]
 fn a_solvent_at_a_temperature_sets_the_liquid_properties_everywhere() {
-    for calculator in [Calculator::PackedBed, Calculator::SlurryLine] {
+    for calculator in [Calculator::TubularReactor, Calculator::PackedBed, Calculator::SlurryLine] {
         let cold = with(calculator, &[("liquid", json!("toluene")), ("temperature", json!({"value": 20, "unit": "°C"}))]);
         let hot = with(calculator, &[("liquid", json!("toluene")), ("temperature", json!({"value": 80, "unit": "°C"}))]);
         let t = |c: f64| Temperature::from_celsius(c);
@@ -31,7 +23,11 @@ fn a_solvent_at_a_temperature_sets_the_liquid_properties_everywhere() {
         assert_eq!(value(&hot, "liquid_density"), Solvent::Toluene.density(t(80.0)).unwrap().value.si());
         assert!(value(&hot, "liquid_viscosity") < value(&cold, "liquid_viscosity"));
         // Results that depend on the viscosity follow it (laminar: pressure drop ∝ μ).
-        let dp = if calculator == Calculator::PackedBed { "bed_pressure_drop" } else { "total_pressure_drop" };
+        let dp = match calculator {
+            Calculator::TubularReactor => "pressure_drop",
+            Calculator::PackedBed => "bed_pressure_drop",
+            _ => "total_pressure_drop",
+        };
         assert!(value(&hot, dp) < value(&cold, dp), "{calculator:?}");
         // An entered liquid is used as entered.
         let custom = with(calculator, &[("liquid", json!("custom"))]);

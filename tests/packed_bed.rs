@@ -488,6 +488,7 @@ fn case() -> Case {
         ]),
         choices: HashMap::from([
             ("size_mode", "single"),
+            ("solid", "entered"),
             ("bed_length_source", "entered"),
             ("liquid", "custom"),
             ("particle_shape", "sphere"),

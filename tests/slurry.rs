@@ -12,6 +12,7 @@ use clearbore::physics::fluids::selection::LiquidSelection;
 use clearbore::physics::pipe_flow::hagen_poiseuille;
 use clearbore::physics::report::{Report, Verdict};
 use clearbore::physics::settling::Particle;
+use clearbore::physics::solids::SolidSelection;
 use clearbore::physics::slurry::series::{SeriesInput, settling_series};
 use clearbore::physics::slurry::size_distribution::ParticleSize;
 use clearbore::physics::slurry::{
@@ -108,6 +109,7 @@ fn line(elements: Vec<LineElement>) -> SlurryInput {
         liquid: LiquidSelection::Custom { density: Density::from_kg_per_m3(776.0), viscosity: DynamicViscosity::from_mpa_s(0.34) },
         density: Density::from_kg_per_m3(776.0),
         viscosity: DynamicViscosity::from_mpa_s(0.34),
+        solid: SolidSelection::Entered { density: Density::from_kg_per_m3(2430.0) },
         particle_density: Density::from_kg_per_m3(2430.0),
         size: ParticleSize::Distribution { d10: Length::from_m(20e-6), d50: Length::from_m(40e-6), d90: Length::from_m(80e-6) },
         sphericity: 1.0,
@@ -396,7 +398,7 @@ fn line_case() -> Case {
             ("back_pressure", (5.0, "bar")),
             ("pressure_rating", (40.0, "bar")),
         ]),
-        choices: HashMap::from([("size_mode", "distribution"), ("loading_basis", "mass"), ("operation", "single_pass"), ("liquid", "custom"), ("tubing_material", "none")]),
+        choices: HashMap::from([("size_mode", "distribution"), ("loading_basis", "mass"), ("operation", "single_pass"), ("liquid", "custom"), ("tubing_material", "none"), ("solid", "entered")]),
     }
 }
 

@@ -3,6 +3,8 @@
 //! table for 316), printed to whole bar: tolerance ±0.5 bar.
 #![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
 
+mod common;
+
 use clearbore::physics::fluids::Solvent;
 use clearbore::physics::tubing::{Material, SIZES, TubingError, compatibility, working_pressure};
 use clearbore::physics::units::Temperature;
@@ -67,11 +69,7 @@ fn peek_is_flagged_with_thf_dcm_and_dmso_only() {
 }
 
 fn slurry(changes: &[(&str, serde_json::Value)]) -> clearbore::physics::report::Report {
-    let mut case: serde_json::Value = serde_json::from_str(clearbore::case::SLURRY_DEMO_JSON).unwrap();
-    for (k, v) in changes {
-        case["inputs"][*k] = v.clone();
-    }
-    clearbore::case::CaseFile::from_json(&case.to_string()).unwrap().evaluate().unwrap()
+    common::demo_with(clearbore::case::Calculator::SlurryLine, changes)
 }
 
 #[test]
@@ -95,4 +93,31 @@ fn the_slurry_line_checks_its_tubing_at_temperature() {
     assert!(c.reason.contains("swells"));
     // Not from the table: no tubing check.
     assert!(slurry(&[("tubing_material", json!("none"))]).check("tubing_rating").is_none());
+}
+
+fn tubular(changes: &[(&str, serde_json::Value)]) -> clearbore::physics::report::Report {
+    common::demo_with(clearbore::case::Calculator::TubularReactor, changes)
+}
+
+#[test]
+fn the_tubular_reactor_checks_its_tubing_and_its_bore() {
+    use clearbore::physics::report::Verdict;
+    use serde_json::json;
+    // Demo: PFA 1/16″ × 0.030″ (0.762 mm) at 60 °C with a 0.76 mm bore entered: rated, no mismatch.
+    let r = tubular(&[]);
+    let c = r.check("tubing_rating").unwrap();
+    assert_eq!(c.verdict, Verdict::Fine, "{}", c.reason);
+    assert!(!c.reason.contains("not this tubing's bore"), "{}", c.reason);
+    // Its rating is the table's working pressure at the liquid's temperature.
+    let (rating, _) = working_pressure(Material::Pfa, SIZES.iter().find(|s| s.key == "1_16x0_030").unwrap(), Temperature::from_celsius(60.0)).unwrap();
+    assert!(c.reason.contains(&format!("{} bar(g)", clearbore::physics::units::format_significant(rating.bar(), 3))), "{}", c.reason);
+    // A 1.0 mm bore entered with 0.030″ tubing chosen is said to be inconsistent (a caution).
+    let off = tubular(&[("inner_diameter", json!({"value": 1.0, "unit": "mm"}))]);
+    let c = off.check("tubing_rating").unwrap();
+    assert_eq!(c.verdict, Verdict::Caution);
+    assert!(c.reason.contains("not this tubing's bore (0.762 mm)"), "{}", c.reason);
+    // Acetonitrile at 60 °C is below its boiling point at 5 bar(g); at 100 °C with no back-pressure it boils.
+    assert_eq!(r.check("boiling").unwrap().verdict, Verdict::Fine);
+    let boiling = tubular(&[("temperature", json!({"value": 100, "unit": "°C"})), ("back_pressure", json!({"value": 0, "unit": "bar"}))]);
+    assert_eq!(boiling.check("boiling").unwrap().verdict, Verdict::Problem);
 }

@@ -3,6 +3,7 @@
 #![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
 
 use clearbore::case::{CaseError, CaseFile};
+use clearbore::physics::fluids::selection::LiquidSelection;
 use clearbore::physics::report::{Report, Verdict};
 use clearbore::physics::tubular::{self, Operation, TubularInput};
 use clearbore::physics::units::*;
@@ -20,8 +21,10 @@ fn case_a(operation: Operation) -> TubularInput {
         concentration: Concentration::from_molar(0.5),
         yield_fraction: Fraction::from_percent(90.0),
         molar_mass: MolarMass::from_g_per_mol(200.0),
+        liquid: LiquidSelection::Custom { density: Density::from_kg_per_m3(1000.0), viscosity: DynamicViscosity::from_mpa_s(1.0) },
         density: Density::from_kg_per_m3(1000.0),
         viscosity: DynamicViscosity::from_mpa_s(1.0),
+        tubing: None,
         back_pressure: PressureDifference::from_bar(0.0),
         rating: PressureDifference::from_bar(20.0),
         operation,
@@ -121,8 +124,14 @@ fn pressure_drop_is_proportional_to_length_and_flow() {
 }
 
 fn demo_with(key: &str, entry: serde_json::Value) -> Result<Report, CaseError> {
+    demo_with_all(&[(key, entry)])
+}
+
+fn demo_with_all(entries: &[(&str, serde_json::Value)]) -> Result<Report, CaseError> {
     let mut json: serde_json::Value = serde_json::from_str(clearbore::case::TUBULAR_DEMO_JSON).unwrap();
-    json["inputs"][key] = entry;
+    for (key, entry) in entries {
+        json["inputs"][*key] = entry.clone();
+    }
     CaseFile::from_json(&json.to_string())?.evaluate()
 }
 
@@ -139,7 +148,9 @@ fn impossible_inputs_name_the_field_value_and_range() {
     assert!(e.contains("yield") && e.contains("120 %") && e.contains("≤ 100 %"), "{e}");
     let e = input_error(demo_with("inner_diameter", serde_json::json!({"value": -1, "unit": "mm"})));
     assert!(e.contains("inner_diameter") && e.contains("-1 mm") && e.contains("> 0 mm"), "{e}");
-    let e = input_error(demo_with("viscosity", serde_json::json!({"value": 0, "unit": "cP"})));
+    // The entered viscosity is read (and checked) for an entered liquid only.
+    assert!(demo_with("viscosity", serde_json::json!({"value": 0, "unit": "cP"})).is_ok());
+    let e = input_error(demo_with_all(&[("liquid", serde_json::json!("custom")), ("viscosity", serde_json::json!({"value": 0, "unit": "cP"}))]));
     assert!(e.contains("viscosity") && e.contains("> 0 cP"), "{e}");
     let e = input_error(demo_with("length", serde_json::json!({"value": 3, "unit": "furlong"})));
     assert!(e.contains("length") && e.contains("furlong") && e.contains("mm, µm, cm, m, in"), "{e}");

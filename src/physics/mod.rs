@@ -14,6 +14,7 @@ pub mod report;
 pub mod segmented_flow;
 pub mod settling;
 pub mod slurry;
+pub mod solids;
 pub mod tubing;
 pub mod tubular;
 pub mod units;

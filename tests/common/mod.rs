@@ -28,3 +28,17 @@ impl FieldSource for Case {
         spec.index_of(self.choices.get(spec.key).copied().unwrap_or("(missing)"))
     }
 }
+
+/// The report of a calculator's demo case with some inputs changed (key → case-file entry).
+pub fn demo_with(calculator: clearbore::case::Calculator, changes: &[(&str, serde_json::Value)]) -> clearbore::physics::report::Report {
+    let mut case: serde_json::Value = serde_json::from_str(calculator.demo_json()).expect("demo case is JSON");
+    for (k, v) in changes {
+        case["inputs"][*k] = v.clone();
+    }
+    clearbore::case::CaseFile::from_json(&case.to_string()).expect("valid case").evaluate().expect("evaluates")
+}
+
+/// The value (SI) of a figure of a report.
+pub fn value(r: &clearbore::physics::report::Report, key: &str) -> f64 {
+    r.figure(key).unwrap_or_else(|| panic!("no figure {key}")).value.get()
+}

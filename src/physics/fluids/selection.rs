@@ -102,6 +102,12 @@ pub fn read_with_properties(
     (liquid, properties.as_ref().map(|p| p.0.si()), properties.as_ref().map(|p| p.1.si()))
 }
 
+/// `name` with its first letter in upper case, to open a sentence.
+fn capitalised(name: &str) -> String {
+    let mut chars = name.chars();
+    chars.next().map(|c| c.to_uppercase().chain(chars).collect()).unwrap_or_default()
+}
+
 const ENTERED_DENSITY: ModelInfo = ModelInfo { name: "Entered", formula: "ρ as entered", source: "user input", validity: &[] };
 const ENTERED_VISCOSITY: ModelInfo = ModelInfo { name: "Entered", formula: "μ as entered", source: "user input", validity: &[] };
 
@@ -157,7 +163,7 @@ impl LiquidSelection {
                     verdict: if boils { Verdict::Problem } else { Verdict::Fine },
                     reason: format!(
                         "{} at {} °C has a vapour pressure of {} bar(a) (Antoine fit) against {} bar(a) at the outlet: it {}.",
-                        solvent.name(),
+                        capitalised(solvent.name()),
                         format_significant(temperature.celsius(), 3),
                         bar(b.value.vapour_pressure.pascals()),
                         bar(outlet.pascals()),

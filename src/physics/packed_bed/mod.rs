@@ -36,6 +36,7 @@ use super::fluids::selection::{self, LiquidSelection};
 use super::form::{ChoiceSpec, Collector, FieldSource};
 use super::input::{Allowed, FieldSpec, InputError};
 use super::numeric::RootError;
+use super::solids::{self, SolidSelection};
 use super::report::{Check, Estimate, Figure, Finite, ModelInfo, NumericalError, Report, Verdict};
 use super::units::{
     Concentration, Density, Dimension, Duration, DynamicViscosity, Fraction, Length, PressureDifference, Velocity,
@@ -145,12 +146,12 @@ pub const MAX_PRESSURE_DROP: FieldSpec = field("max_pressure_drop", "Largest bed
 
 /// Every quantity field, in page order.
 pub const FIELDS: &[FieldSpec] = &[
-    selection::TEMPERATURE, TUBE_DIAMETER, BED_LENGTH, PARTICLE_DIAMETER, D10, D50, D90, SPHERICITY, VOIDAGE, PARTICLE_DENSITY, FLOW, DENSITY, VISCOSITY,
+    selection::TEMPERATURE, TUBE_DIAMETER, BED_LENGTH, PARTICLE_DIAMETER, D10, D50, D90, SPHERICITY, VOIDAGE, PARTICLE_DENSITY, solids::PARTICLE_POROSITY, FLOW, DENSITY, VISCOSITY,
     BACK_PRESSURE, PUMP_LIMIT, RATING, FITTING_RATING, SOLID_MASS, LOADING, CONCENTRATION, STOICHIOMETRY, TARGET_RESIDENCE_TIME, MAX_PRESSURE_DROP,
 ];
 
 /// Every choice field, in page order.
-pub const CHOICES: &[ChoiceSpec] = &[BED_LENGTH_SOURCE, selection::LIQUID, SIZE_MODE, PARTICLE_SHAPE, VOIDAGE_SOURCE, FLOW_DIRECTION, CONFINEMENT, BED_ROLE, SIZING];
+pub const CHOICES: &[ChoiceSpec] = &[BED_LENGTH_SOURCE, solids::SOLID, selection::LIQUID, SIZE_MODE, PARTICLE_SHAPE, VOIDAGE_SOURCE, FLOW_DIRECTION, CONFINEMENT, BED_ROLE, SIZING];
 
 /// Direction of flow through the bed.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
@@ -205,7 +206,9 @@ pub struct PackedBedInput {
     pub shape: ParticleShape,
     /// Bed voidage source.
     pub voidage: VoidageSource,
-    /// Particle envelope density.
+    /// The solid: from the solids table (with its internal porosity) or an entered density.
+    pub solid: SolidSelection,
+    /// Particle envelope density, pores included (from `solid`).
     pub particle_density: Density,
     /// Liquid flow.
     pub flow: VolumetricFlow,
@@ -284,7 +287,7 @@ impl PackedBedInput {
             Some(_) => Some(VoidageSource::Estimated),
             None => None,
         };
-        let particle_density = c.take(src.quantity(&PARTICLE_DENSITY));
+        let solid = solids::read(src, &mut c, &PARTICLE_DENSITY);
         let flow = c.take(src.quantity(&FLOW));
         let direction = match c.take(src.choice(&FLOW_DIRECTION)) {
             Some(0) => Some(FlowDirection::Down),
@@ -340,10 +343,10 @@ impl PackedBedInput {
             None => None,
         };
         let (
-            Some(dt), Some(l), Some(dv), Some(shape), Some(voidage), Some(rho_p), Some(q), Some(direction), Some(rho),
+            Some(dt), Some(l), Some(dv), Some(shape), Some(voidage), Some(solid), Some(q), Some(direction), Some(rho),
             Some(mu), Some(bp), Some(rating), Some(mass), Some(role), Some(sizing),
         ) = (
-            tube_diameter, bed_length, particle_diameter, shape, voidage, particle_density, flow, direction, density,
+            tube_diameter, bed_length, particle_diameter, shape, voidage, solid, flow, direction, density,
             viscosity, back_pressure, rating, solid_mass, role, sizing,
         )
         else {
@@ -356,7 +359,8 @@ impl PackedBedInput {
             distribution,
             shape,
             voidage,
-            particle_density: Density::from_si(rho_p),
+            solid,
+            particle_density: solid.envelope_density(),
             flow: VolumetricFlow::from_si(q),
             direction,
             liquid: liquid.unwrap_or(LiquidSelection::Custom { density: Density::from_si(rho), viscosity: DynamicViscosity::from_si(mu) }),
@@ -540,8 +544,8 @@ fn lifting_check(input: &PackedBedInput, u_s: Velocity, umf: Option<&Figure>) ->
             topic,
             verdict: lifted,
             reason: format!(
-                "The particles ({} kg/m³) are not denser than the liquid ({} kg/m³): in up-flow they float or hover at any flow.{held}",
-                format_significant(input.particle_density.si(), 4),
+                "The particles ({} kg/m³ with their pores full of liquid) are not denser than the liquid ({} kg/m³): in up-flow they float or hover at any flow.{held}",
+                format_significant(input.solid.wet_density(input.density).si(), 4),
                 format_significant(input.density.si(), 4)
             ),
             caution: Some(LIFTING_CAUTION.to_owned()),
@@ -725,7 +729,8 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
     let inlet = input.back_pressure.si() + dp.value.get();
     let umf = minimum_fluidisation::minimum_fluidisation_spread(&FluidisationInput {
         particle_diameter: input.particle_diameter,
-        particle_density: input.particle_density,
+        // Buoyant weight of a particle with its pores full of liquid.
+        particle_density: input.solid.wet_density(input.density),
         density: input.density,
         viscosity: input.viscosity,
         voidage: eps,
@@ -777,6 +782,7 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
         )?);
     }
 
+    figures.insert(0, input.solid.figure(false, input.density)?);
     figures.splice(0..0, input.liquid.figures()?);
     let mut checks = vec![
         pressure_check(inlet, &dp, input.back_pressure.si(), input.rating.si(), input.rating_part, &size_note(input)),

@@ -459,6 +459,7 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
     let line = Line { input, phi, mu_s, drift, classes: input.size.classes(), largest };
 
     let mut figures = input.liquid.figures()?;
+    figures.push(input.solid.figure(true, input.density)?);
     figures.extend([Figure::single("solids_volume_fraction", "Solids volume fraction", Dimension::Fraction, FRACTION_INFO, phi, Vec::new())?, mu_fig.clone()]);
     let mut checks = Vec::new();
     if drift != Drift::Neutral {

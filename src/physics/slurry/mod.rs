@@ -25,6 +25,7 @@ use super::fluids::selection::{self, LiquidSelection};
 use super::form::{ChoiceSpec, Collector, FieldSource};
 use super::input::{Allowed, FieldSpec, InputError};
 use super::settling::Particle;
+use super::solids::{self, SolidSelection};
 use super::units::{Density, Dimension, DynamicViscosity, Fraction, Length, PressureDifference, VolumetricFlow, format_significant};
 
 pub use self::element::evaluate;
@@ -206,7 +207,10 @@ pub struct SlurryInput {
     pub density: Density,
     /// Liquid viscosity.
     pub viscosity: DynamicViscosity,
-    /// Particle density.
+    /// The solid: from the solids table (with its internal porosity) or an entered density.
+    pub solid: SolidSelection,
+    /// Density of a particle as it settles: pores full of liquid (from `solid`; an entered
+    /// density is taken as this).
     pub particle_density: Density,
     /// Particle size(s).
     pub size: ParticleSize,
@@ -228,14 +232,15 @@ pub struct SlurryInput {
 pub const ELEMENTS_KEY: &str = "elements";
 
 impl SlurryInput {
-    /// Solids volume fraction φ from the loading (a mass fraction w converts as
-    /// φ = (w/ρ_p) / (w/ρ_p + (1 − w)/ρ)).
+    /// Solids volume fraction φ (particles, pores included) from the loading: a mass fraction
+    /// w of dry solid converts as φ = (w/ρ_env) / (w/ρ_env + (1 − w)/ρ), ρ_env the envelope
+    /// density (the entered density, or the table's skeletal density times 1 − ε_p).
     pub fn volume_fraction(&self) -> f64 {
         match self.loading {
             Loading::Volume(f) => f.si(),
             Loading::Mass(f) => {
                 let w = f.si();
-                let vs = w / self.particle_density.si();
+                let vs = w / self.solid.envelope_density().si();
                 vs / (vs + (1.0 - w) / self.density.si())
             }
         }
@@ -359,7 +364,7 @@ impl SlurryInput {
         }
         let flow = c.take(src.quantity(&FLOW));
         let (liquid, density, viscosity) = selection::read_with_properties(src, &mut c, &DENSITY, &VISCOSITY);
-        let particle_density = c.take(src.quantity(&PARTICLE_DENSITY));
+        let solid = solids::read(src, &mut c, &PARTICLE_DENSITY);
         let size = match c.take(src.choice(&SIZE_MODE)) {
             Some(0) => c.take(src.quantity(&PARTICLE_SIZE)).map(|d| ParticleSize::Single { diameter: Length::from_si(d) }),
             Some(_) => {
@@ -386,8 +391,8 @@ impl SlurryInput {
             None => None,
         };
         let errors = c.into_errors();
-        let (Some(flow), Some(rho), Some(mu), Some(rho_p), Some(size), Some(phi), Some(basis), Some(w), Some(bp), Some(rating), Some(passes), Some(tubing), true) =
-            (flow, density, viscosity, particle_density, size, sphericity, basis, loading_value, back_pressure, rating, passes, tubing, errors.is_empty())
+        let (Some(flow), Some(rho), Some(mu), Some(solid), Some(size), Some(phi), Some(basis), Some(w), Some(bp), Some(rating), Some(passes), Some(tubing), true) =
+            (flow, density, viscosity, solid, size, sphericity, basis, loading_value, back_pressure, rating, passes, tubing, errors.is_empty())
         else {
             return Err(errors);
         };
@@ -397,7 +402,8 @@ impl SlurryInput {
             liquid: liquid.unwrap_or(LiquidSelection::Custom { density: Density::from_si(rho), viscosity: DynamicViscosity::from_si(mu) }),
             density: Density::from_si(rho),
             viscosity: DynamicViscosity::from_si(mu),
-            particle_density: Density::from_si(rho_p),
+            solid,
+            particle_density: solid.wet_density(Density::from_si(rho)),
             size,
             sphericity: phi,
             loading: if basis == 0 { Loading::Mass(Fraction::from_si(w)) } else { Loading::Volume(Fraction::from_si(w)) },

@@ -8,10 +8,12 @@ pub use reactor::{LOOP_INFO, PRODUCTIVITY_INFO, RESIDENCE_TIME_INFO, VOLUME_INFO
 
 use serde::Serialize;
 
+use super::fluids::selection::{self, LiquidSelection};
 use super::form::{ChoiceSpec, Collector, FieldSource};
 use super::input::{Allowed, FieldSpec, InputError};
 use super::pipe_flow::{self, hagen_poiseuille};
 use super::report::{Check, Figure, NumericalError, Report, Verdict};
+use super::tubing::{self, TubingChoice};
 use super::units::{
     Concentration, Density, Dimension, DynamicViscosity, Fraction, Length, MolarMass,
     PressureDifference, Volume, VolumetricFlow, format_significant,
@@ -92,10 +94,14 @@ pub struct TubularInput {
     pub yield_fraction: Fraction,
     /// Product molar mass.
     pub molar_mass: MolarMass,
-    /// Liquid density.
+    /// The liquid: a built-in solvent at a temperature, or entered properties.
+    pub liquid: LiquidSelection,
+    /// Liquid density at the working temperature (from `liquid`).
     pub density: Density,
-    /// Liquid viscosity.
+    /// Liquid viscosity at the working temperature (from `liquid`).
     pub viscosity: DynamicViscosity,
+    /// The tubing from the table, for its rating at temperature.
+    pub tubing: Option<TubingChoice>,
     /// Back-pressure regulator set point, gauge.
     pub back_pressure: PressureDifference,
     /// Lowest component rating, gauge.
@@ -115,10 +121,10 @@ impl TubularInput {
         let concentration = q(&CONCENTRATION);
         let yield_fraction = q(&YIELD);
         let molar_mass = q(&MOLAR_MASS);
-        let density = q(&DENSITY);
-        let viscosity = q(&VISCOSITY);
         let back_pressure = q(&BACK_PRESSURE);
         let rating = q(&RATING);
+        let (liquid, density, viscosity) = selection::read_with_properties(src, &mut c, &DENSITY, &VISCOSITY);
+        let tubing = tubing::read(src, &mut c, &selection::TEMPERATURE);
         let operation = match c.take(src.choice(&OPERATION)) {
             Some(1) => {
                 let reservoir = c.take(src.quantity(&RESERVOIR));
@@ -137,9 +143,9 @@ impl TubularInput {
         };
         match (
             inner_diameter, length, flow, concentration, yield_fraction, molar_mass, density,
-            viscosity, back_pressure, rating, operation,
+            viscosity, back_pressure, rating, operation, tubing,
         ) {
-            (Some(d), Some(l), Some(f), Some(cn), Some(y), Some(m), Some(rho), Some(mu), Some(bp), Some(r), Some(op)) => {
+            (Some(d), Some(l), Some(f), Some(cn), Some(y), Some(m), Some(rho), Some(mu), Some(bp), Some(r), Some(op), Some(tubing)) => {
                 Ok(Self {
                     inner_diameter: Length::from_si(d),
                     length: Length::from_si(l),
@@ -147,8 +153,10 @@ impl TubularInput {
                     concentration: Concentration::from_si(cn),
                     yield_fraction: Fraction::from_si(y),
                     molar_mass: MolarMass::from_si(m),
+                    liquid: liquid.unwrap_or(LiquidSelection::Custom { density: Density::from_si(rho), viscosity: DynamicViscosity::from_si(mu) }),
                     density: Density::from_si(rho),
                     viscosity: DynamicViscosity::from_si(mu),
+                    tubing,
                     back_pressure: PressureDifference::from_si(bp),
                     rating: PressureDifference::from_si(r),
                     operation: op,
@@ -208,6 +216,23 @@ fn regime_check(re: f64) -> Check {
     }
 }
 
+/// Says so in the tubing check when the entered bore is not the chosen tubing's bore (more than
+/// 2 % apart, a tolerance of this tool, no source): the volume and pressure drop follow the
+/// entered bore, the rating follows the chosen tubing.
+fn bore_mismatch(tubing: &TubingChoice, bore: Length, check: &mut Check) {
+    let table = tubing.size.id_in * 0.0254;
+    if (bore.si() / table - 1.0).abs() > 0.02 {
+        check.reason.push_str(&format!(
+            " The entered bore ({} mm) is not this tubing's bore ({} mm): volume and pressure drop use the entered one.",
+            format_significant(bore.si() * 1e3, 3),
+            format_significant(table * 1e3, 3)
+        ));
+        if check.verdict == Verdict::Fine {
+            check.verdict = Verdict::Caution;
+        }
+    }
+}
+
 /// Computes every figure and check for the tubular reactor.
 pub fn evaluate(input: &TubularInput) -> Result<Report, NumericalError> {
     let volume = reactor::internal_volume(input.inner_diameter, input.length);
@@ -222,14 +247,15 @@ pub fn evaluate(input: &TubularInput) -> Result<Report, NumericalError> {
         .filter_map(|b| b.check(re, &hagen_poiseuille::INFO))
         .collect();
 
-    let mut figures = vec![
+    let mut figures = input.liquid.figures()?;
+    figures.extend([
         Figure::definition("internal_volume", "Internal volume", Dimension::Volume, VOLUME_INFO, volume.si())?,
         Figure::definition("residence_time", "Residence time", Dimension::Duration, RESIDENCE_TIME_INFO, tau.si())?,
         Figure::definition("mean_velocity", "Mean velocity", Dimension::Velocity, pipe_flow::VELOCITY_INFO, u.si())?,
         Figure::definition("reynolds", "Reynolds number", Dimension::Number, pipe_flow::REYNOLDS_INFO, re)?,
         Figure::single("pressure_drop", "Line pressure drop", Dimension::PressureDifference, hagen_poiseuille::INFO, dp.si(), dp_warnings)?,
         Figure::definition("inlet_pressure", "Inlet pressure (gauge)", Dimension::PressureDifference, pipe_flow::INLET_PRESSURE_INFO, inlet.si())?,
-    ];
+    ]);
 
     let production = reactor::production(input, volume);
     figures.push(Figure::definition("productivity", "Productivity", Dimension::MassFlow, PRODUCTIVITY_INFO, production.rate.si())?);
@@ -243,6 +269,16 @@ pub fn evaluate(input: &TubularInput) -> Result<Report, NumericalError> {
         figures.push(Figure::definition("single_pass_flow", "Single-pass flow for the same contact time", Dimension::VolumetricFlow, LOOP_INFO, lp.equivalent_flow.si())?);
     }
 
-    let checks = vec![pressure_check(inlet, dp, input.rating), regime_check(re)];
+    let mut checks = vec![pressure_check(inlet, dp, input.rating), regime_check(re)];
+    if let Some(tubing) = &input.tubing {
+        let solvent = match input.liquid {
+            LiquidSelection::Solvent { solvent, .. } => Some(solvent),
+            LiquidSelection::Custom { .. } => None,
+        };
+        let mut check = tubing::check(tubing, inlet, solvent);
+        bore_mismatch(tubing, input.inner_diameter, &mut check);
+        checks.push(check);
+    }
+    checks.extend(input.liquid.boiling_check(super::units::Pressure::from_gauge(input.back_pressure, super::units::STANDARD_ATMOSPHERE)));
     Ok(Report { figures, checks, plots: Vec::new() })
 }
