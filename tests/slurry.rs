@@ -37,6 +37,35 @@ fn deposition_tends_to_four_z_over_pi_for_small_z() {
     }
 }
 
+/// The deposited fraction from the trajectories themselves, the derivation behind the published
+/// formula redone numerically. Tube of radius 1, mean velocity 1 (u = 2(1 − r²)), particles
+/// entering with the flow and falling straight down at v_s relative to the liquid. A particle
+/// entering at (x, y) reaches the bottom wall y_w = −√(1 − x²) after an axial run
+/// (1/v_s) ∫ u dy from y_w to y; it deposits when that run is ≤ L, i.e. when
+/// g(y) = ∫ 2(a² − y'²) dy' ≤ 2Z (a² = 1 − x², Z = L v_s / (D U), D = 2). The flux entering
+/// below the limiting y is g itself, so at each x the deposited flux is min(2Z, g(a)) with
+/// g(a) = (8/3) a³, and η = (1/π) ∫₋₁¹ min(2Z, (8/3)(1 − x²)^{3/2}) dx (total flux π).
+fn deposited_fraction_from_trajectories(z: f64) -> f64 {
+    let n = 400_000;
+    let h = 2.0 / n as f64;
+    let sum: f64 = (0..n)
+        .map(|i| {
+            let x = -1.0 + (i as f64 + 0.5) * h;
+            (2.0 * z).min(8.0 / 3.0 * (1.0 - x * x).powf(1.5))
+        })
+        .sum();
+    sum * h / std::f64::consts::PI
+}
+
+#[test]
+fn deposition_formula_matches_the_particle_trajectories() {
+    for z in [0.001, 0.01, 0.05, 0.1, 0.3, 0.6, 1.0, 1.2, 4.0 / 3.0 - 1e-3] {
+        let formula = fuchs_thomas::deposited_fraction(z);
+        let direct = deposited_fraction_from_trajectories(z);
+        assert!((formula - direct).abs() < 1e-6, "Z = {z}: formula {formula}, trajectories {direct}");
+    }
+}
+
 #[test]
 fn deposition_is_complete_from_z_four_thirds_and_continuous_there() {
     assert_eq!(fuchs_thomas::deposited_fraction(4.0 / 3.0), 1.0);

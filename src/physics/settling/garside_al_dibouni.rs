@@ -6,8 +6,11 @@
 //! terminal speed m/s, d diameter m, μ viscosity Pa·s). n runs from 5.1 (creeping flow) to 2.7
 //! (Re → ∞); no wall term.
 //!
-//! Validity: not stated here — the formula, its constants and the citation are from memory;
-//! verify against the original before relying on it. Shown only in the spread.
+//! Validity: not stated here. The form and constants agree with several independent public
+//! implementations and its creeping-flow limit n = 5.1 with the documentation of a public
+//! multiphysics code citing the paper; the paper itself was not read and no published value
+//! checks it here. It runs above Richardson & Zaki's exponent (fitted to other data: 4.07
+//! against 3.54 at Re = 9.45). Shown only in the spread.
 //!
 //! Example (hand calculation): Re = 1 gives n = (5.1 + 0.27)/1.1 = 4.88182 (five decimals).
 //!
@@ -26,7 +29,7 @@ use crate::physics::report::ModelInfo;
 pub const INFO: ModelInfo = ModelInfo {
     name: "Garside–Al-Dibouni",
     formula: "v_h = v_t ε^n; (5.1 − n)/(n − 2.7) = 0.1 Re_t^0.9",
-    source: "Garside & Al-Dibouni (1977) Ind. Eng. Chem. Process Des. Dev. 16, 206–214 (formula and citation from memory)",
+    source: "Garside & Al-Dibouni (1977) Ind. Eng. Chem. Process Des. Dev. 16, 206–214 (citation from memory; form as in public implementations, not checked against published values)",
     validity: &[],
 };
 

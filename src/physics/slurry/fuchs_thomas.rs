@@ -8,8 +8,11 @@
 //! for Z ≥ 4/3. For small Z, η ≈ 4Z/π (checked analytically; plug flow gives the same limit).
 //!
 //! Validity: laminar flow, particles that follow the liquid axially and fall at constant v, no
-//! resuspension, no Brownian motion (below about 1 µm it competes). Formula from memory (Fuchs,
-//! The Mechanics of Aerosols); its small-Z limit and η(4/3) = 1 are verified in the tests.
+//! resuspension, no Brownian motion (below about 1 µm it competes). Checks: the same formula is
+//! in the public R package AeroSampleR (`tube_eff`, after Hogue et al., Health Phys. 106 (2014)
+//! S78–S87, "Heyder & Gebhart 1977" form), and tests/slurry.rs rederives η from the particle
+//! trajectories in Poiseuille flow by numerical integration and matches it to 1e-6; its small-Z
+//! limit and η(4/3) = 1 are tested too.
 //!
 //! Example (hand calculation): Z = 0.1, κ = 0.075: η = 0.12030 (five digits), close to
 //! 4Z/π = 0.12732.
@@ -22,7 +25,9 @@
 //!
 //! References: J. W. Thomas, Gravity settling of particles in a horizontal tube, J. Air Pollut.
 //! Control Assoc. 8 (1958) 32–34; N. A. Fuchs, The Mechanics of Aerosols, Pergamon (1964) (both
-//! from memory).
+//! citations from memory); J. Heyder, J. Gebhart, Gravitational deposition of particles from
+//! laminar aerosol flow through inclined circular tubes, J. Aerosol Sci. 8 (1977) 289–295
+//! (citation from memory).
 
 use crate::physics::report::ModelInfo;
 
@@ -30,7 +35,7 @@ use crate::physics::report::ModelInfo;
 pub const INFO: ModelInfo = ModelInfo {
     name: "Thomas/Fuchs laminar deposition",
     formula: "η = (2/π)[2κ√(1−κ^(2/3)) − κ^(1/3)√(1−κ^(2/3)) + arcsin κ^(1/3)], κ = 3Z/4, Z = L v/(D U)",
-    source: "Thomas (1958) J. Air Pollut. Control Assoc. 8, 32–34; Fuchs (1964) The Mechanics of Aerosols (from memory)",
+    source: "Thomas (1958); Fuchs (1964); Heyder & Gebhart (1977) (citations from memory); formula rederived from the trajectories in the tests",
     validity: &[],
 };
 
