@@ -18,7 +18,7 @@ use clearbore::physics::segmented_flow::lengths::{LengthModel, length_spread};
 use clearbore::physics::segmented_flow::mass_transfer::KlaModel;
 use clearbore::physics::segmented_flow::{
     self as sf, Coil, GasExpansion, PressureDropModel, SegmentedFlowError, SegmentedFlowInput, aussillous_quere,
-    bubble_velocity, confinement, kreutzer, qian_lawal,
+    bubble_velocity, confinement, kreutzer, qian_lawal, van_steijn,
 };
 use clearbore::physics::units::{
     Density, DynamicViscosity, Length, MolarMass, Pressure, SurfaceTension, Temperature, VolumetricFlow,
@@ -186,6 +186,28 @@ fn qian_lawal_bubbles_are_longer_than_garstecki_at_lab_conditions() {
     }
     let (lg, ll) = qian_lawal::lengths(1e-3, 0.3, 100.0, 1e-3);
     assert!(rel(lg / ll, 0.3 / 0.7) < 1e-12);
+}
+
+#[test]
+fn van_steijn_model_reproduces_the_published_replication() {
+    // Values from the tests of a published replication of van Steijn, Kleijn & Kreutzer (2010)
+    // (ReScience-style, reproducing the paper's Figs. 2b and 3), all lengths over w:
+    // α = 0.808977 at h = 0.5, w_in = 2/3, ε = 0, q_gutter/q_c = 0.1; α = 3.369487 at w_in = 2;
+    // V/(h w²) = 5.2997388 at h = 0.33, w_in = 1, ε = 0.1, q = 2.
+    assert!((van_steijn::alpha(0.5, 2.0 / 3.0, 0.0, 0.1).unwrap() - 0.808_977).abs() < 1e-6);
+    assert!((van_steijn::alpha(0.5, 2.0, 0.0, 0.1).unwrap() - 3.369_487).abs() < 1e-6);
+    let v = van_steijn::fill_volume(0.33, 1.0) + 2.0 * van_steijn::alpha(0.33, 1.0, 0.1, 0.1).unwrap();
+    assert!((v - 5.299_738_8).abs() < 1e-7, "{v}");
+    // A wide gas inlet (w_in > w) takes the other filling branch; it meets the first at w_in = w.
+    assert!((van_steijn::fill_volume(0.5, 1.0 + 1e-9) - van_steijn::fill_volume(0.5, 1.0)).abs() < 1e-4);
+    // A very narrow gas inlet has no real pinch radius: the model does not apply.
+    assert!(van_steijn::alpha(0.5, 0.2, 0.0, 0.1).is_none());
+    // In the calculator (square tee, equal inlets): L_B/W = 0.8410 + 1.4624 Q_G/Q_L.
+    let f = flow(1.0, 1.0, 1.0);
+    let (lb, ls) = LengthModel::VanSteijn.lengths(&f);
+    let w = f.junction_width.si();
+    let expected = w * (van_steijn::fill_volume(1.0, 1.0) + van_steijn::alpha(1.0, 1.0, 0.1, 0.1).unwrap()) * (w / f.diameter.si()).powi(2);
+    assert!(rel(lb, expected) < 1e-12 && rel(ls, lb) < 1e-12);
 }
 
 #[test]

@@ -14,7 +14,7 @@ use crate::physics::units::Dimension;
 pub enum LengthModel {
     /// Garstecki et al. (2006), α = 1 — recommended.
     Garstecki,
-    /// van Steijn et al. (2007), α = 1.5.
+    /// van Steijn, Kleijn & Kreutzer (2010), from the junction geometry.
     VanSteijn,
     /// Qian & Lawal (2006), CFD fit.
     QianLawal,
@@ -25,8 +25,8 @@ pub const RECOMMENDED: LengthModel = LengthModel::Garstecki;
 
 /// Why Garstecki (α = 1) is recommended, shown with the spread.
 pub const RECOMMENDATION: &str = "Garstecki et al. with α = 1: the squeezing-regime scaling that lab T-junctions at Ca_L below \
-about 0.01 follow; α is set by the junction geometry, and van Steijn's α = 1.5 shows how far it \
-moves. Qian–Lawal (CFD) predicts longer bubbles and slugs. Measure the lengths in your own mixer \
+about 0.01 follow; α is set by the junction geometry, and van Steijn's geometry model (a filling volume plus \
+α = 1.46 for a square tee) shows how far it moves. Qian–Lawal (CFD) predicts longer bubbles and slugs. Measure the lengths in your own mixer \
 if they matter: none of these knows its geometry.";
 
 impl LengthModel {
@@ -50,7 +50,7 @@ impl LengthModel {
         let w = flow.junction_width.si();
         let (bubble, slug) = match self {
             LengthModel::Garstecki => garstecki::lengths(garstecki::ALPHA, w, flow.gas_flow.si(), flow.liquid_flow.si()),
-            LengthModel::VanSteijn => garstecki::lengths(van_steijn::ALPHA, w, flow.gas_flow.si(), flow.liquid_flow.si()),
+            LengthModel::VanSteijn => van_steijn::lengths(w, flow.gas_flow.si(), flow.liquid_flow.si()),
             LengthModel::QianLawal => {
                 let u = flow.two_phase_velocity();
                 qian_lawal::lengths(w, flow.gas_fraction(), flow.reynolds(u), flow.capillary(u))
