@@ -6,9 +6,7 @@ use super::{kunii_levenspiel, wen_yu};
 use crate::physics::report::{Estimate, Figure, Finite, ModelInfo, NumericalError, RangeWarning};
 use crate::physics::units::{Density, Dimension, DynamicViscosity, Fraction, Length, Velocity};
 
-/// Standard acceleration of gravity, 9.80665 m/s² (exact by definition, 3rd CGPM 1901; the value
-/// `fluids` uses).
-pub const STANDARD_GRAVITY: f64 = 9.80665;
+pub use crate::physics::units::STANDARD_GRAVITY;
 
 /// A bed of particles in an upward liquid flow, at the onset of fluidisation.
 #[derive(Debug, Clone, Copy, PartialEq)]

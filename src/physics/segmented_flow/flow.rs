@@ -8,7 +8,7 @@ use crate::physics::report::{ModelInfo, RangeWarning};
 use crate::physics::units::{Density, DynamicViscosity, Length, Velocity, VolumetricFlow};
 
 /// Standard gravity, m/s² (exact; also the value in `fluids` 1.3.1).
-pub const GRAVITY: f64 = 9.806_65;
+pub const GRAVITY: f64 = crate::physics::units::STANDARD_GRAVITY;
 
 /// Name of the two-phase capillary number μ_L U_TP / σ in validity bounds.
 pub const CAPILLARY_TP: &str = "two-phase capillary number Ca = μ_L U_TP / σ";

@@ -21,6 +21,7 @@ pub mod plots;
 pub mod pressure_profile;
 pub mod qian_lawal;
 pub mod quantities;
+pub mod separated_flow;
 pub mod van_baten_krishna;
 pub mod van_steijn;
 pub mod vandu;

@@ -19,9 +19,7 @@ use serde::Serialize;
 use crate::physics::report::{ModelInfo, RangeWarning};
 use crate::physics::units::{Density, DynamicViscosity, Length, Velocity};
 
-/// Standard acceleration of gravity, 9.80665 m/s² (exact by definition, 3rd CGPM 1901; the value
-/// `fluids` uses).
-pub const STANDARD_GRAVITY: f64 = 9.80665;
+pub use crate::physics::units::STANDARD_GRAVITY;
 
 /// Name of the particle Reynolds number in validity bounds.
 pub const PARTICLE_REYNOLDS: &str = "particle Reynolds number Re = ρ v d / μ";

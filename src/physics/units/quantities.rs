@@ -278,6 +278,10 @@ impl Pressure {
 /// Standard atmosphere, 101 325 Pa (exact; NIST SP 811 B.8).
 pub const STANDARD_ATMOSPHERE: Pressure = Pressure::from_si(101_325.0);
 
+/// Standard acceleration of gravity, 9.80665 m/s² (exact by definition, 3rd CGPM 1901; the value
+/// `fluids` uses).
+pub const STANDARD_GRAVITY: f64 = 9.80665;
+
 impl SurfaceTension {
     /// From millinewtons per metre (= dyn/cm).
     pub fn from_mn_per_m(v: f64) -> Self {
