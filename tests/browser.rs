@@ -356,3 +356,26 @@ async fn choosing_a_solid_sets_its_density_and_a_porous_support_asks_for_its_por
     assert_clean(&b).await;
     b.close().await;
 }
+
+#[tokio::test]
+async fn a_mixture_of_two_solvents_can_be_chosen_and_is_checked() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    b.wait_for("[data-testid=result-liquid_density]").await;
+    // Demo: acetonitrile at 60 °C. A mixture asks for its two solvents and the volume fraction.
+    let acetonitrile = b.text("[data-testid=result-liquid_density]").await;
+    assert!(!b.exists("[data-testid=choice-mixture_first]").await);
+    b.choose("choice-liquid", "mixture").await;
+    b.wait_for("[data-testid=choice-mixture_first]").await;
+    b.choose("choice-mixture_first", "water").await;
+    b.choose("choice-mixture_second", "ethanol").await;
+    b.type_into("first_volume_fraction", "50").await;
+    b.text_when("[data-testid=result-liquid_density]", |t| t != acetonitrile).await;
+    // Water with ethanol: the ideal rules are named and their known failure is a caution.
+    b.text_when("[data-testid=verdict-liquid_mixture]", |t| t.to_lowercase().contains("caution")).await;
+    assert!(b.text("[data-testid=check-liquid_mixture]").await.contains("deviates strongly"));
+    assert!(b.text("[data-testid=check-boiling]").await.contains("Raoult"));
+    b.screenshot("liquid-mixture").await;
+    assert_clean(&b).await;
+    b.close().await;
+}

@@ -21,6 +21,12 @@ fn a_solvent_at_a_temperature_sets_the_liquid_properties_everywhere() {
         let t = |c: f64| Temperature::from_celsius(c);
         assert_eq!(value(&cold, "liquid_viscosity"), Solvent::Toluene.viscosity(t(20.0)).unwrap().value.si());
         assert_eq!(value(&hot, "liquid_density"), Solvent::Toluene.density(t(80.0)).unwrap().value.si());
+        // Every property of the solvent is shown at the temperature, with its model and source.
+        assert_eq!(value(&hot, "liquid_surface_tension"), Solvent::Toluene.surface_tension(t(80.0)).unwrap().value.si());
+        assert_eq!(value(&hot, "liquid_vapour_pressure"), Solvent::Toluene.vapour_pressure(t(80.0)).unwrap().value.pascals());
+        let shown = &hot.figure("liquid_vapour_pressure").unwrap().estimates[0].model;
+        assert_eq!(shown, Solvent::Toluene.info(clearbore::physics::fluids::Property::VapourPressure));
+        assert!(!shown.source.is_empty());
         assert!(value(&hot, "liquid_viscosity") < value(&cold, "liquid_viscosity"));
         // Results that depend on the viscosity follow it (laminar: pressure drop ∝ μ).
         let dp = match calculator {
@@ -58,4 +64,47 @@ fn a_solvent_above_its_boiling_point_at_the_outlet_is_a_problem_with_a_caution()
     assert_eq!(held.check("boiling").unwrap().verdict, Verdict::Fine);
     // An entered liquid has no vapour pressure: no boiling check is claimed.
     assert!(with(Calculator::SlurryLine, &[("liquid", json!("custom"))]).check("boiling").is_none());
+}
+
+#[test]
+fn a_mixture_of_two_solvents_uses_the_mixing_rules_everywhere() {
+    use clearbore::physics::fluids::BinaryMixture;
+    use clearbore::physics::units::Fraction;
+    let mix = |first: &str, second: &str, percent: f64| {
+        vec![
+            ("liquid", json!("mixture")),
+            ("mixture_first", json!(first)),
+            ("mixture_second", json!(second)),
+            ("first_volume_fraction", json!({"value": percent, "unit": "%"})),
+            ("temperature", json!({"value": 25, "unit": "°C"})),
+        ]
+    };
+    let expected = BinaryMixture::new(Solvent::Thf, Solvent::Toluene, Fraction::from_percent(30.0))
+        .unwrap()
+        .properties(Temperature::from_celsius(25.0))
+        .unwrap();
+    for calculator in [Calculator::TubularReactor, Calculator::PackedBed, Calculator::SlurryLine] {
+        let r = with(calculator, &mix("thf", "toluene", 30.0));
+        assert_eq!(value(&r, "liquid_density"), expected.liquid.density.si(), "{calculator:?}");
+        assert_eq!(value(&r, "liquid_viscosity"), expected.liquid.viscosity.si());
+        assert_eq!(value(&r, "liquid_vapour_pressure"), expected.liquid.vapour_pressure.unwrap().pascals());
+        let c = r.check("liquid_mixture").unwrap();
+        assert_eq!(c.verdict, Verdict::Fine, "{}", c.reason);
+        assert!(c.reason.contains("30.0 % tetrahydrofuran (THF)"), "{}", c.reason);
+        // The boiling check uses the mixture's (Raoult) vapour pressure.
+        assert!(r.check("boiling").unwrap().reason.contains("Raoult"));
+    }
+    // Water with toluene is not miscible: a caution that says so.
+    let r = with(Calculator::SlurryLine, &mix("water", "toluene", 50.0));
+    let c = r.check("liquid_mixture").unwrap();
+    assert_eq!(c.verdict, Verdict::Caution);
+    assert!(c.reason.contains("not miscible"), "{}", c.reason);
+    // PEEK tubing with a THF-containing mixture is flagged like THF itself.
+    let mut changes = mix("thf", "toluene", 30.0);
+    changes.push(("tubing_material", json!("peek")));
+    let r = with(Calculator::SlurryLine, &changes);
+    let c = r.check("tubing_rating").unwrap();
+    assert_eq!(c.verdict, Verdict::Problem, "{}", c.reason);
+    // A single solvent has no mixture check.
+    assert!(with(Calculator::SlurryLine, &[]).check("liquid_mixture").is_none());
 }

@@ -65,7 +65,7 @@ pub const FIRST_VOLUME_FRACTION: FieldSpec = FieldSpec {
     label: "Volume fraction of the first solvent",
     dimension: Dimension::Fraction,
     allowed: Allowed { low: 0.0, low_inclusive: true, high: Some(1.0), high_inclusive: true, whole: false },
-    help: "volume of the first solvent over the sum of both volumes, measured before mixing",
+    help: "Volume of the first solvent over the sum of both volumes, measured before mixing.",
 };
 
 /// Why the ideal mixing rules may be far off for this pair.

@@ -7,7 +7,7 @@ pub mod selection;
 pub mod solvent_data;
 pub mod solvents;
 
-pub use mixtures::{BinaryMixture, MixtureCaution, MixtureProperties};
+pub use mixtures::{BinaryMixture, FIRST_VOLUME_FRACTION, MixtureCaution, MixtureProperties};
 pub use solvents::{Property, Solvent};
 
 use serde::Serialize;

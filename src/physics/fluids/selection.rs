@@ -3,11 +3,12 @@
 
 use serde::Serialize;
 
-use super::{PropertyError, Property, Solvent};
+use super::mixtures::{DENSITY_RULE, FIRST_VOLUME_FRACTION, SURFACE_TENSION_RULE, VAPOUR_PRESSURE_RULE, VISCOSITY_RULE};
+use super::{BinaryMixture, BoilingCheck, PropertyError, Property, Solvent};
 use crate::physics::form::{ChoiceSpec, Collector, FieldSource};
 use crate::physics::input::{Allowed, FieldSpec, InputError};
 use crate::physics::report::{Check, Figure, ModelInfo, NumericalError, RangeWarning, Verdict};
-use crate::physics::units::{Density, Dimension, DynamicViscosity, Pressure, Temperature, format_significant};
+use crate::physics::units::{Density, Dimension, DynamicViscosity, Fraction, Pressure, Temperature, format_significant};
 
 /// The built-in solvents, in the order of [`Solvent::ALL`], then "custom".
 pub const LIQUID_OPTIONS: &[(&str, &str)] = &[
@@ -26,8 +27,38 @@ pub const LIQUID_OPTIONS: &[(&str, &str)] = &[
     ("dmf", "DMF"),
     ("dmso", "DMSO"),
     ("nmp", "NMP"),
+    ("mixture", "Mixture of two of these solvents"),
     ("custom", "Other liquid (enter its properties)"),
 ];
+
+/// Index of the "mixture" option of [`LIQUID`].
+const MIXTURE_OPTION: usize = Solvent::ALL.len();
+
+/// The built-in solvents alone, for the components of a mixture.
+const SOLVENT_OPTIONS: &[(&str, &str)] = LIQUID_OPTIONS.split_at(MIXTURE_OPTION).0;
+
+const fn without_mixture() -> [(&'static str, &'static str); MIXTURE_OPTION + 1] {
+    let mut out = [("", ""); MIXTURE_OPTION + 1];
+    let mut i = 0;
+    while i < MIXTURE_OPTION {
+        out[i] = LIQUID_OPTIONS[i];
+        i += 1;
+    }
+    out[MIXTURE_OPTION] = LIQUID_OPTIONS[MIXTURE_OPTION + 1];
+    out
+}
+
+const SINGLE_LIQUID_ARRAY: [(&str, &str); MIXTURE_OPTION + 1] = without_mixture();
+
+/// The built-in solvents and "custom", without mixtures: for calculators that need per-solvent
+/// gas data a mixture does not have.
+pub const SINGLE_LIQUID_OPTIONS: &[(&str, &str)] = &SINGLE_LIQUID_ARRAY;
+
+/// First solvent of a mixture.
+pub const MIXTURE_FIRST: ChoiceSpec = ChoiceSpec { key: "mixture_first", label: "First solvent of the mixture", options: SOLVENT_OPTIONS };
+
+/// Second solvent of a mixture.
+pub const MIXTURE_SECOND: ChoiceSpec = ChoiceSpec { key: "mixture_second", label: "Second solvent of the mixture", options: SOLVENT_OPTIONS };
 
 /// The liquid choice.
 pub const LIQUID: ChoiceSpec = ChoiceSpec { key: "liquid", label: "Liquid", options: LIQUID_OPTIONS };
@@ -52,6 +83,13 @@ pub enum LiquidSelection {
         /// Its temperature.
         temperature: Temperature,
     },
+    /// Two built-in solvents mixed by volume, at a temperature (ideal mixing rules).
+    Mixture {
+        /// The mixture.
+        mixture: BinaryMixture,
+        /// Its temperature.
+        temperature: Temperature,
+    },
     /// Entered properties.
     Custom {
         /// Density.
@@ -68,6 +106,15 @@ pub fn read(src: &dyn FieldSource, c: &mut Collector, density: &FieldSpec, visco
         i if i < Solvent::ALL.len() => {
             let t = c.take(src.quantity(&TEMPERATURE))?;
             Some(LiquidSelection::Solvent { solvent: Solvent::ALL[i], temperature: Temperature::from_kelvin(t) })
+        }
+        MIXTURE_OPTION => {
+            let first = c.take(src.choice(&MIXTURE_FIRST));
+            let second = c.take(src.choice(&MIXTURE_SECOND));
+            let phi = c.take(src.quantity(&FIRST_VOLUME_FRACTION));
+            let t = c.take(src.quantity(&TEMPERATURE));
+            let (first, second, phi, t) = (first?, second?, phi?, t?);
+            let mixture = c.take(BinaryMixture::new(*Solvent::ALL.get(first)?, *Solvent::ALL.get(second)?, Fraction::from_si(phi)))?;
+            Some(LiquidSelection::Mixture { mixture, temperature: Temperature::from_kelvin(t) })
         }
         _ => {
             let rho = c.take(src.quantity(density));
@@ -126,8 +173,47 @@ impl LiquidSelection {
                 warnings.extend(mu.warnings);
                 Ok((rho.value, mu.value, warnings))
             }
+            LiquidSelection::Mixture { mixture, temperature } => {
+                let m = mixture.properties(temperature)?;
+                Ok((m.liquid.density, m.liquid.viscosity, m.warnings))
+            }
             LiquidSelection::Custom { density, viscosity } => Ok((density, viscosity, Vec::new())),
         }
+    }
+
+    /// The built-in solvents in the liquid (for compatibility flags): one, two for a mixture,
+    /// none for an entered liquid.
+    pub fn solvents(&self) -> Vec<Solvent> {
+        match *self {
+            LiquidSelection::Solvent { solvent, .. } => vec![solvent],
+            LiquidSelection::Mixture { mixture, .. } => vec![mixture.first(), mixture.second()],
+            LiquidSelection::Custom { .. } => Vec::new(),
+        }
+    }
+
+    /// For a mixture, the check that names its mixing rules and any reason they may be far off
+    /// (pairs not fully miscible, water with polar organics); `None` for a single liquid.
+    pub fn mixture_check(&self) -> Option<Check> {
+        let LiquidSelection::Mixture { mixture, .. } = *self else { return None };
+        let cautions = mixture.cautions();
+        let mut reason = format!(
+            "{} % {} (by volume, before mixing) in {}: density by volume-fraction average, viscosity by log-mixing, \
+             surface tension and vapour pressure (Raoult) by mole fraction — ideal rules.",
+            format_significant(mixture.first_volume_fraction().si() * 100.0, 3),
+            mixture.first().name(),
+            mixture.second().name()
+        );
+        for c in &cautions {
+            reason.push(' ');
+            reason.push_str(&c.message());
+        }
+        Some(Check {
+            key: "liquid_mixture",
+            topic: "Liquid mixture",
+            verdict: if cautions.is_empty() { Verdict::Fine } else { Verdict::Caution },
+            reason,
+            caution: None,
+        })
     }
 
     /// The density and viscosity used, as figures naming their model and source; a built-in
@@ -137,10 +223,26 @@ impl LiquidSelection {
             LiquidSelection::Solvent { solvent, temperature } => {
                 let rho = solvent.density(temperature).map_err(not_finite)?;
                 let mu = solvent.viscosity(temperature).map_err(not_finite)?;
+                let sigma = solvent.surface_tension(temperature).map_err(not_finite)?;
+                let p_sat = solvent.vapour_pressure(temperature).map_err(not_finite)?;
                 Ok(vec![
                     Figure::single("liquid_density", "Liquid density (at the temperature)", Dimension::Density, *solvent.info(Property::Density), rho.value.si(), rho.warnings)?,
                     Figure::single("liquid_viscosity", "Liquid viscosity (at the temperature)", Dimension::DynamicViscosity, *solvent.info(Property::Viscosity), mu.value.si(), mu.warnings)?,
+                    Figure::single("liquid_surface_tension", "Liquid surface tension (at the temperature)", Dimension::SurfaceTension, *solvent.info(Property::SurfaceTension), sigma.value.si(), sigma.warnings)?,
+                    Figure::single("liquid_vapour_pressure", "Vapour pressure (at the temperature)", Dimension::Pressure, *solvent.info(Property::VapourPressure), p_sat.value.pascals(), p_sat.warnings)?,
                 ])
+            }
+            LiquidSelection::Mixture { mixture, temperature } => {
+                let m = mixture.properties(temperature).map_err(not_finite)?;
+                let mut out = vec![
+                    Figure::single("liquid_density", "Mixture density (at the temperature)", Dimension::Density, DENSITY_RULE, m.liquid.density.si(), m.warnings.clone())?,
+                    Figure::single("liquid_viscosity", "Mixture viscosity (at the temperature)", Dimension::DynamicViscosity, VISCOSITY_RULE, m.liquid.viscosity.si(), m.warnings.clone())?,
+                    Figure::single("liquid_surface_tension", "Mixture surface tension (at the temperature)", Dimension::SurfaceTension, SURFACE_TENSION_RULE, m.liquid.surface_tension.si(), m.warnings.clone())?,
+                ];
+                if let Some(p) = m.liquid.vapour_pressure {
+                    out.push(Figure::single("liquid_vapour_pressure", "Mixture vapour pressure (at the temperature)", Dimension::Pressure, VAPOUR_PRESSURE_RULE, p.pascals(), m.warnings)?);
+                }
+                Ok(out)
             }
             LiquidSelection::Custom { density, viscosity } => Ok(vec![
                 Figure::single("liquid_density", "Liquid density (entered)", Dimension::Density, ENTERED_DENSITY, density.si(), Vec::new())?,
@@ -149,23 +251,33 @@ impl LiquidSelection {
         }
     }
 
-    /// Whether a built-in solvent boils at the lowest absolute pressure in the line (at the
-    /// outlet); `None` for an entered liquid, whose vapour pressure is unknown.
+    /// Whether a built-in solvent or a mixture of two boils at the lowest absolute pressure in
+    /// the line (at the outlet); `None` for an entered liquid, whose vapour pressure is unknown.
     pub fn boiling_check(&self, outlet: Pressure) -> Option<Check> {
-        let LiquidSelection::Solvent { solvent, temperature } = *self else { return None };
         let bar = |p: f64| format_significant(p / 1e5, 3);
-        Some(match solvent.boiling_check(temperature, outlet) {
+        let (what, model, temperature, vapour) = match *self {
+            LiquidSelection::Solvent { solvent, temperature } => {
+                (capitalised(solvent.name()), "Antoine fit", temperature, solvent.vapour_pressure(temperature).map(|p| p.value))
+            }
+            LiquidSelection::Mixture { mixture, temperature } => (
+                format!("The {}–{} mixture", mixture.first().name(), mixture.second().name()),
+                "Raoult's law on the Antoine fits; real mixtures of unlike liquids boil earlier",
+                temperature,
+                mixture.properties(temperature).map(|m| m.liquid.vapour_pressure.unwrap_or(Pressure::from_si(f64::INFINITY))),
+            ),
+            LiquidSelection::Custom { .. } => return None,
+        };
+        Some(match vapour.map(|p| BoilingCheck::new(p, outlet)) {
             Ok(b) => {
-                let boils = b.value.boils;
+                let boils = b.boils;
                 Check {
                     key: "boiling",
                     topic: "Solvent boiling",
                     verdict: if boils { Verdict::Problem } else { Verdict::Fine },
                     reason: format!(
-                        "{} at {} °C has a vapour pressure of {} bar(a) (Antoine fit) against {} bar(a) at the outlet: it {}.",
-                        capitalised(solvent.name()),
+                        "{what} at {} °C has a vapour pressure of {} bar(a) ({model}) against {} bar(a) at the outlet: it {}.",
                         format_significant(temperature.celsius(), 3),
-                        bar(b.value.vapour_pressure.pascals()),
+                        bar(b.vapour_pressure.pascals()),
                         bar(outlet.pascals()),
                         if boils { "boils" } else { "stays liquid" }
                     ),

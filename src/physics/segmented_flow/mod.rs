@@ -99,7 +99,7 @@ pub const BACK_PRESSURE: FieldSpec = field("back_pressure", "Back-pressure (gaug
 /// Lowest component rating (gauge).
 pub const RATING: FieldSpec = field("pressure_rating", "Lowest component rating (gauge)", Dimension::PressureDifference, Allowed::POSITIVE, "Lowest working-pressure rating among tubing at temperature, fittings, mixer, regulator and sensors.");
 /// The liquid.
-pub const SOLVENT: ChoiceSpec = ChoiceSpec { key: "solvent", label: "Liquid", options: fluids::selection::LIQUID_OPTIONS };
+pub const SOLVENT: ChoiceSpec = ChoiceSpec { key: "solvent", label: "Liquid", options: fluids::selection::SINGLE_LIQUID_OPTIONS };
 /// The gas–liquid junction.
 pub const JUNCTION: ChoiceSpec = ChoiceSpec {
     key: "junction",

@@ -524,11 +524,7 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
     let inlet = input.back_pressure.si() + total;
     checks.push(pressure_check(inlet, &total_fig, input.back_pressure.si(), input.rating.si()));
     if let Some(tubing) = &input.tubing {
-        let solvent = match input.liquid {
-            crate::physics::fluids::selection::LiquidSelection::Solvent { solvent, .. } => Some(solvent),
-            crate::physics::fluids::selection::LiquidSelection::Custom { .. } => None,
-        };
-        checks.push(crate::physics::tubing::check(tubing, crate::physics::units::PressureDifference::from_si(inlet), solvent));
+        checks.push(crate::physics::tubing::check(tubing, crate::physics::units::PressureDifference::from_si(inlet), &input.liquid.solvents()));
     }
     figures.push(total_fig);
     figures.push(Figure::single("inlet_pressure", "Inlet pressure (gauge)", Dimension::PressureDifference, INLET_INFO, inlet, Vec::new())?);
@@ -558,6 +554,7 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
         .map(|(i, r)| format!("element {} ({}, {})", i + 1, input.elements[i].kind.word(), r.settling.max(r.clogging).word()))
         .collect();
     checks.extend(input.liquid.boiling_check(crate::physics::units::Pressure::from_gauge(input.back_pressure, crate::physics::units::STANDARD_ATMOSPHERE)));
+    checks.extend(input.liquid.mixture_check());
     let verdict = checks.iter().map(|c| c.verdict).max().unwrap_or(Verdict::Fine);
     // The line verdict first: it is what the user reads before the per-element detail.
     checks.insert(0, Check {

@@ -286,7 +286,7 @@ pressure limit, and follow local codes and institutional rules.";
 
 /// The check of the line's inlet pressure (gauge) against the tubing's working pressure at its
 /// temperature, with a compatibility flag for the liquid.
-pub fn check(choice: &TubingChoice, inlet: PressureDifference, solvent: Option<super::fluids::Solvent>) -> super::report::Check {
+pub fn check(choice: &TubingChoice, inlet: PressureDifference, solvents: &[super::fluids::Solvent]) -> super::report::Check {
     use super::report::{Check, Verdict};
     use super::units::format_significant;
     let size = SIZE.options.iter().find(|o| o.0 == choice.size.key).map_or(choice.size.key, |o| o.1);
@@ -312,11 +312,13 @@ pub fn check(choice: &TubingChoice, inlet: PressureDifference, solvent: Option<s
         Err(e) => (Verdict::Problem, format!("{what} at {t} °C: {e}."), Some(HOT_TUBING_CAUTION.to_owned())),
     };
     let mut verdict = verdict;
-    if let Some(note) = compatibility(choice.material, solvent) {
-        reason.push(' ');
-        reason.push_str(note);
-        verdict = verdict.max(Verdict::Problem);
-        caution.get_or_insert_with(|| HOT_TUBING_CAUTION.to_owned());
+    for &solvent in solvents {
+        if let Some(note) = compatibility(choice.material, Some(solvent)) {
+            reason.push(' ');
+            reason.push_str(note);
+            verdict = verdict.max(Verdict::Problem);
+            caution.get_or_insert_with(|| HOT_TUBING_CAUTION.to_owned());
+        }
     }
     Check { key: "tubing_rating", topic: "Tubing at temperature", verdict, reason, caution }
 }

@@ -271,14 +271,11 @@ pub fn evaluate(input: &TubularInput) -> Result<Report, NumericalError> {
 
     let mut checks = vec![pressure_check(inlet, dp, input.rating), regime_check(re)];
     if let Some(tubing) = &input.tubing {
-        let solvent = match input.liquid {
-            LiquidSelection::Solvent { solvent, .. } => Some(solvent),
-            LiquidSelection::Custom { .. } => None,
-        };
-        let mut check = tubing::check(tubing, inlet, solvent);
+        let mut check = tubing::check(tubing, inlet, &input.liquid.solvents());
         bore_mismatch(tubing, input.inner_diameter, &mut check);
         checks.push(check);
     }
     checks.extend(input.liquid.boiling_check(super::units::Pressure::from_gauge(input.back_pressure, super::units::STANDARD_ATMOSPHERE)));
+    checks.extend(input.liquid.mixture_check());
     Ok(Report { figures, checks, plots: Vec::new() })
 }
