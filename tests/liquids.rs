@@ -108,3 +108,33 @@ fn a_mixture_of_two_solvents_uses_the_mixing_rules_everywhere() {
     // A single solvent has no mixture check.
     assert!(with(Calculator::SlurryLine, &[]).check("liquid_mixture").is_none());
 }
+
+#[test]
+fn the_atmospheric_pressure_sets_the_absolute_pressures() {
+    // Acetonitrile at 80 °C, no back-pressure: its Antoine fit gives a vapour pressure between
+    // 0.9 and 1.013 bar (normal boiling point 81.6 °C, chemicals 1.5.2), so it stays liquid at
+    // sea level and boils in a lab at 0.9 bar(a) (about 1000 m).
+    let at = |ambient: f64| {
+        with(
+            Calculator::TubularReactor,
+            &[
+                ("temperature", json!({"value": 80, "unit": "°C"})),
+                ("back_pressure", json!({"value": 0, "unit": "bar"})),
+                ("ambient_pressure", json!({"value": ambient, "unit": "bar"})),
+            ],
+        )
+    };
+    let p_sat = value(&at(1.01325), "liquid_vapour_pressure");
+    assert!(p_sat > 0.9e5 && p_sat < 1.01325e5, "{p_sat}");
+    assert_eq!(at(1.01325).check("boiling").unwrap().verdict, Verdict::Fine);
+    assert_eq!(at(0.9).check("boiling").unwrap().verdict, Verdict::Problem);
+    // The gas–liquid outlet is the back-pressure plus the atmosphere: 5 bar(g) at 0.9 bar(a).
+    let r = with(Calculator::SegmentedFlow, &[("ambient_pressure", json!({"value": 0.9, "unit": "bar"}))]);
+    let back = with(Calculator::SegmentedFlow, &[]);
+    assert!((value(&r, "outlet_pressure") - value(&back, "outlet_pressure") + 0.11325e5).abs() < 1e-6);
+    // Outside 0.3–1.2 bar(a) the entry is refused with its range.
+    let mut case: serde_json::Value = serde_json::from_str(Calculator::SlurryLine.demo_json()).unwrap();
+    case["inputs"]["ambient_pressure"] = json!({"value": 2, "unit": "bar"});
+    let e = clearbore::case::CaseFile::from_json(&case.to_string()).unwrap().evaluate().unwrap_err().to_string();
+    assert!(e.contains("ambient_pressure") && e.contains("1.2 bar"), "{e}");
+}

@@ -476,6 +476,7 @@ fn case() -> Case {
             ("density", (1.0, "g/mL")),
             ("viscosity", (1.0, "mPa·s")),
             ("back_pressure", (5.0, "bar")),
+            ("ambient_pressure", (1.01325, "bar")),
             ("pump_limit", (100.0, "bar")),
             ("pressure_rating", (40.0, "bar")),
             ("fitting_rating", (60.0, "bar")),

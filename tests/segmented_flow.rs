@@ -388,6 +388,7 @@ fn case() -> Case {
             ("length", (5.0, "m")),
             ("temperature", (40.0, "°C")),
             ("back_pressure", (5.0, "bar")),
+            ("ambient_pressure", (1.01325, "bar")),
             ("pressure_rating", (20.0, "bar")),
             ("consumed_fraction", (50.0, "%")),
         ]),

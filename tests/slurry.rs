@@ -19,7 +19,7 @@ use clearbore::physics::slurry::{
     ElementKind, LineElement, Loading, Orientation, PIPE_REYNOLDS, SlurryInput, TUBE_DIAMETER, clogging, einstein, evaluate,
     fuchs_thomas, krieger_dougherty, shields,
 };
-use clearbore::physics::units::{Density, DynamicViscosity, Fraction, Length, PressureDifference, VolumetricFlow};
+use clearbore::physics::units::{Density, DynamicViscosity, Fraction, Length, PressureDifference, STANDARD_ATMOSPHERE, VolumetricFlow};
 
 fn rel(a: f64, b: f64) -> f64 {
     (a / b - 1.0).abs()
@@ -144,6 +144,7 @@ fn line(elements: Vec<LineElement>) -> SlurryInput {
         sphericity: 1.0,
         loading: Loading::Mass(Fraction::from_percent(5.0)),
         back_pressure: PressureDifference::from_bar(5.0),
+        ambient: STANDARD_ATMOSPHERE,
         rating: PressureDifference::from_bar(40.0),
         passes: 1,
         tubing: None,
@@ -425,6 +426,7 @@ fn line_case() -> Case {
             ("sphericity", (1.0, "")),
             ("loading", (5.0, "%")),
             ("back_pressure", (5.0, "bar")),
+            ("ambient_pressure", (1.01325, "bar")),
             ("pressure_rating", (40.0, "bar")),
         ]),
         choices: HashMap::from([("size_mode", "distribution"), ("loading_basis", "mass"), ("operation", "single_pass"), ("liquid", "custom"), ("tubing_material", "none"), ("solid", "entered")]),

@@ -25,6 +25,7 @@ fn case_a(operation: Operation) -> TubularInput {
         density: Density::from_kg_per_m3(1000.0),
         viscosity: DynamicViscosity::from_mpa_s(1.0),
         tubing: None,
+        ambient: STANDARD_ATMOSPHERE,
         back_pressure: PressureDifference::from_bar(0.0),
         rating: PressureDifference::from_bar(20.0),
         operation,

@@ -1,6 +1,7 @@
 //! Pure-Rust physics: SI inside, no web dependency. Compiles natively (tests, command line) and
 //! to wasm32 (the page). One folder per phenomenon, one file per correlation.
 
+pub mod ambient;
 pub mod fluids;
 pub mod form;
 pub mod gases;

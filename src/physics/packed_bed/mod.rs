@@ -147,7 +147,7 @@ pub const MAX_PRESSURE_DROP: FieldSpec = field("max_pressure_drop", "Largest bed
 /// Every quantity field, in page order.
 pub const FIELDS: &[FieldSpec] = &[
     selection::TEMPERATURE, TUBE_DIAMETER, BED_LENGTH, PARTICLE_DIAMETER, D10, D50, D90, SPHERICITY, VOIDAGE, PARTICLE_DENSITY, solids::PARTICLE_POROSITY, FLOW, DENSITY, VISCOSITY,
-    BACK_PRESSURE, PUMP_LIMIT, RATING, FITTING_RATING, SOLID_MASS, LOADING, CONCENTRATION, STOICHIOMETRY, TARGET_RESIDENCE_TIME, MAX_PRESSURE_DROP,
+    BACK_PRESSURE, crate::physics::ambient::AMBIENT_PRESSURE, PUMP_LIMIT, RATING, FITTING_RATING, SOLID_MASS, LOADING, CONCENTRATION, STOICHIOMETRY, TARGET_RESIDENCE_TIME, MAX_PRESSURE_DROP,
 ];
 
 /// Every choice field, in page order.
@@ -222,6 +222,8 @@ pub struct PackedBedInput {
     pub viscosity: DynamicViscosity,
     /// Back-pressure set point, gauge.
     pub back_pressure: PressureDifference,
+    /// Atmospheric pressure the gauge pressures are measured against.
+    pub ambient: crate::physics::units::Pressure,
     /// Lowest component rating, gauge.
     pub rating: PressureDifference,
     /// Which part sets `rating`: "pump", "cartridge" or "fittings and tubing".
@@ -300,6 +302,7 @@ impl PackedBedInput {
         };
         let (liquid, density, viscosity) = selection::read_with_properties(src, &mut c, &DENSITY, &VISCOSITY);
         let back_pressure = c.take(src.quantity(&BACK_PRESSURE));
+        let ambient = crate::physics::ambient::read(src, &mut c);
         let ratings = [
             (c.take(src.quantity(&PUMP_LIMIT)), "pump"),
             (c.take(src.quantity(&RATING)), "cartridge"),
@@ -344,10 +347,10 @@ impl PackedBedInput {
         };
         let (
             Some(dt), Some(l), Some(dv), Some(shape), Some(voidage), Some(solid), Some(q), Some(direction), Some(rho),
-            Some(mu), Some(bp), Some(rating), Some(mass), Some(role), Some(sizing),
+            Some(mu), Some(bp), Some(rating), Some(mass), Some(role), Some(sizing), Some(ambient),
         ) = (
             tube_diameter, bed_length, particle_diameter, shape, voidage, solid, flow, direction, density,
-            viscosity, back_pressure, rating, solid_mass, role, sizing,
+            viscosity, back_pressure, rating, solid_mass, role, sizing, ambient,
         )
         else {
             return Err(c.into_errors());
@@ -367,6 +370,7 @@ impl PackedBedInput {
             density: Density::from_si(rho),
             viscosity: DynamicViscosity::from_si(mu),
             back_pressure: PressureDifference::from_si(bp),
+            ambient,
             rating: PressureDifference::from_si(rating),
             rating_part,
             solid_mass: Mass::from_si(mass),
@@ -793,7 +797,7 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
     if let Some(target) = &input.sizing {
         checks.push(sizing_figures_and_check(input, target, eps, &mut figures)?);
     }
-    checks.extend(input.liquid.boiling_check(crate::physics::units::Pressure::from_gauge(input.back_pressure, crate::physics::units::STANDARD_ATMOSPHERE)));
+    checks.extend(input.liquid.boiling_check(crate::physics::units::Pressure::from_gauge(input.back_pressure, input.ambient)));
     checks.extend(input.liquid.mixture_check());
     let lifting_flow = umf.as_ref().map(|f| f.value.get() * crate::physics::pipe_flow::bore_area(input.tube_diameter));
     let plots = vec![plots::pressure_drop_vs_flow(input, &bed, lifting_flow)?];

@@ -42,7 +42,7 @@ use super::input::{Allowed, FieldSpec, InputError};
 use super::report::{Check, Estimate, Figure, Finite, ModelInfo, RangeWarning, Report, Verdict};
 use super::units::{
     Concentration, Diffusivity, Dimension, DynamicViscosity, Length, MolarMass, Pressure, PressureDifference,
-    STANDARD_ATMOSPHERE, Temperature, VolumetricFlow, format_significant,
+    Temperature, VolumetricFlow, format_significant,
 };
 
 const fn field(key: &'static str, label: &'static str, dimension: Dimension, allowed: Allowed, help: &'static str) -> FieldSpec {
@@ -95,7 +95,7 @@ pub const LENGTH: FieldSpec = field("length", "Coil length", Dimension::Length, 
 /// Temperature.
 pub const TEMPERATURE: FieldSpec = field("temperature", "Temperature", Dimension::Temperature, Allowed::POSITIVE, "Temperature of the coil (taken as uniform).");
 /// Back-pressure regulator set point (gauge).
-pub const BACK_PRESSURE: FieldSpec = field("back_pressure", "Back-pressure (gauge)", Dimension::PressureDifference, NON_NEGATIVE, "Set point of the back-pressure regulator, above atmosphere (taken as 1 atm); 0 if none.");
+pub const BACK_PRESSURE: FieldSpec = field("back_pressure", "Back-pressure (gauge)", Dimension::PressureDifference, NON_NEGATIVE, "Set point of the back-pressure regulator, above atmosphere; 0 if none.");
 /// Lowest component rating (gauge).
 pub const RATING: FieldSpec = field("pressure_rating", "Lowest component rating (gauge)", Dimension::PressureDifference, Allowed::POSITIVE, "Lowest working-pressure rating among tubing at temperature, fittings, mixer, regulator and sensors.");
 /// The liquid.
@@ -130,7 +130,7 @@ pub const CONSUMED_FRACTION: FieldSpec = field("consumed_fraction", "Share of th
 /// Every quantity field, in page order.
 pub const FIELDS: &[FieldSpec] = &[
     GAS_MOLE_FRACTION, GAS_FLOW, REFERENCE_TEMPERATURE, REFERENCE_PRESSURE, LIQUID_FLOW, CONCENTRATION, INNER_DIAMETER, JUNCTION_WIDTH,
-    LENGTH, TEMPERATURE, BACK_PRESSURE, RATING, fluids::CUSTOM_DENSITY, fluids::CUSTOM_VISCOSITY,
+    LENGTH, TEMPERATURE, BACK_PRESSURE, crate::physics::ambient::AMBIENT_PRESSURE, RATING, fluids::CUSTOM_DENSITY, fluids::CUSTOM_VISCOSITY,
     fluids::CUSTOM_SURFACE_TENSION, SOLUBILITY, DIFFUSIVITY, CONSUMED_FRACTION,
 ];
 
@@ -184,6 +184,8 @@ pub struct SegmentedFlowInput {
     pub temperature: Temperature,
     /// Back-pressure set point, gauge.
     pub back_pressure: PressureDifference,
+    /// Atmospheric pressure the gauge pressures are measured against.
+    pub ambient: crate::physics::units::Pressure,
     /// Lowest component rating, gauge.
     pub rating: PressureDifference,
     /// The liquid.
@@ -228,6 +230,7 @@ impl SegmentedFlowInput {
         let length = c.take(src.quantity(&LENGTH));
         let temperature = c.take(src.quantity(&TEMPERATURE));
         let back_pressure = c.take(src.quantity(&BACK_PRESSURE));
+        let ambient = crate::physics::ambient::read(src, &mut c);
         let rating = c.take(src.quantity(&RATING));
         let liquid = match c.take(src.choice(&SOLVENT)) {
             Some(i) if i < Solvent::ALL.len() => {
@@ -263,9 +266,9 @@ impl SegmentedFlowInput {
             Some(_) => c.take(src.quantity(&CONSUMED_FRACTION)),
             None => None,
         };
-        let (Some(gas), Some(y), Some(flow), Some(state), Some(ql), Some(cn), Some(d), Some(l), Some(t), Some(bp), Some(rating), Some(liquid), Some(consumed), Some(cross), Some(w)) = (
+        let (Some(gas), Some(y), Some(flow), Some(state), Some(ql), Some(cn), Some(d), Some(l), Some(t), Some(bp), Some(rating), Some(liquid), Some(consumed), Some(cross), Some(w), Some(ambient)) = (
             gas, gas_mole_fraction, flow, state, liquid_flow, concentration, inner_diameter, length, temperature, back_pressure, rating,
-            liquid, consumed_fraction, cross_junction, junction_width,
+            liquid, consumed_fraction, cross_junction, junction_width, ambient,
         ) else {
             return Err(c.into_errors());
         };
@@ -281,6 +284,7 @@ impl SegmentedFlowInput {
             length: Length::from_si(l),
             temperature: Temperature::from_si(t),
             back_pressure: PressureDifference::from_si(bp),
+            ambient,
             rating: PressureDifference::from_si(rating),
             liquid,
             consumed_fraction: consumed,
@@ -353,8 +357,8 @@ pub const INLET_PRESSURE_INFO: ModelInfo = ModelInfo {
 /// Metadata of the outlet pressure.
 pub const OUTLET_PRESSURE_INFO: ModelInfo = ModelInfo {
     name: "Outlet pressure",
-    formula: "P_out = p_back (gauge) + 1 atm",
-    source: "definition (ambient taken as 101.325 kPa)",
+    formula: "P_out = p_back (gauge) + P_atm",
+    source: "definition (P_atm the entered atmospheric pressure)",
     validity: &[],
 };
 
@@ -398,7 +402,7 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
     let reactive_feed = MolarFlow::from_si(feed.si() * y);
     let consumed = MolarFlow::from_si(reactive_feed.si() * input.consumed_fraction);
     let (molar_mass, gas_viscosity, gas_warnings) = input.feed_properties();
-    let p_out = Pressure::from_gauge(input.back_pressure, STANDARD_ATMOSPHERE);
+    let p_out = Pressure::from_gauge(input.back_pressure, input.ambient);
     let coil = Coil {
         diameter: input.inner_diameter,
         junction_width: input.junction_width,
@@ -513,7 +517,7 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
         }
     }
 
-    let inlet_gauge = profile.inlet_pressure - STANDARD_ATMOSPHERE.pascals();
+    let inlet_gauge = profile.inlet_pressure - input.ambient.pascals();
     let mut checks = vec![
         regime_check(&outlet, &junction),
         pressure_check(inlet_gauge, dp, &figures, input.rating.si()),
@@ -536,7 +540,7 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
         checks.push(Check { key: "compressibility", topic: "Ideal-gas assumption", verdict: Verdict::Caution, reason: note, caution: None });
     }
     checks.push(mass_transfer_check(t95, tau, share, reactive_feed.equivalents(input.concentration, input.liquid_flow)));
-    let mut plots = plots::profiles(&profile, input.rating);
+    let mut plots = plots::profiles(&profile, input.rating, input.ambient);
     plots.extend(plots::lengths_vs_gas_fraction(&junction.flow));
     Ok(SegmentedFlowResult { report: Report { figures, checks, plots }, profile })
 }

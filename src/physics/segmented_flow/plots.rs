@@ -5,7 +5,7 @@ use super::flow::TwoPhaseFlow;
 use super::lengths::{LengthModel, RECOMMENDED};
 use super::pressure_profile::Profile;
 use crate::physics::plot::{Axis, Marker, Plot};
-use crate::physics::units::{Dimension, PressureDifference, STANDARD_ATMOSPHERE, VolumetricFlow};
+use crate::physics::units::{Dimension, Pressure, PressureDifference, VolumetricFlow};
 
 fn along(key: &'static str, title: &'static str, label: &'static str, dimension: Dimension) -> Plot {
     Plot::new(
@@ -17,8 +17,8 @@ fn along(key: &'static str, title: &'static str, label: &'static str, dimension:
 }
 
 /// The three profiles. `rating` is the lowest component rating (gauge), drawn as an absolute
-/// limit on the pressure chart (ambient taken as 1 atm, as in the calculation).
-pub fn profiles(profile: &Profile, rating: PressureDifference) -> Vec<Plot> {
+/// limit on the pressure chart with the atmospheric pressure `ambient`, as in the calculation.
+pub fn profiles(profile: &Profile, rating: PressureDifference, ambient: Pressure) -> Vec<Plot> {
     let z = &profile.position;
     let pairs = |v: &[f64]| z.iter().copied().zip(v.iter().copied()).collect::<Vec<_>>();
 
@@ -26,7 +26,7 @@ pub fn profiles(profile: &Profile, rating: PressureDifference) -> Vec<Plot> {
     pressure.line("Pressure (recommended model)", pairs(&profile.pressure), true);
     pressure.mark(Marker::Horizontal {
         label: "Lowest component rating (as absolute)".to_owned(),
-        y: rating.si() + STANDARD_ATMOSPHERE.pascals(),
+        y: rating.si() + ambient.pascals(),
         limit: true,
     });
 

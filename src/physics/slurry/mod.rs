@@ -220,6 +220,8 @@ pub struct SlurryInput {
     pub loading: Loading,
     /// Back-pressure set point, gauge.
     pub back_pressure: PressureDifference,
+    /// Atmospheric pressure the gauge pressures are measured against.
+    pub ambient: crate::physics::units::Pressure,
     /// Lowest component rating, gauge.
     pub rating: PressureDifference,
     /// Passes through the line: 1 for a single pass, more in a recirculation loop.
@@ -382,6 +384,7 @@ impl SlurryInput {
         let basis = c.take(src.choice(&LOADING_BASIS));
         let loading_value = c.take(src.quantity(&LOADING));
         let back_pressure = c.take(src.quantity(&BACK_PRESSURE));
+        let ambient = crate::physics::ambient::read(src, &mut c);
         let rating = c.take(src.quantity(&RATING));
         let tubing = crate::physics::tubing::read(src, &mut c, &selection::TEMPERATURE);
         let passes = match c.take(src.choice(&OPERATION)) {
@@ -391,8 +394,8 @@ impl SlurryInput {
             None => None,
         };
         let errors = c.into_errors();
-        let (Some(flow), Some(rho), Some(mu), Some(solid), Some(size), Some(phi), Some(basis), Some(w), Some(bp), Some(rating), Some(passes), Some(tubing), true) =
-            (flow, density, viscosity, solid, size, sphericity, basis, loading_value, back_pressure, rating, passes, tubing, errors.is_empty())
+        let (Some(flow), Some(rho), Some(mu), Some(solid), Some(size), Some(phi), Some(basis), Some(w), Some(bp), Some(rating), Some(passes), Some(tubing), Some(ambient), true) =
+            (flow, density, viscosity, solid, size, sphericity, basis, loading_value, back_pressure, rating, passes, tubing, ambient, errors.is_empty())
         else {
             return Err(errors);
         };
@@ -408,6 +411,7 @@ impl SlurryInput {
             sphericity: phi,
             loading: if basis == 0 { Loading::Mass(Fraction::from_si(w)) } else { Loading::Volume(Fraction::from_si(w)) },
             back_pressure: PressureDifference::from_si(bp),
+            ambient,
             rating: PressureDifference::from_si(rating),
             passes,
             tubing,

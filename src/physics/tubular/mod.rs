@@ -9,13 +9,14 @@ pub use reactor::{LOOP_INFO, PRODUCTIVITY_INFO, RESIDENCE_TIME_INFO, VOLUME_INFO
 use serde::Serialize;
 
 use super::fluids::selection::{self, LiquidSelection};
+use super::ambient;
 use super::form::{ChoiceSpec, Collector, FieldSource};
 use super::input::{Allowed, FieldSpec, InputError};
 use super::pipe_flow::{self, hagen_poiseuille};
 use super::report::{Check, Figure, NumericalError, Report, Verdict};
 use super::tubing::{self, TubingChoice};
 use super::units::{
-    Concentration, Density, Dimension, DynamicViscosity, Fraction, Length, MolarMass,
+    Concentration, Density, Dimension, DynamicViscosity, Fraction, Length, MolarMass, Pressure,
     PressureDifference, Volume, VolumetricFlow, format_significant,
 };
 
@@ -61,7 +62,7 @@ pub const OPERATION: ChoiceSpec = ChoiceSpec {
 /// Every quantity field, in page order.
 pub const FIELDS: &[FieldSpec] = &[
     INNER_DIAMETER, LENGTH, FLOW, CONCENTRATION, YIELD, MOLAR_MASS, DENSITY, VISCOSITY,
-    BACK_PRESSURE, RATING, RESERVOIR, PASSES,
+    BACK_PRESSURE, ambient::AMBIENT_PRESSURE, RATING, RESERVOIR, PASSES,
 ];
 
 /// How the tube is operated.
@@ -104,6 +105,8 @@ pub struct TubularInput {
     pub tubing: Option<TubingChoice>,
     /// Back-pressure regulator set point, gauge.
     pub back_pressure: PressureDifference,
+    /// Atmospheric pressure the gauge pressures are measured against.
+    pub ambient: Pressure,
     /// Lowest component rating, gauge.
     pub rating: PressureDifference,
     /// Single pass or loop.
@@ -125,6 +128,7 @@ impl TubularInput {
         let rating = q(&RATING);
         let (liquid, density, viscosity) = selection::read_with_properties(src, &mut c, &DENSITY, &VISCOSITY);
         let tubing = tubing::read(src, &mut c, &selection::TEMPERATURE);
+        let ambient = ambient::read(src, &mut c);
         let operation = match c.take(src.choice(&OPERATION)) {
             Some(1) => {
                 let reservoir = c.take(src.quantity(&RESERVOIR));
@@ -143,9 +147,9 @@ impl TubularInput {
         };
         match (
             inner_diameter, length, flow, concentration, yield_fraction, molar_mass, density,
-            viscosity, back_pressure, rating, operation, tubing,
+            viscosity, back_pressure, rating, operation, tubing, ambient,
         ) {
-            (Some(d), Some(l), Some(f), Some(cn), Some(y), Some(m), Some(rho), Some(mu), Some(bp), Some(r), Some(op), Some(tubing)) => {
+            (Some(d), Some(l), Some(f), Some(cn), Some(y), Some(m), Some(rho), Some(mu), Some(bp), Some(r), Some(op), Some(tubing), Some(ambient)) => {
                 Ok(Self {
                     inner_diameter: Length::from_si(d),
                     length: Length::from_si(l),
@@ -157,6 +161,7 @@ impl TubularInput {
                     density: Density::from_si(rho),
                     viscosity: DynamicViscosity::from_si(mu),
                     tubing,
+                    ambient,
                     back_pressure: PressureDifference::from_si(bp),
                     rating: PressureDifference::from_si(r),
                     operation: op,
@@ -275,7 +280,7 @@ pub fn evaluate(input: &TubularInput) -> Result<Report, NumericalError> {
         bore_mismatch(tubing, input.inner_diameter, &mut check);
         checks.push(check);
     }
-    checks.extend(input.liquid.boiling_check(super::units::Pressure::from_gauge(input.back_pressure, super::units::STANDARD_ATMOSPHERE)));
+    checks.extend(input.liquid.boiling_check(Pressure::from_gauge(input.back_pressure, input.ambient)));
     checks.extend(input.liquid.mixture_check());
     Ok(Report { figures, checks, plots: Vec::new() })
 }
