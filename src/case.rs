@@ -109,6 +109,8 @@ const PACKED_BED_LAYOUT: &[FormItem] = &[
     Field(bed::PUMP_LIMIT),
     Field(bed::RATING),
     Field(bed::FITTING_RATING),
+    Choice(crate::physics::tubing::MATERIAL),
+    Choice(crate::physics::tubing::SIZE),
     Field(bed::SOLID_MASS),
     Choice(bed::BED_ROLE),
     Field(bed::LOADING),

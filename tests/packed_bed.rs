@@ -490,6 +490,7 @@ fn case() -> Case {
         choices: HashMap::from([
             ("size_mode", "single"),
             ("solid", "entered"),
+            ("tubing_material", "none"),
             ("bed_length_source", "entered"),
             ("liquid", "custom"),
             ("particle_shape", "sphere"),

@@ -121,3 +121,21 @@ fn the_tubular_reactor_checks_its_tubing_and_its_bore() {
     let boiling = tubular(&[("temperature", json!({"value": 100, "unit": "°C"})), ("back_pressure", json!({"value": 0, "unit": "bar"}))]);
     assert_eq!(boiling.check("boiling").unwrap().verdict, Verdict::Problem);
 }
+
+#[test]
+fn the_packed_cartridge_checks_its_feed_tubing_and_the_light_note_follows_the_material() {
+    use clearbore::case::Calculator;
+    use clearbore::physics::report::Verdict;
+    use serde_json::json;
+    // Demo: PFA 1/8″ × 1/16″ at 25 °C feeding the cartridge.
+    let r = common::demo_with(Calculator::PackedBed, &[]);
+    let c = r.check("tubing_rating").unwrap();
+    assert_eq!(c.verdict, Verdict::Fine, "{}", c.reason);
+    assert!(c.reason.contains("PFA") && c.reason.contains("transmits visible and near-UV"), "{}", c.reason);
+    // PEEK with THF: a problem, and PEEK is opaque.
+    let r = common::demo_with(Calculator::PackedBed, &[("tubing_material", json!("peek")), ("liquid", json!("thf"))]);
+    let c = r.check("tubing_rating").unwrap();
+    assert_eq!(c.verdict, Verdict::Problem, "{}", c.reason);
+    assert!(c.reason.contains("Light: opaque."), "{}", c.reason);
+    assert!(Material::Ptfe.light_note().contains("translucent"));
+}

@@ -146,12 +146,12 @@ pub const MAX_PRESSURE_DROP: FieldSpec = field("max_pressure_drop", "Largest bed
 
 /// Every quantity field, in page order.
 pub const FIELDS: &[FieldSpec] = &[
-    selection::TEMPERATURE, TUBE_DIAMETER, BED_LENGTH, PARTICLE_DIAMETER, D10, D50, D90, SPHERICITY, VOIDAGE, PARTICLE_DENSITY, solids::PARTICLE_POROSITY, FLOW, DENSITY, VISCOSITY,
+    selection::TEMPERATURE, TUBE_DIAMETER, BED_LENGTH, PARTICLE_DIAMETER, D10, D50, D90, SPHERICITY, VOIDAGE, PARTICLE_DENSITY, solids::PARTICLE_POROSITY, FLOW, crate::physics::fluids::FIRST_VOLUME_FRACTION, DENSITY, VISCOSITY,
     BACK_PRESSURE, crate::physics::ambient::AMBIENT_PRESSURE, PUMP_LIMIT, RATING, FITTING_RATING, SOLID_MASS, LOADING, CONCENTRATION, STOICHIOMETRY, TARGET_RESIDENCE_TIME, MAX_PRESSURE_DROP,
 ];
 
 /// Every choice field, in page order.
-pub const CHOICES: &[ChoiceSpec] = &[BED_LENGTH_SOURCE, solids::SOLID, selection::LIQUID, SIZE_MODE, PARTICLE_SHAPE, VOIDAGE_SOURCE, FLOW_DIRECTION, CONFINEMENT, BED_ROLE, SIZING];
+pub const CHOICES: &[ChoiceSpec] = &[BED_LENGTH_SOURCE, solids::SOLID, selection::LIQUID, selection::MIXTURE_FIRST, selection::MIXTURE_SECOND, crate::physics::tubing::MATERIAL, crate::physics::tubing::SIZE, SIZE_MODE, PARTICLE_SHAPE, VOIDAGE_SOURCE, FLOW_DIRECTION, CONFINEMENT, BED_ROLE, SIZING];
 
 /// Direction of flow through the bed.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
@@ -224,6 +224,8 @@ pub struct PackedBedInput {
     pub back_pressure: PressureDifference,
     /// Atmospheric pressure the gauge pressures are measured against.
     pub ambient: crate::physics::units::Pressure,
+    /// The feed tubing from the table, for its rating at temperature.
+    pub tubing: Option<crate::physics::tubing::TubingChoice>,
     /// Lowest component rating, gauge.
     pub rating: PressureDifference,
     /// Which part sets `rating`: "pump", "cartridge" or "fittings and tubing".
@@ -303,6 +305,7 @@ impl PackedBedInput {
         let (liquid, density, viscosity) = selection::read_with_properties(src, &mut c, &DENSITY, &VISCOSITY);
         let back_pressure = c.take(src.quantity(&BACK_PRESSURE));
         let ambient = crate::physics::ambient::read(src, &mut c);
+        let tubing = crate::physics::tubing::read(src, &mut c, &selection::TEMPERATURE);
         let ratings = [
             (c.take(src.quantity(&PUMP_LIMIT)), "pump"),
             (c.take(src.quantity(&RATING)), "cartridge"),
@@ -347,10 +350,10 @@ impl PackedBedInput {
         };
         let (
             Some(dt), Some(l), Some(dv), Some(shape), Some(voidage), Some(solid), Some(q), Some(direction), Some(rho),
-            Some(mu), Some(bp), Some(rating), Some(mass), Some(role), Some(sizing), Some(ambient),
+            Some(mu), Some(bp), Some(rating), Some(mass), Some(role), Some(sizing), Some(ambient), Some(tubing),
         ) = (
             tube_diameter, bed_length, particle_diameter, shape, voidage, solid, flow, direction, density,
-            viscosity, back_pressure, rating, solid_mass, role, sizing, ambient,
+            viscosity, back_pressure, rating, solid_mass, role, sizing, ambient, tubing,
         )
         else {
             return Err(c.into_errors());
@@ -371,6 +374,7 @@ impl PackedBedInput {
             viscosity: DynamicViscosity::from_si(mu),
             back_pressure: PressureDifference::from_si(bp),
             ambient,
+            tubing,
             rating: PressureDifference::from_si(rating),
             rating_part,
             solid_mass: Mass::from_si(mass),
@@ -794,6 +798,9 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
         wall_check(diameter_ratio, &bed),
         plug_flow_check(length_ratio),
     ];
+    if let Some(tubing) = &input.tubing {
+        checks.push(crate::physics::tubing::check(tubing, PressureDifference::from_si(inlet), &input.liquid.solvents()));
+    }
     if let Some(target) = &input.sizing {
         checks.push(sizing_figures_and_check(input, target, eps, &mut figures)?);
     }

@@ -114,6 +114,16 @@ impl Material {
         }
     }
 
+    /// What light does in the tubing wall, for photochemistry (from memory: FEP and PFA are the
+    /// usual photoreactor tubing; check the supplier's transmission data for your wavelength).
+    pub const fn light_note(self) -> &'static str {
+        match self {
+            Material::Pfa | Material::Fep => "Light: transmits visible and near-UV (the usual photoreactor tubing; transmission data from the supplier, values from memory).",
+            Material::Ptfe => "Light: translucent, scatters; a poor window for photochemistry (from memory).",
+            Material::Peek | Material::Ss316 => "Light: opaque.",
+        }
+    }
+
     /// Working-pressure factor against temperature, `(°C, factor)`, interpolated linearly.
     /// Fluoropolymers: a commonly quoted set to be confirmed against a supplier table (from
     /// memory). PEEK: kept to 100 °C, the common practical limit for solvent service (from
@@ -320,5 +330,7 @@ pub fn check(choice: &TubingChoice, inlet: PressureDifference, solvents: &[super
             caution.get_or_insert_with(|| HOT_TUBING_CAUTION.to_owned());
         }
     }
+    reason.push(' ');
+    reason.push_str(choice.material.light_note());
     Check { key: "tubing_rating", topic: "Tubing at temperature", verdict, reason, caution }
 }
