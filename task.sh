@@ -33,6 +33,21 @@ setup_browser() {
   fi
 }
 
+# Firefox ESR and WebKitGTK (Safari's engine) with their WebDriver servers, for the smoke tests
+# in the other engines. geckodriver is not packaged by Debian: it is built from crates.io.
+GECKODRIVER_VERSION=0.37.1
+setup_other_browsers() {
+  if ! command -v firefox-esr >/dev/null || ! command -v WebKitWebDriver >/dev/null || ! command -v Xvfb >/dev/null; then
+    say "installing Firefox ESR, WebKitGTK's WebDriver and Xvfb (Debian packages)"
+    as_root apt-get update -q
+    as_root apt-get install -y -q firefox-esr webkit2gtk-driver xvfb xauth
+  fi
+  if [ "$(geckodriver --version 2>/dev/null | awk 'NR == 1 { print $2 }')" != "$GECKODRIVER_VERSION" ]; then
+    say "building geckodriver $GECKODRIVER_VERSION from crates.io (takes several minutes once)"
+    cargo install geckodriver --version "$GECKODRIVER_VERSION"
+  fi
+}
+
 build() {
   setup_wasm
   say "building the page (release, wasm32)"
@@ -71,8 +86,9 @@ case "${1:-}" in
     ;;
   test)
     setup_browser
+    setup_other_browsers
     say "lints (native and wasm32)"
-    cargo clippy --all-targets -- -D warnings
+    cargo clippy --all-targets --features e2e -- -D warnings
     setup_wasm
     cargo clippy --target wasm32-unknown-unknown --bin clearbore --lib -- -D warnings
     say "native tests: physics, case files, command line, doc examples"
@@ -80,6 +96,8 @@ case "${1:-}" in
     build
     say "browser end-to-end tests (headless Chromium, file://)"
     cargo test --features e2e --test browser
+    say "smoke tests in Firefox and WebKit (file://)"
+    cargo test --features e2e --test engines
     ;;
   bench)
     setup_browser

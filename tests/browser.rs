@@ -31,17 +31,9 @@ async fn result_rows(b: &Browser) -> Vec<(String, String, String)> {
         .collect()
 }
 
-/// What a clean page reports about itself: CSP violations, console errors, resource requests.
+/// What a clean page reports about itself (see [`Browser::assert_clean`]).
 async fn assert_clean(b: &Browser) {
-    let log = b
-        .js("return { v: window.__clearboreLog.violations, e: window.__clearboreLog.errors, \
-             r: performance.getEntriesByType('resource').map(e => e.name) };")
-        .await;
-    assert_eq!(log["v"], Value::Array(vec![]), "CSP violations (blocked requests)");
-    assert_eq!(log["e"], Value::Array(vec![]), "console errors");
-    assert_eq!(log["r"], Value::Array(vec![]), "network resource requests");
-    assert!(!b.exists("[data-testid=panic-banner]").await, "panic banner shown");
-    assert!(!b.exists("[data-testid=boot-error]").await, "boot error shown");
+    b.assert_clean().await;
 }
 
 /// Every result row on the page equals the command line's output for the calculator's demo case

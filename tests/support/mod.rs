@@ -1,5 +1,7 @@
-//! Shared by the browser tests and the page benchmark: starts ChromeDriver and a headless
-//! Chromium with networking cut off, and opens the built single-file page from `file://`.
+//! Shared by the browser tests and the page benchmark: starts a WebDriver server and its browser
+//! with networking cut off — ChromeDriver with headless Chromium (the main suite), geckodriver
+//! with headless Firefox, or WebKitWebDriver with WebKitGTK's MiniBrowser on a virtual X
+//! display (Safari's engine) — and opens the built single-file page from `file://`.
 #![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic, dead_code)]
 
 use std::net::TcpListener;
@@ -15,13 +17,28 @@ pub fn page_path() -> PathBuf {
     PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("dist/clearbore.html")
 }
 
-/// A headless Chromium session driven through its own ChromeDriver process.
+/// A browser session driven through its own WebDriver process.
 pub struct Browser {
     /// The WebDriver client.
     pub client: Client,
     _driver: Child,
+    _display: Option<Child>,
     _profile: tempdir::Dir,
 }
+
+/// The browser engines the page is tested in.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Engine {
+    /// Chromium (Blink), headless.
+    Chromium,
+    /// Firefox ESR (Gecko), headless.
+    Firefox,
+    /// WebKitGTK's MiniBrowser (WebKit, the engine of Safari) on a virtual X display.
+    WebKit,
+}
+
+/// WebKitGTK's browser for automation (Debian's libwebkit2gtk-4.1-0).
+const MINIBROWSER: &str = "/usr/lib/x86_64-linux-gnu/webkit2gtk-4.1/MiniBrowser";
 
 mod tempdir {
     /// A throw-away folder removed on drop.
@@ -46,42 +63,104 @@ impl Browser {
 
     /// As [`Browser::start`], with the screen's device pixel ratio forced to `scale`.
     pub async fn start_scaled(scale: f64) -> Browser {
+        Self::launch(Engine::Chromium, scale).await
+    }
+
+    /// Starts `engine` (at device pixel ratio 1).
+    pub async fn start_engine(engine: Engine) -> Browser {
+        Self::launch(engine, 1.0).await
+    }
+
+    async fn launch(engine: Engine, scale: f64) -> Browser {
         let page = page_path();
         assert!(page.exists(), "{} is missing: run ./task.sh build first", page.display());
         let port = free_port();
-        let driver = Command::new("chromedriver")
-            .arg(format!("--port={port}"))
-            .stdout(std::process::Stdio::null())
-            .stderr(std::process::Stdio::null())
-            .kill_on_drop(true)
-            .spawn()
-            .expect("chromedriver not found: install chromium-driver (./task.sh test does)");
-        let profile = std::env::temp_dir().join(format!("clearbore-chromium-{port}"));
         let dead_proxy = free_port();
-        let caps = json!({
-            "goog:chromeOptions": {
-                "binary": "/usr/bin/chromium",
-                "args": [
-                    "--headless=new", "--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage",
-                    "--disable-background-networking", "--disable-component-update", "--no-first-run",
-                    "--disable-sync", "--disable-quic", "--window-size=1280,1400",
-                    format!("--force-device-scale-factor={scale}"),
-                    format!("--user-data-dir={}", profile.display()),
-                    format!("--proxy-server=http://127.0.0.1:{dead_proxy}"), "--proxy-bypass-list=<-loopback>",
-                ]
+        let profile = std::env::temp_dir().join(format!("clearbore-browser-{port}"));
+        std::fs::create_dir_all(&profile).unwrap();
+        let quiet = |c: &mut Command| {
+            c.stdout(std::process::Stdio::null()).stderr(std::process::Stdio::null()).kill_on_drop(true);
+        };
+        let mut display = None;
+        let (driver, caps) = match engine {
+            Engine::Chromium => {
+                let mut c = Command::new("chromedriver");
+                c.arg(format!("--port={port}"));
+                quiet(&mut c);
+                let caps = json!({
+                    "goog:chromeOptions": {
+                        "binary": "/usr/bin/chromium",
+                        "args": [
+                            "--headless=new", "--no-sandbox", "--disable-gpu", "--disable-dev-shm-usage",
+                            "--disable-background-networking", "--disable-component-update", "--no-first-run",
+                            "--disable-sync", "--disable-quic", "--window-size=1280,1400",
+                            format!("--force-device-scale-factor={scale}"),
+                            format!("--user-data-dir={}", profile.display()),
+                            format!("--proxy-server=http://127.0.0.1:{dead_proxy}"), "--proxy-bypass-list=<-loopback>",
+                        ]
+                    }
+                });
+                (c.spawn().expect("chromedriver not found: install chromium-driver (./task.sh test does)"), caps)
             }
-        });
+            Engine::Firefox => {
+                let mut c = Command::new("geckodriver");
+                c.arg(format!("--port={port}"));
+                quiet(&mut c);
+                let caps = json!({
+                    "browserName": "firefox",
+                    "moz:firefoxOptions": {
+                        "binary": "/usr/bin/firefox-esr",
+                        "args": ["-headless", "-width=1280", "-height=1400", "-profile", profile.display().to_string()],
+                        "prefs": {
+                            "network.proxy.type": 1,
+                            "network.proxy.http": "127.0.0.1",
+                            "network.proxy.http_port": dead_proxy,
+                            "network.proxy.ssl": "127.0.0.1",
+                            "network.proxy.ssl_port": dead_proxy,
+                            "app.update.enabled": false,
+                            "browser.shell.checkDefaultBrowser": false,
+                            "datareporting.policy.dataSubmissionEnabled": false,
+                            "toolkit.telemetry.enabled": false,
+                        }
+                    }
+                });
+                (c.spawn().expect("geckodriver not found: ./task.sh test installs it"), caps)
+            }
+            Engine::WebKit => {
+                // A virtual X display of its own (WebKitGTK has no headless mode of its own here).
+                let number = 100 + port % 800;
+                let mut x = Command::new("Xvfb");
+                x.args([format!(":{number}"), "-screen".to_owned(), "0".to_owned(), "1280x1400x24".to_owned(), "-nolisten".to_owned(), "tcp".to_owned()]);
+                quiet(&mut x);
+                display = Some(x.spawn().expect("Xvfb not found: install xvfb (./task.sh test does)"));
+                tokio::time::sleep(Duration::from_millis(500)).await;
+                let mut c = Command::new("WebKitWebDriver");
+                c.arg(format!("--port={port}")).env("DISPLAY", format!(":{number}"));
+                quiet(&mut c);
+                let caps = json!({
+                    "browserName": "MiniBrowser",
+                    "webkitgtk:browserOptions": { "binary": MINIBROWSER, "args": ["--automation"] },
+                    "proxy": { "proxyType": "manual", "httpProxy": format!("127.0.0.1:{dead_proxy}"), "sslProxy": format!("127.0.0.1:{dead_proxy}") },
+                });
+                (c.spawn().expect("WebKitWebDriver not found: install webkit2gtk-driver (./task.sh test does)"), caps)
+            }
+        };
         let Value::Object(caps) = caps else { unreachable!() };
         let url = format!("http://127.0.0.1:{port}");
         let mut last_error = String::new();
-        for _ in 0..100 {
+        for _ in 0..150 {
             match ClientBuilder::rustls().expect("rustls").capabilities(caps.clone()).connect(&url).await {
-                Ok(client) => return Browser { client, _driver: driver, _profile: tempdir::Dir(profile) },
+                Ok(client) => {
+                    if engine != Engine::Chromium {
+                        let _ = client.set_window_size(1280, 1400).await;
+                    }
+                    return Browser { client, _driver: driver, _display: display, _profile: tempdir::Dir(profile) };
+                }
                 Err(e) => last_error = e.to_string(),
             }
             tokio::time::sleep(Duration::from_millis(100)).await;
         }
-        panic!("could not start a browser session: {last_error}");
+        panic!("could not start a {engine:?} session: {last_error}");
     }
 
     /// Opens the single-file page from `file://` and waits until the app has mounted.
@@ -115,13 +194,13 @@ impl Browser {
     pub async fn text_when(&self, css: &str, ok: impl Fn(&str) -> bool) -> String {
         let mut last = String::new();
         for _ in 0..100 {
-            if let Ok(el) = self.client.find(Locator::Css(css)).await {
-                if let Ok(t) = el.text().await {
-                    if ok(&t) {
-                        return t;
-                    }
-                    last = t;
+            if let Ok(el) = self.client.find(Locator::Css(css)).await
+                && let Ok(t) = el.text().await
+            {
+                if ok(&t) {
+                    return t;
                 }
+                last = t;
             }
             tokio::time::sleep(Duration::from_millis(50)).await;
         }
@@ -166,6 +245,20 @@ impl Browser {
         std::fs::create_dir_all(&dir).unwrap();
         let png = self.client.find(Locator::Css(css)).await.unwrap().screenshot().await.unwrap();
         std::fs::write(dir.join(format!("{name}.png")), png).unwrap();
+    }
+
+    /// Asserts what a clean page reports about itself: no CSP violation (blocked request), no
+    /// console error, no network resource request, no panic banner, no boot error.
+    pub async fn assert_clean(&self) {
+        let log = self
+            .js("return { v: window.__clearboreLog.violations, e: window.__clearboreLog.errors, \
+                 r: performance.getEntriesByType('resource').map(e => e.name) };")
+            .await;
+        assert_eq!(log["v"], Value::Array(vec![]), "CSP violations (blocked requests)");
+        assert_eq!(log["e"], Value::Array(vec![]), "console errors");
+        assert_eq!(log["r"], Value::Array(vec![]), "network resource requests");
+        assert!(!self.exists("[data-testid=panic-banner]").await, "panic banner shown");
+        assert!(!self.exists("[data-testid=boot-error]").await, "boot error shown");
     }
 
     /// Ends the session.

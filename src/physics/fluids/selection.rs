@@ -150,7 +150,7 @@ pub fn read_with_properties(
 }
 
 /// `name` with its first letter in upper case, to open a sentence.
-fn capitalised(name: &str) -> String {
+pub fn capitalised(name: &str) -> String {
     let mut chars = name.chars();
     chars.next().map(|c| c.to_uppercase().chain(chars).collect()).unwrap_or_default()
 }

@@ -701,7 +701,7 @@ fn boiling_check(solvent: Solvent, t: Temperature, p_out: Pressure) -> Result<Ch
         verdict,
         reason: format!(
             "{} at {} °C has a vapour pressure of {} bar(a) (Antoine fit, fluids module) against {} bar(a) at the regulator: it {what}. The gas partial pressure in the slugs is the total minus the vapour pressure.",
-            solvent.name(),
+            fluids::selection::capitalised(solvent.name()),
             format_significant(t.celsius(), 3),
             bar(p_sat),
             bar(p_out.pascals())
