@@ -213,6 +213,10 @@ async fn slurry_line_gives_a_verdict_per_element_and_follows_edits() {
     // 1.6 mm, above 5 × the 6.6 mm/s hindered settling velocity of d90.
     b.type_into("flow", "10").await;
     b.text_when("[data-testid=verdict-element_4_settling]", |t| t.to_lowercase().contains("fine")).await;
+    // Coarser particles bridge the 0.5 mm fitting: d90 = 200 µm gives a passage ratio of 2.5 (< 3).
+    assert!(!b.text("[data-testid=verdict-element_2_clogging]").await.to_lowercase().contains("problem"));
+    b.type_into("d90", "200").await;
+    b.text_when("[data-testid=verdict-element_2_clogging]", |t| t.to_lowercase().contains("problem")).await;
     // Elements can be added and removed; each new one gets its own verdicts.
     b.click("[data-testid=add-element]").await;
     b.wait_for("[data-testid=verdict-element_6_settling]").await;
