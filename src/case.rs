@@ -183,6 +183,8 @@ const SEGMENTED_FLOW_LAYOUT: &[FormItem] = &[
     Field(gas::RATING),
     Choice(gas::CONSUMPTION),
     Field(gas::CONSUMED_FRACTION),
+    Choice(gas::LOC_SOURCE),
+    Field(gas::LIMITING_OXYGEN_FIELD),
 ];
 
 impl Calculator {

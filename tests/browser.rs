@@ -248,6 +248,12 @@ async fn gas_liquid_demo_shows_equivalents_spreads_and_the_oxygen_caution() {
     assert!(b.text("[data-testid=verdict-gas_hazard]").await.to_lowercase().contains("caution"));
     assert!(b.text("[data-testid=caution-gas_hazard]").await.contains("LOC"));
     b.screenshot("gas-liquid-demo").await;
+    // The solvent's own limiting oxygen concentration can replace the typical 10 %: at 8 % the
+    // 9 % O₂ feed is above the LOC itself.
+    assert!(!b.exists("[data-testid=input-limiting_oxygen]").await);
+    b.click("[data-testid=option-loc_source-entered]").await;
+    b.type_into("limiting_oxygen", "8").await;
+    b.text_when("[data-testid=check-gas_hazard]", |t| t.contains("8.00 vol % as entered") && t.contains("above the limiting oxygen concentration itself")).await;
     // Another solvent changes the properties and every result that depends on them.
     let bond = b.text("[data-testid=result-bond]").await;
     b.choose("choice-solvent", "water").await;

@@ -399,6 +399,7 @@ fn case() -> Case {
             ("solubility_source", "built_in"),
             ("consumption", "none"),
             ("junction", "tee"),
+            ("loc_source", "typical"),
         ]),
     }
 }
@@ -453,7 +454,23 @@ fn diluted_oxygen_with_methanol_is_cautioned_and_low_oxygen_is_fine() {
     c.quantities.insert("gas_mole_fraction", (5.0, "%"));
     assert_eq!(verdict(&run(&c), "gas_hazard"), Verdict::Fine);
     c.choices.insert("gas", "air");
-    assert_eq!(verdict(&run(&c), "gas_hazard"), Verdict::Caution);
+    let air = run(&c);
+    assert_eq!(verdict(&air, "gas_hazard"), Verdict::Caution);
+    assert!(air.check("gas_hazard").unwrap().reason.contains("above the limiting oxygen concentration itself"));
+    // An LOC entered for the solvent replaces the typical 10 %: 5 % O₂ is above 60 % of a 7 % LOC.
+    c.choices.insert("gas", "oxygen");
+    c.choices.insert("loc_source", "entered");
+    c.quantities.insert("limiting_oxygen", (7.0, "%"));
+    let r = run(&c);
+    assert_eq!(verdict(&r, "gas_hazard"), Verdict::Caution);
+    assert!(r.check("gas_hazard").unwrap().reason.contains("7.00 vol % as entered"), "{}", r.check("gas_hazard").unwrap().reason);
+    // Out of range (above air's 21 %): refused with the field named.
+    c.quantities.insert("limiting_oxygen", (25.0, "%"));
+    let e = SegmentedFlowInput::from_source(&c).unwrap_err();
+    assert!(e.iter().any(|e| e.field == "limiting_oxygen"), "{e:?}");
+    // Not asked for a gas that is not an oxidiser.
+    c.choices.insert("gas", "hydrogen");
+    assert!(SegmentedFlowInput::from_source(&c).is_ok());
 }
 
 #[test]

@@ -127,15 +127,30 @@ pub const CONSUMPTION: ChoiceSpec = ChoiceSpec {
 /// Share of the fed reactive gas consumed in the coil.
 pub const CONSUMED_FRACTION: FieldSpec = field("consumed_fraction", "Share of the gas consumed in the coil", Dimension::Fraction, BELOW_ONE, "Fraction of the fed gas taken up by reaction or dissolution between junction and regulator, spread evenly along the coil.");
 
+/// Where the limiting oxygen concentration comes from.
+pub const LOC_SOURCE: ChoiceSpec = ChoiceSpec {
+    key: "loc_source",
+    label: "Limiting oxygen concentration of the liquid's vapour",
+    options: &[("typical", "Typical for common solvents, ~10 vol % (from memory)"), ("entered", "Enter the value for your solvent")],
+};
+/// The LOC of the user's solvent, with N₂ as diluent.
+pub const LIMITING_OXYGEN_FIELD: FieldSpec = field(
+    "limiting_oxygen",
+    "Limiting oxygen concentration (N₂ diluent)",
+    Dimension::Fraction,
+    Allowed { low: 0.005, low_inclusive: true, high: Some(0.21), high_inclusive: true, whole: false },
+    "From your solvent's safety data (NFPA 69 Annex C tables, or measured to ASTM E2079), at or near the operating temperature and pressure.",
+);
+
 /// Every quantity field, in page order.
 pub const FIELDS: &[FieldSpec] = &[
     GAS_MOLE_FRACTION, GAS_FLOW, REFERENCE_TEMPERATURE, REFERENCE_PRESSURE, LIQUID_FLOW, CONCENTRATION, INNER_DIAMETER, JUNCTION_WIDTH,
     LENGTH, TEMPERATURE, BACK_PRESSURE, crate::physics::ambient::AMBIENT_PRESSURE, RATING, fluids::CUSTOM_DENSITY, fluids::CUSTOM_VISCOSITY,
-    fluids::CUSTOM_SURFACE_TENSION, SOLUBILITY, DIFFUSIVITY, CONSUMED_FRACTION,
+    fluids::CUSTOM_SURFACE_TENSION, SOLUBILITY, DIFFUSIVITY, CONSUMED_FRACTION, LIMITING_OXYGEN_FIELD,
 ];
 
 /// Every choice field, in page order.
-pub const CHOICES: &[ChoiceSpec] = &[GAS, REFERENCE_STATE, SOLVENT, SOLUBILITY_SOURCE, CONSUMPTION, JUNCTION];
+pub const CHOICES: &[ChoiceSpec] = &[GAS, REFERENCE_STATE, SOLVENT, SOLUBILITY_SOURCE, CONSUMPTION, JUNCTION, LOC_SOURCE];
 
 /// The liquid and where its gas data come from.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
@@ -192,6 +207,9 @@ pub struct SegmentedFlowInput {
     pub liquid: LiquidSpec,
     /// Share of the fed reactive gas consumed in the coil, in [0, 1).
     pub consumed_fraction: f64,
+    /// The limiting oxygen concentration entered for the liquid, if any (oxidising gases only);
+    /// `None` takes [`LIMITING_OXYGEN`].
+    pub limiting_oxygen: Option<f64>,
 }
 
 fn gas_of(index: usize) -> Gas {
@@ -261,14 +279,23 @@ impl SegmentedFlowInput {
             }
             None => None,
         };
+        // Asked only where it matters: an oxidising gas.
+        let limiting_oxygen = match gas {
+            Some(g) if g.is_oxidising() => match c.take(src.choice(&LOC_SOURCE)) {
+                Some(0) => Some(None),
+                Some(_) => c.take(src.quantity(&LIMITING_OXYGEN_FIELD)).map(Some),
+                None => None,
+            },
+            _ => Some(None),
+        };
         let consumed_fraction = match c.take(src.choice(&CONSUMPTION)) {
             Some(0) => Some(0.0),
             Some(_) => c.take(src.quantity(&CONSUMED_FRACTION)),
             None => None,
         };
-        let (Some(gas), Some(y), Some(flow), Some(state), Some(ql), Some(cn), Some(d), Some(l), Some(t), Some(bp), Some(rating), Some(liquid), Some(consumed), Some(cross), Some(w), Some(ambient)) = (
+        let (Some(gas), Some(y), Some(flow), Some(state), Some(ql), Some(cn), Some(d), Some(l), Some(t), Some(bp), Some(rating), Some(liquid), Some(consumed), Some(cross), Some(w), Some(ambient), Some(limiting_oxygen)) = (
             gas, gas_mole_fraction, flow, state, liquid_flow, concentration, inner_diameter, length, temperature, back_pressure, rating,
-            liquid, consumed_fraction, cross_junction, junction_width, ambient,
+            liquid, consumed_fraction, cross_junction, junction_width, ambient, limiting_oxygen,
         ) else {
             return Err(c.into_errors());
         };
@@ -288,6 +315,7 @@ impl SegmentedFlowInput {
             rating: PressureDifference::from_si(rating),
             liquid,
             consumed_fraction: consumed,
+            limiting_oxygen,
         })
     }
 
@@ -723,7 +751,13 @@ fn gas_hazard_check(input: &SegmentedFlowInput) -> Check {
     let local = " Follow local codes and institutional rules for this gas.";
     match input.gas {
         g if g.is_oxidising() && flammable_solvent => {
-            let (verdict, level) = if y > LOC_MARGIN * LIMITING_OXYGEN {
+            let (loc, loc_source) = match input.limiting_oxygen {
+                Some(v) => (v, "as entered for this solvent".to_owned()),
+                None => (LIMITING_OXYGEN, "taken for common solvents with N₂ (from memory: NFPA 69 / Zabetakis; enter your solvent's value)".to_owned()),
+            };
+            let (verdict, level) = if y > loc {
+                (Verdict::Caution, "above the limiting oxygen concentration itself: the vapour space downstream can burn")
+            } else if y > LOC_MARGIN * loc {
                 (Verdict::Caution, "above 60 % of the limiting oxygen concentration")
             } else {
                 (Verdict::Fine, "within 60 % of the limiting oxygen concentration")
@@ -733,8 +767,9 @@ fn gas_hazard_check(input: &SegmentedFlowInput) -> Check {
                 topic,
                 verdict,
                 reason: format!(
-                    "The feed carries {:.1} % O₂ with a flammable (or unknown) liquid: {level} of ~10 vol % taken for common solvents with N₂ (from memory: NFPA 69 / Zabetakis; 60 % margin without O₂ monitoring, NFPA 69, from memory). The LOC falls with temperature and pressure (Osterberg et al., Org. Process Res. Dev. 2015).",
-                    y * 100.0
+                    "The feed carries {:.1} % O₂ with a flammable (or unknown) liquid: {level} of {} vol % {loc_source}; 60 % margin without O₂ monitoring (NFPA 69, from memory). The LOC falls with temperature and pressure (Osterberg et al., Org. Process Res. Dev. 2015).",
+                    y * 100.0,
+                    format_significant(loc * 100.0, 3)
                 ),
                 caution: Some(format!(
                     "Gas slugs, the regulator outlet, separator and receiver hold solvent vapour and oxygen: keep every vapour space below the LOC with margin — prefer diluted O₂ (e.g. 8–9 % in N₂) over air or pure O₂, dilute the outlet with N₂, and use oxygen-compatible, oxygen-clean parts with pure O₂. Dichloromethane, non-flammable in air, burns in O₂-enriched atmospheres.{local}"
