@@ -381,3 +381,40 @@ async fn a_mixture_of_two_solvents_can_be_chosen_and_is_checked() {
     assert_clean(&b).await;
     b.close().await;
 }
+
+/// Opens a copy of the built page changed by `edit`, from `file://`.
+async fn open_altered(b: &Browser, name: &str, edit: impl Fn(String) -> String) {
+    let page = std::fs::read_to_string(support::page_path()).unwrap();
+    let dir = std::path::PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("target/altered-pages");
+    std::fs::create_dir_all(&dir).unwrap();
+    let path = dir.join(format!("{name}.html"));
+    std::fs::write(&path, edit(page)).unwrap();
+    b.client.goto(&format!("file://{}", path.display())).await.unwrap();
+}
+
+#[tokio::test]
+async fn a_browser_that_cannot_run_the_app_shows_why_instead_of_a_blank_page() {
+    let b = Browser::start().await;
+    // A browser without DecompressionStream (Firefox < 113, Safari < 16.4): simulated by
+    // removing it before the loader runs.
+    open_altered(&b, "no-decompression", |p| {
+        p.replacen("<script type=\"module\">", "<script type=\"module\">\nwindow.DecompressionStream = undefined;", 1)
+    })
+    .await;
+    b.wait_for("[data-testid=boot-error]").await;
+    let msg = b.text("[data-testid=boot-error]").await;
+    assert!(msg.contains("could not start") && msg.contains("DecompressionStream") && msg.contains("Safari 16.4"), "{msg}");
+    assert!(!b.exists("[data-testid=result-residence_time]").await);
+    // A damaged file (the packed wasm cut short): the same kind of message, not a dead page.
+    open_altered(&b, "damaged", |p| {
+        let start = p.find("const wasmGzipBase64 = \"").unwrap() + "const wasmGzipBase64 = \"".len();
+        let mut out = p.clone();
+        out.replace_range(start..start + 4000, "");
+        out
+    })
+    .await;
+    b.wait_for("[data-testid=boot-error]").await;
+    assert!(b.text("[data-testid=boot-error]").await.contains("could not start"));
+    b.screenshot("boot-error").await;
+    b.close().await;
+}
