@@ -86,6 +86,13 @@ fn deposition_is_a_fraction_and_monotone_in_z() {
     }
 }
 
+#[test]
+fn the_critical_shields_number_lies_in_the_measured_band() {
+    // Rice, Fairweather, Hunter, Peakall & Biggs (2017), Int. J. Multiphase Flow (abstract):
+    // θ_c = 0.094 ± 0.043 at incipient particle motion in a closed horizontal pipe slurry loop.
+    assert!((shields::CRITICAL_SHIELDS - 0.094).abs() <= 0.043, "{}", shields::CRITICAL_SHIELDS);
+}
+
 // ---------------------------------------------------------------- suspension viscosity
 
 #[test]

@@ -9,7 +9,10 @@
 //!
 //! Critical value: θ_c ≈ 0.12 for bed-load onset in laminar shearing flows (Ouriemi, Aussillous &
 //! Guazzelli 2009; Charru et al. 2004 report ≈ 0.12 on a fresh bed, falling to ≈ 0.04 after
-//! armouring) — value and citations from memory. τ_w ignores the area the layer takes up.
+//! armouring) — value and citations from memory. A published measurement in a closed horizontal
+//! pipe slurry loop, θ_c = 0.094 ± 0.043 at incipient motion (Rice et al. 2017, Int. J.
+//! Multiphase Flow, abstract), brackets it (checked in tests/slurry.rs). τ_w ignores the area the
+//! layer takes up.
 //!
 //! Example (hand calculation): μ = 1 mPa·s, U = 10 mm/s, D = 1 mm, Δρ = 1500 kg/m³, d = 50 µm:
 //! θ = 0.08 / 0.7354988 = 0.108770 (six digits).
@@ -34,7 +37,7 @@ pub const CRITICAL_SHIELDS: f64 = 0.12;
 pub const INFO: ModelInfo = ModelInfo {
     name: "Laminar Shields number",
     formula: "θ = 8 μ U / (D |ρ_p − ρ| g d); layer moves for θ > θ_c ≈ 0.12",
-    source: "Ouriemi, Aussillous & Guazzelli (2009) J. Fluid Mech. 636, 295–319 (θ_c and citation from memory)",
+    source: "Ouriemi, Aussillous & Guazzelli (2009) J. Fluid Mech. 636, 295–319 (θ_c and citation from memory); within θ_c = 0.094 ± 0.043 measured in closed pipe flow (Rice et al. 2017)",
     validity: &[],
 };
 
