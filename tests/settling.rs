@@ -252,7 +252,7 @@ fn richardson_zaki_exponent_follows_each_branch() {
 
 /// Richardson & Zaki (1954), Table VI: n₀ (the exponent extrapolated to d/D → 0, read by the
 /// authors off their Fig. 18) against Re. Values as printed in the paper (reprint: Chem. Eng.
-/// Res. Des. 75 (1997) S94), taken from a public transcription whose printed log columns
+/// Res. Des. 75 (1997) S94), read from a public re-typed copy whose printed log columns
 /// reproduce every row. Published values, figure-derived, not raw measurements.
 const RZ_TABLE_VI: [(f64, f64); 18] = [
     (0.39, 4.52), (0.49, 4.45), (0.76, 4.42), (1.23, 4.33), (2.02, 4.17), (2.35, 4.14), (2.75, 4.02), (6.53, 3.76), (9.45, 3.54),
@@ -260,8 +260,8 @@ const RZ_TABLE_VI: [(f64, f64); 18] = [
 ];
 
 /// Richardson & Zaki (1954), Tables I and II: measured slopes n of sedimentation runs, as
-/// (run, Re, d/D, n) printed in the paper (reprint pp. S88–S89, same public transcription).
-/// Left out: runs H and N (d/D column inconsistent with d and D in the transcription), runs 8, 9
+/// (run, Re, d/D, n) printed in the paper (reprint pp. S88–S89, same public re-typed copy).
+/// Left out: runs H and N (d/D column inconsistent with d and D in that copy), runs 8, 9
 /// and 12 (particles rising), and the two runs X and Y are kept although d/D > 0.04.
 const RZ_MEASURED: [(&str, f64, f64, f64); 31] = [
     ("B", 7.89e-2, 9.53e-3, 4.90), ("A", 7.89e-2, 6.46e-3, 4.79), ("C", 7.89e-2, 3.77e-3, 4.76), ("P", 1.85e-4, 9.53e-3, 4.90),
