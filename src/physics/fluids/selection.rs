@@ -10,7 +10,7 @@ use crate::physics::input::{Allowed, FieldSpec, InputError};
 use crate::physics::report::{Check, Figure, ModelInfo, NumericalError, RangeWarning, Verdict};
 use crate::physics::units::{Density, Dimension, DynamicViscosity, Fraction, Pressure, Temperature, format_significant};
 
-/// The built-in solvents, in the order of [`Solvent::ALL`], then "custom".
+/// The built-in solvents, in the order of [`Solvent::ALL`], then "mixture" and "custom".
 pub const LIQUID_OPTIONS: &[(&str, &str)] = &[
     ("water", "Water"),
     ("methanol", "Methanol"),
@@ -189,6 +189,12 @@ impl LiquidSelection {
             LiquidSelection::Mixture { mixture, .. } => vec![mixture.first(), mixture.second()],
             LiquidSelection::Custom { .. } => Vec::new(),
         }
+    }
+
+    /// The checks on the liquid itself at the outlet's absolute pressure: boiling (solvents and
+    /// mixtures) and, for a mixture, its mixing rules.
+    pub fn checks(&self, outlet: Pressure) -> Vec<Check> {
+        self.boiling_check(outlet).into_iter().chain(self.mixture_check()).collect()
     }
 
     /// For a mixture, the check that names its mixing rules and any reason they may be far off

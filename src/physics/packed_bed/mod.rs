@@ -804,8 +804,7 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
     if let Some(target) = &input.sizing {
         checks.push(sizing_figures_and_check(input, target, eps, &mut figures)?);
     }
-    checks.extend(input.liquid.boiling_check(crate::physics::units::Pressure::from_gauge(input.back_pressure, input.ambient)));
-    checks.extend(input.liquid.mixture_check());
+    checks.extend(input.liquid.checks(crate::physics::units::Pressure::from_gauge(input.back_pressure, input.ambient)));
     let lifting_flow = umf.as_ref().map(|f| f.value.get() * crate::physics::pipe_flow::bore_area(input.tube_diameter));
     let plots = vec![plots::pressure_drop_vs_flow(input, &bed, lifting_flow)?];
     Ok(Report { figures, checks, plots })

@@ -553,8 +553,7 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
         .filter(|(_, r)| r.settling.max(r.clogging) != Verdict::Fine)
         .map(|(i, r)| format!("element {} ({}, {})", i + 1, input.elements[i].kind.word(), r.settling.max(r.clogging).word()))
         .collect();
-    checks.extend(input.liquid.boiling_check(crate::physics::units::Pressure::from_gauge(input.back_pressure, input.ambient)));
-    checks.extend(input.liquid.mixture_check());
+    checks.extend(input.liquid.checks(crate::physics::units::Pressure::from_gauge(input.back_pressure, input.ambient)));
     let verdict = checks.iter().map(|c| c.verdict).max().unwrap_or(Verdict::Fine);
     // The line verdict first: it is what the user reads before the per-element detail.
     checks.insert(0, Check {

@@ -280,7 +280,6 @@ pub fn evaluate(input: &TubularInput) -> Result<Report, NumericalError> {
         bore_mismatch(tubing, input.inner_diameter, &mut check);
         checks.push(check);
     }
-    checks.extend(input.liquid.boiling_check(Pressure::from_gauge(input.back_pressure, input.ambient)));
-    checks.extend(input.liquid.mixture_check());
+    checks.extend(input.liquid.checks(Pressure::from_gauge(input.back_pressure, input.ambient)));
     Ok(Report { figures, checks, plots: Vec::new() })
 }
