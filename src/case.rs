@@ -50,11 +50,16 @@ pub enum FormItem {
     Field(FieldSpec),
     /// A choice between named options.
     Choice(ChoiceSpec),
+    /// A heading over the entries that follow it (shown when any of them is).
+    Heading(&'static str),
 }
 
-use FormItem::{Choice, Field};
+use FormItem::{Choice, Field, Heading};
+
+
 
 const TUBULAR_LAYOUT: &[FormItem] = &[
+    Heading("Reactor and feed"),
     Choice(tubular::OPERATION),
     Field(tubular::INNER_DIAMETER),
     Field(tubular::LENGTH),
@@ -62,6 +67,9 @@ const TUBULAR_LAYOUT: &[FormItem] = &[
     Field(tubular::CONCENTRATION),
     Field(tubular::YIELD),
     Field(tubular::MOLAR_MASS),
+    Field(tubular::RESERVOIR),
+    Field(tubular::PASSES),
+    Heading("Liquid"),
     Choice(fluids::selection::LIQUID),
     Choice(fluids::selection::MIXTURE_FIRST),
     Choice(fluids::selection::MIXTURE_SECOND),
@@ -69,16 +77,16 @@ const TUBULAR_LAYOUT: &[FormItem] = &[
     Field(fluids::selection::TEMPERATURE),
     Field(tubular::DENSITY),
     Field(tubular::VISCOSITY),
+    Heading("Pressure and tubing"),
     Field(tubular::BACK_PRESSURE),
     Field(crate::physics::ambient::AMBIENT_PRESSURE),
     Field(tubular::RATING),
     Choice(crate::physics::tubing::MATERIAL),
     Choice(crate::physics::tubing::SIZE),
-    Field(tubular::RESERVOIR),
-    Field(tubular::PASSES),
 ];
 
 const PACKED_BED_LAYOUT: &[FormItem] = &[
+    Heading("Cartridge and bed"),
     Field(bed::TUBE_DIAMETER),
     Choice(bed::BED_LENGTH_SOURCE),
     Field(bed::BED_LENGTH),
@@ -94,6 +102,7 @@ const PACKED_BED_LAYOUT: &[FormItem] = &[
     Field(crate::physics::solids::PARTICLE_POROSITY),
     Choice(bed::VOIDAGE_SOURCE),
     Field(bed::VOIDAGE),
+    Heading("Flow and liquid"),
     Field(bed::FLOW),
     Choice(bed::FLOW_DIRECTION),
     Choice(bed::CONFINEMENT),
@@ -104,6 +113,7 @@ const PACKED_BED_LAYOUT: &[FormItem] = &[
     Field(fluids::selection::TEMPERATURE),
     Field(bed::DENSITY),
     Field(bed::VISCOSITY),
+    Heading("Pressure limits and tubing"),
     Field(bed::BACK_PRESSURE),
     Field(crate::physics::ambient::AMBIENT_PRESSURE),
     Field(bed::PUMP_LIMIT),
@@ -111,6 +121,7 @@ const PACKED_BED_LAYOUT: &[FormItem] = &[
     Field(bed::FITTING_RATING),
     Choice(crate::physics::tubing::MATERIAL),
     Choice(crate::physics::tubing::SIZE),
+    Heading("Capacity and sizing"),
     Field(bed::SOLID_MASS),
     Choice(bed::BED_ROLE),
     Field(bed::LOADING),
@@ -122,6 +133,7 @@ const PACKED_BED_LAYOUT: &[FormItem] = &[
 ];
 
 const SLURRY_LAYOUT: &[FormItem] = &[
+    Heading("Operation and liquid"),
     Choice(slurry::OPERATION),
     Field(slurry::PASSES),
     Field(slurry::FLOW),
@@ -132,6 +144,7 @@ const SLURRY_LAYOUT: &[FormItem] = &[
     Field(fluids::selection::TEMPERATURE),
     Field(slurry::DENSITY),
     Field(slurry::VISCOSITY),
+    Heading("Solids"),
     Choice(crate::physics::solids::SOLID),
     Field(slurry::PARTICLE_DENSITY),
     Field(crate::physics::solids::PARTICLE_POROSITY),
@@ -143,6 +156,7 @@ const SLURRY_LAYOUT: &[FormItem] = &[
     Field(slurry::SPHERICITY),
     Choice(slurry::LOADING_BASIS),
     Field(slurry::LOADING),
+    Heading("Pressure and tubing"),
     Field(slurry::BACK_PRESSURE),
     Field(crate::physics::ambient::AMBIENT_PRESSURE),
     Field(slurry::RATING),
@@ -158,12 +172,14 @@ const SLURRY_ELEMENT_LAYOUT: &[FormItem] = &[
 ];
 
 const SEGMENTED_FLOW_LAYOUT: &[FormItem] = &[
+    Heading("Gas"),
     Choice(gas::GAS),
     Field(gas::GAS_MOLE_FRACTION),
     Field(gas::GAS_FLOW),
     Choice(gas::REFERENCE_STATE),
     Field(gas::REFERENCE_TEMPERATURE),
     Field(gas::REFERENCE_PRESSURE),
+    Heading("Liquid"),
     Choice(gas::SOLVENT),
     Field(fluids::CUSTOM_DENSITY),
     Field(fluids::CUSTOM_VISCOSITY),
@@ -173,11 +189,13 @@ const SEGMENTED_FLOW_LAYOUT: &[FormItem] = &[
     Field(gas::DIFFUSIVITY),
     Field(gas::LIQUID_FLOW),
     Field(gas::CONCENTRATION),
+    Heading("Junction and coil"),
     Field(gas::INNER_DIAMETER),
     Choice(gas::JUNCTION),
     Field(gas::JUNCTION_WIDTH),
     Field(gas::LENGTH),
     Field(gas::TEMPERATURE),
+    Heading("Pressure, consumption and hazards"),
     Field(gas::BACK_PRESSURE),
     Field(crate::physics::ambient::AMBIENT_PRESSURE),
     Field(gas::RATING),
@@ -317,10 +335,18 @@ pub enum Entry {
 }
 
 fn layout_has(layout: &[FormItem], key: &str) -> bool {
-    layout.iter().any(|item| match item {
-        Field(f) => f.key == key,
-        Choice(c) => c.key == key,
-    })
+    layout.iter().any(|item| item.key() == Some(key))
+}
+
+impl FormItem {
+    /// The entry's key; `None` for a heading.
+    pub const fn key(&self) -> Option<&'static str> {
+        match self {
+            Field(f) => Some(f.key),
+            Choice(c) => Some(c.key),
+            Heading(_) => None,
+        }
+    }
 }
 
 /// Field key → entry: the inputs of a case, or of one element of a line.

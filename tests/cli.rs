@@ -115,3 +115,21 @@ fn element_errors_name_the_element() {
     let err = String::from_utf8(out.stderr).unwrap();
     assert!(err.contains("element_2_inner_diameter") && err.contains("-0.5 mm"), "{err}");
 }
+
+#[test]
+fn every_form_opens_with_a_heading_and_has_no_empty_section() {
+    use clearbore::case::{Calculator, FormItem};
+    for calculator in Calculator::ALL {
+        let layout = calculator.layout();
+        assert!(matches!(layout[0], FormItem::Heading(_)), "{calculator:?}");
+        for (i, item) in layout.iter().enumerate() {
+            if matches!(item, FormItem::Heading(_)) {
+                assert!(layout.get(i + 1).and_then(FormItem::key).is_some(), "{calculator:?}: heading {i} has no entry under it");
+            }
+        }
+        // Every key appears once.
+        let keys: Vec<_> = layout.iter().filter_map(FormItem::key).collect();
+        let unique: std::collections::HashSet<_> = keys.iter().collect();
+        assert_eq!(keys.len(), unique.len(), "{calculator:?}");
+    }
+}

@@ -32,6 +32,7 @@ impl FormState {
             match item {
                 FormItem::Field(spec) => fields.push((*spec, FieldState::new("", spec.dimension.default_unit().symbol))),
                 FormItem::Choice(spec) => choices.push((*spec, RwSignal::new(0))),
+                FormItem::Heading(_) => {}
             }
         }
         Self { fields, choices }
@@ -190,10 +191,7 @@ impl CalculatorForm {
             .element_layout()
             .unwrap_or_default()
             .iter()
-            .map(|item| match item {
-                FormItem::Field(f) => f.key,
-                FormItem::Choice(c) => c.key,
-            })
+            .filter_map(FormItem::key)
             .collect();
         let elements = self.elements.get_untracked().iter().map(|e| e.state.to_entries(&all, &mut errors)).collect();
         if !errors.is_empty() {
@@ -271,16 +269,25 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
         let form = form.clone();
         move || {
             let keys = applicable.get();
-            calculator
-                .layout()
+            let layout = calculator.layout();
+            // A heading shows when any entry under it (up to the next heading) is shown.
+            let shown_under = |i: usize| {
+                layout[i + 1..]
+                    .iter()
+                    .take_while(|item| !matches!(item, FormItem::Heading(_)))
+                    .any(|item| item.key().is_some_and(|k| keys.contains(&k)))
+            };
+            layout
                 .iter()
-                .filter_map(|item| match item {
+                .enumerate()
+                .filter_map(|(i, item)| match item {
                     FormItem::Field(spec) if keys.contains(&spec.key) => {
                         form.main.field(spec.key).map(|state| view! { <QuantityField spec=*spec state=state /> }.into_any())
                     }
                     FormItem::Choice(spec) if keys.contains(&spec.key) => {
                         form.main.choice_signal(spec.key).map(|selected| view! { <ChoicePicker spec=*spec selected=selected /> }.into_any())
                     }
+                    FormItem::Heading(text) if shown_under(i) => Some(view! { <h3 class="form-heading">{*text}</h3> }.into_any()),
                     _ => None,
                 })
                 .collect_view()

@@ -320,7 +320,7 @@ fn clogging_check(line: &Line, i: usize, e: &LineElement, figures: &mut Vec<Figu
     };
     let mut reason = format!(
         "{} opening {} µm over d90 {} µm: ratio {} — {what}.{}",
-        e.kind.word(),
+        crate::physics::fluids::selection::capitalised(e.kind.word()),
         um(w),
         um(d),
         format_significant(ratio, 3),
