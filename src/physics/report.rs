@@ -182,9 +182,31 @@ impl Figure {
     }
 }
 
+/// Warnings for every bound of `info` whose quantity is among `values` and outside the bound.
+/// Bounds on quantities not in `values` are skipped.
+pub fn range_warnings(info: &ModelInfo, values: &[(&'static str, f64)]) -> Vec<RangeWarning> {
+    info.validity
+        .iter()
+        .filter_map(|bound| values.iter().find(|(name, _)| *name == bound.quantity).and_then(|(_, v)| bound.check(*v, info)))
+        .collect()
+}
+
 /// Fraction of a pressure rating above which a pressure budget is a caution (common practice, no
 /// source: a 20 % margin for pulsation, partial blockage and gauge error).
 pub const PRESSURE_MARGIN: f64 = 0.8;
+
+/// Verdict of a pressure budget: a problem above the rating, a caution when the recommended
+/// (`ratio`) or the most pessimistic (`worst_ratio`) pressure over the rating is above
+/// [`PRESSURE_MARGIN`], fine otherwise.
+pub fn budget_verdict(ratio: f64, worst_ratio: f64) -> Verdict {
+    if ratio > 1.0 {
+        Verdict::Problem
+    } else if ratio > PRESSURE_MARGIN || worst_ratio > PRESSURE_MARGIN {
+        Verdict::Caution
+    } else {
+        Verdict::Fine
+    }
+}
 
 /// Outcome of a check, from harmless to stop-and-fix.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, PartialOrd, Ord, Serialize)]

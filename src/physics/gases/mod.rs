@@ -17,7 +17,6 @@ use serde::Serialize;
 
 use self::gas_data::{AIR_OXYGEN_FRACTION, GASES, GasData};
 use crate::physics::fluids::{Evaluated, Solvent};
-use crate::physics::report::RangeWarning;
 use crate::physics::units::{Density, Diffusivity, DynamicViscosity, MolarMass, Pressure, Temperature, format_significant};
 
 /// A built-in gas.
@@ -38,9 +37,7 @@ pub enum Gas {
     Air,
 }
 
-fn range_warnings(info: &crate::physics::report::ModelInfo, t: Temperature) -> Vec<RangeWarning> {
-    info.validity.iter().filter_map(|b| b.check(t.kelvin(), info)).collect()
-}
+use crate::physics::fluids::models::range_warnings;
 
 impl Gas {
     /// Every built-in gas, in table order.

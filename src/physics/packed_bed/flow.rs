@@ -2,7 +2,6 @@
 //! velocity), its dimensionless groups, and the range check that turns validity bounds into
 //! warnings.
 
-use crate::physics::report::{ModelInfo, RangeWarning};
 use crate::physics::units::{Density, DynamicViscosity, Fraction, Length, PressureDifference, Velocity};
 
 /// Name of the particle Reynolds number Re_p = ρ u_s d_p / μ in validity bounds.
@@ -73,19 +72,7 @@ impl BedFlow {
     }
 }
 
-/// Warnings for every bound of `info` whose quantity is among `values` and outside the bound.
-/// Bounds on quantities not in `values` are skipped; a test keeps every bound's quantity known.
-pub fn range_warnings(info: &ModelInfo, values: &[(&'static str, f64)]) -> Vec<RangeWarning> {
-    info.validity
-        .iter()
-        .filter_map(|bound| {
-            values
-                .iter()
-                .find(|(name, _)| *name == bound.quantity)
-                .and_then(|(_, v)| bound.check(*v, info))
-        })
-        .collect()
-}
+pub use crate::physics::report::range_warnings;
 
 /// ΔP = f_v μ u_s L (1 − ε)² / (ε³ d_p²): the pressure drop for a viscous friction factor f_v
 /// (f_v = ΔP d_p² ε³ / (L μ u_s (1 − ε)²), the form Erdim, Akgiray & Demir (2015) compare
@@ -107,7 +94,7 @@ pub(crate) fn viscous_voidage_factor(voidage: f64) -> f64 {
 #[allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
 mod tests {
     use super::*;
-    use crate::physics::report::ValidityBound;
+    use crate::physics::report::{ModelInfo, ValidityBound};
     use crate::physics::units::Dimension;
 
     fn bed() -> BedFlow {

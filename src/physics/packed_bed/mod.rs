@@ -37,7 +37,7 @@ use super::form::{ChoiceSpec, Collector, FieldSource};
 use super::input::{Allowed, FieldSpec, InputError};
 use super::numeric::RootError;
 use super::solids::{self, SolidSelection};
-use super::report::{Check, Estimate, Figure, Finite, ModelInfo, NumericalError, Report, Verdict};
+use super::report::{Check, Estimate, Figure, Finite, ModelInfo, NumericalError, PRESSURE_MARGIN, Report, Verdict, budget_verdict};
 use super::units::{
     Concentration, Density, Dimension, Duration, DynamicViscosity, Fraction, Length, PressureDifference, Velocity,
     VolumetricFlow, format_significant,
@@ -428,7 +428,6 @@ pub const NARROWEST_TUBE_INFO: ModelInfo = ModelInfo {
     validity: &[],
 };
 
-pub use crate::physics::report::PRESSURE_MARGIN;
 
 const OVER_PRESSURE_CAUTION: &str = "Over-pressure can burst a cartridge or tubing or blow a fitting apart and spray hot, possibly \
 toxic liquid and catalyst. Stay below the lowest-rated component (polymer and glass parts lose \
@@ -494,20 +493,15 @@ fn pressure_check(inlet: f64, dp: &Figure, back: f64, rating: f64, rating_part: 
     let ratio = inlet / rating;
     let (_, worst_dp) = dp.spread();
     let worst_ratio = (back + worst_dp) / rating;
-    let (verdict, note) = if ratio > 1.0 {
-        (Verdict::Problem, ": over the rating".to_owned())
-    } else if ratio > PRESSURE_MARGIN {
-        (Verdict::Caution, ": less than 20 % margin (common practice, no source)".to_owned())
-    } else if worst_ratio > PRESSURE_MARGIN {
-        (
-            Verdict::Caution,
-            format!(
-                "; the highest correlation ({} bar bed drop) leaves less than 20 % margin (common practice, no source)",
-                bar(worst_dp)
-            ),
-        )
-    } else {
-        (Verdict::Fine, String::new())
+    let verdict = budget_verdict(ratio, worst_ratio);
+    let note = match verdict {
+        Verdict::Problem => ": over the rating".to_owned(),
+        Verdict::Caution if ratio > PRESSURE_MARGIN => ": less than 20 % margin (common practice, no source)".to_owned(),
+        Verdict::Caution => format!(
+            "; the highest correlation ({} bar bed drop) leaves less than 20 % margin (common practice, no source)",
+            bar(worst_dp)
+        ),
+        Verdict::Fine => String::new(),
     };
     let caution = (verdict != Verdict::Fine).then(|| OVER_PRESSURE_CAUTION.to_owned());
     Check {

@@ -4,7 +4,7 @@
 //! and the range check that turns validity bounds into warnings.
 
 use crate::physics::fluids::Liquid;
-use crate::physics::report::{ModelInfo, RangeWarning};
+use crate::physics::report::ModelInfo;
 use crate::physics::units::{Density, DynamicViscosity, Length, Velocity, VolumetricFlow};
 
 /// Standard gravity, m/s² (exact; also the value in `fluids` 1.3.1).
@@ -100,13 +100,7 @@ impl TwoPhaseFlow {
     }
 }
 
-/// Warnings for every bound of `info` whose quantity is among `values` and outside the bound.
-pub fn range_warnings(info: &ModelInfo, values: &[(&'static str, f64)]) -> Vec<RangeWarning> {
-    info.validity
-        .iter()
-        .filter_map(|b| values.iter().find(|(q, _)| *q == b.quantity).and_then(|(_, v)| b.check(*v, info)))
-        .collect()
-}
+pub use crate::physics::report::range_warnings;
 
 /// Metadata of the dimensionless groups (definitions).
 pub const GROUPS_INFO: ModelInfo = ModelInfo {

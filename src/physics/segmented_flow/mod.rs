@@ -39,7 +39,7 @@ use super::form::{ChoiceSpec, Collector, FieldSource};
 use super::gases::reference_state::{self, GAS_CONSTANT};
 use super::gases::{Gas, HenrySolubility, MolarFlow, ReferenceFlow, ReferenceState, henry, sutherland, wilke_chang};
 use super::input::{Allowed, FieldSpec, InputError};
-use super::report::{Check, Estimate, Figure, Finite, ModelInfo, RangeWarning, Report, Verdict};
+use super::report::{Check, Estimate, Figure, Finite, ModelInfo, RangeWarning, Report, Verdict, budget_verdict};
 use super::units::{
     Concentration, Diffusivity, Dimension, DynamicViscosity, Length, MolarMass, Pressure, PressureDifference,
     Temperature, VolumetricFlow, format_significant,
@@ -344,7 +344,6 @@ impl SegmentedFlowInput {
     }
 }
 
-pub use crate::physics::report::PRESSURE_MARGIN;
 
 /// Limiting oxygen concentration taken for common flammable solvents with N₂ diluent at ambient
 /// conditions: ~10 vol % (from memory: NFPA 69 / Zabetakis values as listed in `practice.md`
@@ -672,12 +671,11 @@ fn pressure_check(inlet_gauge: f64, dp: f64, figures: &[Figure], rating: f64) ->
     let worst_dp = figures.iter().find(|f| f.key == "pressure_drop").map_or(dp, |f| f.spread().1);
     let ratio = inlet_gauge / rating;
     let worst_ratio = (inlet_gauge - dp + worst_dp) / rating;
-    let (verdict, note) = if ratio > 1.0 {
-        (Verdict::Problem, ": over the rating")
-    } else if ratio > PRESSURE_MARGIN || worst_ratio > PRESSURE_MARGIN {
-        (Verdict::Caution, ": less than 20 % margin by the recommended or the highest model (common practice, no source)")
-    } else {
-        (Verdict::Fine, "")
+    let verdict = budget_verdict(ratio, worst_ratio);
+    let note = match verdict {
+        Verdict::Problem => ": over the rating",
+        Verdict::Caution => ": less than 20 % margin by the recommended or the highest model (common practice, no source)",
+        Verdict::Fine => "",
     };
     Check {
         key: "pressure_budget",

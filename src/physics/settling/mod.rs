@@ -16,7 +16,6 @@ pub mod stokes;
 
 use serde::Serialize;
 
-use crate::physics::report::{ModelInfo, RangeWarning};
 use crate::physics::units::{Density, DynamicViscosity, Length, Velocity};
 
 pub use crate::physics::units::STANDARD_GRAVITY;
@@ -98,13 +97,7 @@ impl Particle {
     }
 }
 
-/// Warnings for every bound of `info` whose quantity is among `values` and outside the bound.
-pub fn range_warnings(info: &ModelInfo, values: &[(&'static str, f64)]) -> Vec<RangeWarning> {
-    info.validity
-        .iter()
-        .filter_map(|bound| values.iter().find(|(name, _)| *name == bound.quantity).and_then(|(_, v)| bound.check(*v, info)))
-        .collect()
-}
+pub use crate::physics::report::range_warnings;
 
 #[cfg(test)]
 #[allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]

@@ -10,7 +10,7 @@ use super::{
 };
 use crate::physics::numeric::{RootError, Tolerance, brent};
 use crate::physics::pipe_flow::{self, hagen_poiseuille};
-use crate::physics::report::{Check, Estimate, Figure, Finite, ModelInfo, NumericalError, RangeWarning, Report, Verdict};
+use crate::physics::report::{Check, Estimate, Figure, Finite, ModelInfo, NumericalError, RangeWarning, Report, Verdict, budget_verdict};
 use crate::physics::settling::drag::terminal_velocity_spread;
 use crate::physics::settling::hindered::{HinderedModel, Suspension, hindered_velocity_spread};
 use crate::physics::settling::{Drift, range_warnings};
@@ -25,7 +25,6 @@ pub const DEPOSIT_PROBLEM: f64 = 0.1;
 /// Up-flow margin: U ≥ 5 v_h keeps the wall zone slower than the particles below 10 % of the bore
 /// area (this tool's margin: common practice, no source).
 pub const UPFLOW_MARGIN: f64 = 5.0;
-pub use crate::physics::report::PRESSURE_MARGIN;
 /// Smallest particle size searched when solving for the largest tolerable size, 0.1 µm.
 pub const SMALLEST_SEARCHED: f64 = 1e-7;
 /// Largest flow searched, as a multiple of the entered flow.
@@ -425,12 +424,11 @@ fn pressure_check(inlet: f64, total: &Figure, back: f64, rating: f64) -> Check {
     let bar = |p: f64| format_significant(p / 1e5, 3);
     let ratio = inlet / rating;
     let (_, worst) = total.spread();
-    let (verdict, note) = if ratio > 1.0 {
-        (Verdict::Problem, ": over the rating")
-    } else if ratio > PRESSURE_MARGIN || (back + worst) / rating > PRESSURE_MARGIN {
-        (Verdict::Caution, ": less than 20 % margin (common practice, no source)")
-    } else {
-        (Verdict::Fine, "")
+    let verdict = budget_verdict(ratio, (back + worst) / rating);
+    let note = match verdict {
+        Verdict::Problem => ": over the rating",
+        Verdict::Caution => ": less than 20 % margin (common practice, no source)",
+        Verdict::Fine => "",
     };
     Check {
         key: "pressure_budget",

@@ -305,7 +305,7 @@ pub fn check(choice: &TubingChoice, inlet: PressureDifference, solvents: &[super
     let (verdict, mut reason, mut caution) = match working_pressure(choice.material, &choice.size, choice.temperature) {
         Ok((rating, _)) => {
             let ratio = inlet.si() / rating.si();
-            let verdict = if ratio > 1.0 { Verdict::Problem } else if ratio > 0.8 { Verdict::Caution } else { Verdict::Fine };
+            let verdict = super::report::budget_verdict(ratio, ratio);
             (
                 verdict,
                 format!(

@@ -13,7 +13,7 @@ use super::ambient;
 use super::form::{ChoiceSpec, Collector, FieldSource};
 use super::input::{Allowed, FieldSpec, InputError};
 use super::pipe_flow::{self, hagen_poiseuille};
-use super::report::{Check, Figure, NumericalError, Report, Verdict};
+use super::report::{Check, Figure, NumericalError, Report, Verdict, budget_verdict};
 use super::tubing::{self, TubingChoice};
 use super::units::{
     Concentration, Density, Dimension, DynamicViscosity, Fraction, Length, MolarMass, Pressure,
@@ -172,7 +172,6 @@ impl TubularInput {
     }
 }
 
-pub use crate::physics::report::PRESSURE_MARGIN;
 
 const OVER_PRESSURE_CAUTION: &str = "Over-pressure can burst tubing or blow a fitting apart and spray hot, possibly toxic \
 liquid. Stay below the lowest-rated component (tubing rating falls with temperature), use a pump \
@@ -181,13 +180,8 @@ pressure limit or relief, shield pressurised parts, and follow local codes and i
 fn pressure_check(inlet: PressureDifference, dp: PressureDifference, rating: PressureDifference) -> Check {
     let bar = |p: PressureDifference| format_significant(p.bar(), 3);
     let ratio = inlet.si() / rating.si();
-    let (verdict, caution) = if ratio > 1.0 {
-        (Verdict::Problem, Some(OVER_PRESSURE_CAUTION.to_owned()))
-    } else if ratio > PRESSURE_MARGIN {
-        (Verdict::Caution, Some(OVER_PRESSURE_CAUTION.to_owned()))
-    } else {
-        (Verdict::Fine, None)
-    };
+    let verdict = budget_verdict(ratio, ratio);
+    let caution = (verdict != Verdict::Fine).then(|| OVER_PRESSURE_CAUTION.to_owned());
     let reason = format!(
         "Inlet pressure {} bar(g) (back-pressure + {} bar line drop) is {:.0} % of the {} bar(g) rating{}.",
         bar(inlet),
