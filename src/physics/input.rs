@@ -100,6 +100,11 @@ impl std::fmt::Display for InputError {
 
 impl std::error::Error for InputError {}
 
+/// A field spec, for the calculators' field tables.
+pub const fn field(key: &'static str, label: &'static str, dimension: Dimension, allowed: Allowed, help: &'static str) -> FieldSpec {
+    FieldSpec { key, label, dimension, allowed, help }
+}
+
 impl FieldSpec {
     fn error(&self, given: String, problem: String) -> InputError {
         InputError { field: self.key, label: self.label, given, problem }

@@ -45,9 +45,7 @@ use super::units::{
     Temperature, VolumetricFlow, format_significant,
 };
 
-const fn field(key: &'static str, label: &'static str, dimension: Dimension, allowed: Allowed, help: &'static str) -> FieldSpec {
-    FieldSpec { key, label, dimension, allowed, help }
-}
+use super::input::field;
 
 const NON_NEGATIVE: Allowed = Allowed { low: 0.0, low_inclusive: true, high: None, high_inclusive: false, whole: false };
 const BELOW_ONE: Allowed = Allowed { low: 0.0, low_inclusive: true, high: Some(1.0), high_inclusive: false, whole: false };
