@@ -244,16 +244,18 @@ async fn gas_liquid_demo_shows_equivalents_spreads_and_the_oxygen_caution() {
     // Several slug-length and kLa correlations, each shown with the spread.
     assert!(b.exists("[data-testid=spread-bubble_length]").await);
     assert!(b.exists("[data-testid=spread-kla_per_s]").await);
-    // 9 % O₂ with acetonitrile: a caution with the limiting-oxygen advice beside it.
-    assert!(b.text("[data-testid=verdict-gas_hazard]").await.to_lowercase().contains("caution"));
-    assert!(b.text("[data-testid=caution-gas_hazard]").await.contains("LOC"));
+    // 9 % O₂ over acetonitrile at 60 °C is above its estimated LOC (8.04 vol %): a problem, with
+    // the oxygen fraction that would be within the margin beside it.
+    assert!(b.text("[data-testid=verdict-gas_hazard]").await.to_lowercase().contains("problem"));
+    assert!(b.text("[data-testid=caution-gas_hazard]").await.contains("at most 4.83 % O₂"));
     b.screenshot("gas-liquid-demo").await;
-    // The solvent's own limiting oxygen concentration can replace the typical 10 %: at 8 % the
-    // 9 % O₂ feed is above the LOC itself.
+    // A measured LOC entered for the solvent replaces the estimate: at 12 % the 9 % O₂ feed is
+    // below it but above the 60 % margin (7.2 %), a caution.
     assert!(!b.exists("[data-testid=input-limiting_oxygen]").await);
     b.click("[data-testid=option-loc_source-entered]").await;
-    b.type_into("limiting_oxygen", "8").await;
-    b.text_when("[data-testid=check-gas_hazard]", |t| t.contains("8.00 vol % as entered") && t.contains("above the limiting oxygen concentration itself")).await;
+    b.type_into("limiting_oxygen", "12").await;
+    b.text_when("[data-testid=check-gas_hazard]", |t| t.contains("12.0 vol % as entered") && t.contains("above 7.20 vol %")).await;
+    assert!(b.text("[data-testid=verdict-gas_hazard]").await.to_lowercase().contains("caution"));
     // Another solvent changes the properties and every result that depends on them.
     let bond = b.text("[data-testid=result-bond]").await;
     b.choose("choice-solvent", "water").await;

@@ -445,20 +445,28 @@ fn calculator_reports_every_figure_with_one_recommended_estimate() {
 }
 
 #[test]
-fn diluted_oxygen_with_methanol_is_cautioned_and_low_oxygen_is_fine() {
+fn oxygen_over_methanol_follows_the_shared_limiting_oxygen_rule() {
+    // Methanol at 40 °C: estimated LOC 9.0 vol % (IEC LFL 6.0 % × 1.5 O₂ per mole, chemicals
+    // 1.5.2) × (1 − 0.000721 × 15) = 8.90 vol %; the margin is 60 % of it, 5.34 vol %.
     let r = run(&case());
-    assert_eq!(verdict(&r, "gas_hazard"), Verdict::Caution);
-    let caution = r.check("gas_hazard").unwrap().caution.clone().unwrap();
-    assert!(caution.contains("diluted O₂") && caution.contains("local codes"), "{caution}");
+    assert_eq!(verdict(&r, "gas_hazard"), Verdict::Problem, "9 % O₂ is above 8.90 %");
+    let check = r.check("gas_hazard").unwrap();
+    assert!(check.reason.contains("8.90 vol %") && check.reason.contains("can burn"), "{}", check.reason);
+    let caution = check.caution.clone().unwrap();
+    assert!(caution.contains("at most 5.34 % O₂") && caution.contains("local codes"), "{caution}");
     let mut c = case();
     c.quantities.insert("gas_mole_fraction", (5.0, "%"));
     assert_eq!(verdict(&run(&c), "gas_hazard"), Verdict::Fine);
+    c.quantities.insert("gas_mole_fraction", (7.0, "%"));
+    assert_eq!(verdict(&run(&c), "gas_hazard"), Verdict::Caution);
     c.choices.insert("gas", "air");
     let air = run(&c);
-    assert_eq!(verdict(&air, "gas_hazard"), Verdict::Caution);
-    assert!(air.check("gas_hazard").unwrap().reason.contains("above the limiting oxygen concentration itself"));
-    // An LOC entered for the solvent replaces the typical 10 %: 5 % O₂ is above 60 % of a 7 % LOC.
+    assert_eq!(verdict(&air, "gas_hazard"), Verdict::Problem);
+    assert!(air.check("gas_hazard").unwrap().reason.starts_with("Air (20.9 % O₂) is above the limiting oxygen concentration of 8.90 vol % estimated for methanol at 40.0 °C"));
+    // An LOC entered for the solvent replaces the estimate and is not lowered for temperature:
+    // 5 % O₂ is above 60 % of a 7 % LOC.
     c.choices.insert("gas", "oxygen");
+    c.quantities.insert("gas_mole_fraction", (5.0, "%"));
     c.choices.insert("loc_source", "entered");
     c.quantities.insert("limiting_oxygen", (7.0, "%"));
     let r = run(&c);

@@ -5,6 +5,7 @@ pub mod ambient;
 pub mod fluids;
 pub mod form;
 pub mod gases;
+pub mod hazards;
 pub mod input;
 pub mod numeric;
 pub mod ode;

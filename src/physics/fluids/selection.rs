@@ -4,7 +4,7 @@
 use serde::Serialize;
 
 use super::mixtures::{DENSITY_RULE, FIRST_VOLUME_FRACTION, SURFACE_TENSION_RULE, VAPOUR_PRESSURE_RULE, VISCOSITY_RULE};
-use super::{BinaryMixture, BoilingCheck, PropertyError, Property, Solvent};
+use super::{BinaryMixture, PropertyError, Property, Solvent};
 use crate::physics::form::{ChoiceSpec, Collector, FieldSource};
 use crate::physics::input::{Allowed, FieldSpec, InputError};
 use crate::physics::report::{Check, Figure, ModelInfo, NumericalError, RangeWarning, Verdict};
@@ -260,7 +260,6 @@ impl LiquidSelection {
     /// Whether a built-in solvent or a mixture of two boils at the lowest absolute pressure in
     /// the line (at the outlet); `None` for an entered liquid, whose vapour pressure is unknown.
     pub fn boiling_check(&self, outlet: Pressure) -> Option<Check> {
-        let bar = |p: f64| format_significant(p / 1e5, 3);
         let (what, model, temperature, vapour) = match *self {
             LiquidSelection::Solvent { solvent, temperature } => {
                 (capitalised(solvent.name()), "Antoine fit", temperature, solvent.vapour_pressure(temperature).map(|p| p.value))
@@ -273,29 +272,14 @@ impl LiquidSelection {
             ),
             LiquidSelection::Custom { .. } => return None,
         };
-        Some(match vapour.map(|p| BoilingCheck::new(p, outlet)) {
-            Ok(b) => {
-                let boils = b.boils;
-                Check {
-                    key: "boiling",
-                    topic: "Solvent boiling",
-                    verdict: if boils { Verdict::Problem } else { Verdict::Fine },
-                    reason: format!(
-                        "{what} at {} °C has a vapour pressure of {} bar(a) ({model}) against {} bar(a) at the outlet: it {}.",
-                        format_significant(temperature.celsius(), 3),
-                        bar(b.vapour_pressure.pascals()),
-                        bar(outlet.pascals()),
-                        if boils { "boils" } else { "stays liquid" }
-                    ),
-                    caution: boils.then(|| {
-                        "A solvent above its boiling point flashes to vapour where the pressure drops: bubbles, \
-                         erratic flow and, in a closed line, pressure surges; hot vapour from a leak is a burn and \
-                         fire hazard. Raise the back-pressure or lower the temperature, and follow local codes and \
-                         institutional rules."
-                            .to_owned()
-                    }),
-                }
-            }
+        Some(match vapour {
+            Ok(p_sat) => crate::physics::hazards::boiling_check(
+                &format!("{what} at {} °C", format_significant(temperature.celsius(), 3)),
+                model,
+                p_sat,
+                outlet,
+                "at the outlet",
+            ),
             Err(e) => Check {
                 key: "boiling",
                 topic: "Solvent boiling",

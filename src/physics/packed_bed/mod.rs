@@ -427,10 +427,6 @@ pub const NARROWEST_TUBE_INFO: ModelInfo = ModelInfo {
 };
 
 
-const OVER_PRESSURE_CAUTION: &str = "Over-pressure can burst a cartridge or tubing or blow a fitting apart and spray hot, possibly \
-toxic liquid and catalyst. Stay below the lowest-rated component (polymer and glass parts lose \
-strength with temperature), use a pump pressure limit or relief, shield pressurised parts, and \
-follow local codes and institutional rules.";
 
 const LIFTING_CAUTION: &str = "A lifting bed carries fines to the upper frit, where they can block it: the pressure then \
 rises quickly towards the pump limit, and a bed that channels or escapes gives wrong contact \
@@ -501,7 +497,7 @@ fn pressure_check(inlet: f64, dp: &Figure, back: f64, rating: f64, rating_part: 
         ),
         Verdict::Fine => String::new(),
     };
-    let caution = (verdict != Verdict::Fine).then(|| OVER_PRESSURE_CAUTION.to_owned());
+    let caution = crate::physics::hazards::over_pressure_caution(verdict, crate::physics::hazards::LineContents::Cartridge);
     Check {
         key: "pressure_budget",
         topic: "Pressure budget",

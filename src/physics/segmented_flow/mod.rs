@@ -37,6 +37,7 @@ use self::flow::{CAPILLARY_BUBBLE, range_warnings};
 use super::fluids::{self, Liquid, Solvent};
 use super::form::{ChoiceSpec, Collector, FieldSource};
 use super::gases::reference_state::{self, GAS_CONSTANT};
+use super::hazards;
 use super::gases::{Gas, HenrySolubility, MolarFlow, ReferenceFlow, ReferenceState, henry, sutherland, wilke_chang};
 use super::input::{Allowed, FieldSpec, InputError};
 use super::report::{Check, Estimate, Figure, Finite, ModelInfo, RangeWarning, Report, Verdict, budget_verdict};
@@ -125,20 +126,7 @@ pub const CONSUMPTION: ChoiceSpec = ChoiceSpec {
 /// Share of the fed reactive gas consumed in the coil.
 pub const CONSUMED_FRACTION: FieldSpec = field("consumed_fraction", "Share of the gas consumed in the coil", Dimension::Fraction, BELOW_ONE, "Fraction of the fed gas taken up by reaction or dissolution between junction and regulator, spread evenly along the coil.");
 
-/// Where the limiting oxygen concentration comes from.
-pub const LOC_SOURCE: ChoiceSpec = ChoiceSpec {
-    key: "loc_source",
-    label: "Limiting oxygen concentration of the liquid's vapour",
-    options: &[("typical", "Typical for common solvents, ~10 vol % (from memory)"), ("entered", "Enter the value for your solvent")],
-};
-/// The LOC of the user's solvent, with N₂ as diluent.
-pub const LIMITING_OXYGEN_FIELD: FieldSpec = field(
-    "limiting_oxygen",
-    "Limiting oxygen concentration (N₂ diluent)",
-    Dimension::Fraction,
-    Allowed { low: 0.005, low_inclusive: true, high: Some(0.21), high_inclusive: true, whole: false },
-    "From your solvent's safety data (NFPA 69 Annex C tables, or measured to ASTM E2079), at or near the operating temperature and pressure.",
-);
+pub use crate::physics::hazards::oxygen::{LIMITING_OXYGEN_FIELD, LOC_SOURCE};
 
 /// Every quantity field, in page order.
 pub const FIELDS: &[FieldSpec] = &[
@@ -206,7 +194,7 @@ pub struct SegmentedFlowInput {
     /// Share of the fed reactive gas consumed in the coil, in [0, 1).
     pub consumed_fraction: f64,
     /// The limiting oxygen concentration entered for the liquid, if any (oxidising gases only);
-    /// `None` takes [`LIMITING_OXYGEN`].
+    /// `None` takes the estimate of [`crate::physics::hazards::oxygen::limit_for`].
     pub limiting_oxygen: Option<f64>,
 }
 
@@ -278,14 +266,7 @@ impl SegmentedFlowInput {
             None => None,
         };
         // Asked only where it matters: an oxidising gas.
-        let limiting_oxygen = match gas {
-            Some(g) if g.is_oxidising() => match c.take(src.choice(&LOC_SOURCE)) {
-                Some(0) => Some(None),
-                Some(_) => c.take(src.quantity(&LIMITING_OXYGEN_FIELD)).map(Some),
-                None => None,
-            },
-            _ => Some(None),
-        };
+        let limiting_oxygen = hazards::oxygen::read(src, &mut c, gas);
         let consumed_fraction = match c.take(src.choice(&CONSUMPTION)) {
             Some(0) => Some(0.0),
             Some(_) => c.take(src.quantity(&CONSUMED_FRACTION)),
@@ -342,18 +323,6 @@ impl SegmentedFlowInput {
     }
 }
 
-
-/// Limiting oxygen concentration taken for common flammable solvents with N₂ diluent at ambient
-/// conditions: ~10 vol % (from memory: NFPA 69 / Zabetakis values as listed in `practice.md`
-/// §4.1; methanol, ethanol, acetone ~10 %, toluene ~9.5 %). It falls with temperature and
-/// pressure (Osterberg et al., Org. Process Res. Dev. 2015).
-pub const LIMITING_OXYGEN: f64 = 0.10;
-/// Share of the LOC kept without continuous O₂ monitoring (from memory: NFPA 69).
-pub const LOC_MARGIN: f64 = 0.6;
-
-/// Back-pressure margin over the vapour pressure (common practice, no source: `practice.md`
-/// §2.2 suggests ≥ 1.5 × p_sat or ≥ 2–3 bar above it).
-pub const BOILING_MARGIN: f64 = 1.5;
 
 /// Metadata of the true liquid residence time.
 pub const RESIDENCE_TIME_INFO: ModelInfo = ModelInfo {
@@ -660,11 +629,6 @@ fn regime_check(outlet: &UnitCell, junction: &UnitCell) -> Check {
     Check { key: "flow_regime", topic: "Flow regime", verdict, reason, caution: None }
 }
 
-const OVER_PRESSURE_CAUTION: &str = "A gas-filled line stores far more energy than a liquid-filled one at the same pressure, and \
-fails violently. Stay below the lowest-rated component (polymer tubing loses strength with \
-temperature), fit a relief device, shield pressurised parts, and follow local codes and \
-institutional rules.";
-
 fn pressure_check(inlet_gauge: f64, dp: f64, figures: &[Figure], rating: f64) -> Check {
     let worst_dp = figures.iter().find(|f| f.key == "pressure_drop").map_or(dp, |f| f.spread().1);
     let ratio = inlet_gauge / rating;
@@ -687,7 +651,7 @@ fn pressure_check(inlet_gauge: f64, dp: f64, figures: &[Figure], rating: f64) ->
             ratio * 100.0,
             bar(rating)
         ),
-        caution: (verdict != Verdict::Fine).then(|| OVER_PRESSURE_CAUTION.to_owned()),
+        caution: hazards::over_pressure_caution(verdict, hazards::LineContents::GasAndLiquid),
     }
 }
 
@@ -711,96 +675,29 @@ fn expansion_check(profile: &Profile) -> Check {
 
 fn boiling_check(solvent: Solvent, t: Temperature, p_out: Pressure) -> Result<Check, SegmentedFlowError> {
     let b = solvent.boiling_check(t, p_out)?;
-    let p_sat = b.value.vapour_pressure.pascals();
-    let (verdict, what) = if b.value.boils {
-        (Verdict::Problem, "boils: the liquid flashes and the gas slugs fill with vapour")
-    } else if p_out.pascals() < BOILING_MARGIN * p_sat {
-        (Verdict::Caution, "stays liquid with less than a 1.5 × margin (common practice, no source); vapour takes a large share of each gas slug")
-    } else {
-        (Verdict::Fine, "stays liquid")
-    };
-    Ok(Check {
-        key: "boiling",
-        topic: "Solvent boiling",
-        verdict,
-        reason: format!(
-            "{} at {} °C has a vapour pressure of {} bar(a) (Antoine fit, fluids module) against {} bar(a) at the regulator: it {what}. The gas partial pressure in the slugs is the total minus the vapour pressure.",
-            fluids::selection::capitalised(solvent.name()),
-            format_significant(t.celsius(), 3),
-            bar(p_sat),
-            bar(p_out.pascals())
-        ),
-        caution: (verdict == Verdict::Problem).then(|| {
-            format!(
-                "Raise the back-pressure to at least {} bar(a), or lower the temperature. A leak of liquid held above its boiling point flashes into a vapour cloud; follow local codes and institutional rules.",
-                bar(BOILING_MARGIN * p_sat)
-            )
-        }),
-    })
+    let mut check = hazards::boiling_check(
+        &format!("{} at {} °C", fluids::selection::capitalised(solvent.name()), format_significant(t.celsius(), 3)),
+        "Antoine fit",
+        b.value.vapour_pressure,
+        p_out,
+        "at the regulator",
+    );
+    check.reason.push_str(" The gas partial pressure in the slugs is the total minus the vapour pressure.");
+    Ok(check)
 }
 
 fn gas_hazard_check(input: &SegmentedFlowInput) -> Check {
-    let (_, y) = input.reactive();
-    let flammable_solvent = !matches!(input.liquid, LiquidSpec::Solvent { solvent: Solvent::Water, .. });
-    let key = "gas_hazard";
-    let topic = "Gas hazards";
-    let local = " Follow local codes and institutional rules for this gas.";
-    match input.gas {
-        g if g.is_oxidising() && flammable_solvent => {
-            let (loc, loc_source) = match input.limiting_oxygen {
-                Some(v) => (v, "as entered for this solvent".to_owned()),
-                None => (LIMITING_OXYGEN, "taken for common solvents with N₂ (from memory: NFPA 69 / Zabetakis; enter your solvent's value)".to_owned()),
-            };
-            let (verdict, level) = if y > loc {
-                (Verdict::Caution, "above the limiting oxygen concentration itself: the vapour space downstream can burn")
-            } else if y > LOC_MARGIN * loc {
-                (Verdict::Caution, "above 60 % of the limiting oxygen concentration")
-            } else {
-                (Verdict::Fine, "within 60 % of the limiting oxygen concentration")
-            };
-            Check {
-                key,
-                topic,
-                verdict,
-                reason: format!(
-                    "The feed carries {:.1} % O₂ with a flammable (or unknown) liquid: {level} of {} vol % {loc_source}; 60 % margin without O₂ monitoring (NFPA 69, from memory). The LOC falls with temperature and pressure (Osterberg et al., Org. Process Res. Dev. 2015).",
-                    y * 100.0,
-                    format_significant(loc * 100.0, 3)
-                ),
-                caution: Some(format!(
-                    "Gas slugs, the regulator outlet, separator and receiver hold solvent vapour and oxygen: keep every vapour space below the LOC with margin — prefer diluted O₂ (e.g. 8–9 % in N₂) over air or pure O₂, dilute the outlet with N₂, and use oxygen-compatible, oxygen-clean parts with pure O₂. Dichloromethane, non-flammable in air, burns in O₂-enriched atmospheres.{local}"
-                )),
-            }
-        }
-        g if g.is_oxidising() => Check {
-            key,
-            topic,
-            verdict: Verdict::Fine,
-            reason: "Oxygen with water: no flammable vapour from the liquid itself.".to_owned(),
-            caution: Some(format!("Flammable reagents or products can still make the vapour space flammable; with pure O₂ use oxygen-compatible, oxygen-clean parts and open valves slowly (adiabatic compression).{local}")),
-        },
-        Gas::Hydrogen => Check {
-            key,
-            topic,
-            verdict: Verdict::Caution,
-            reason: "Hydrogen is flammable from 4 to 75 vol % in air with a very low ignition energy, leaks through fittings and permeates fluoropolymers (from memory).".to_owned(),
-            caution: Some(format!("Vent the separator and regulator outlet to extraction, use H₂ detection, purge with inert gas before and after, leak-test with inert gas, exclude ignition sources, and handle spent precious-metal catalysts wet.{local}")),
-        },
-        Gas::CarbonMonoxide => Check {
-            key,
-            topic,
-            verdict: Verdict::Caution,
-            reason: "Carbon monoxide is acutely toxic and odourless, and flammable from 12.5 to 74 vol % in air (from memory).".to_owned(),
-            caution: Some(format!("Work in a ventilated enclosure with a CO detector, closed handling and an exhaust for the separator and regulator outlet; never vent to the room.{local}")),
-        },
-        _ => Check {
-            key,
-            topic,
-            verdict: Verdict::Fine,
-            reason: format!("{} is neither flammable nor an oxidiser; in a closed or poorly ventilated space it displaces oxygen (asphyxiant).", input.gas.name()),
-            caution: None,
-        },
-    }
+    let solvents = match input.liquid {
+        LiquidSpec::Solvent { solvent, .. } => vec![solvent],
+        LiquidSpec::Custom { .. } => Vec::new(),
+    };
+    hazards::gas_check(&hazards::GasFeed {
+        gas: input.gas,
+        mole_fraction: input.gas_mole_fraction,
+        solvents: &solvents,
+        temperature: input.temperature,
+        entered_loc: input.limiting_oxygen,
+    })
 }
 
 fn mass_transfer_check(t95: f64, tau: f64, share: f64, equivalents: f64) -> Check {

@@ -64,9 +64,6 @@ rises to the pump limit or until the weakest part fails, spraying hot, possibly 
 Set a pump pressure limit or relief, watch the pressure trend, keep a flush and bypass ready, \
 and follow local codes and institutional rules.";
 
-const OVER_PRESSURE_CAUTION: &str = "Over-pressure can burst tubing or blow a fitting apart and spray hot, possibly toxic liquid. \
-Stay below the lowest-rated component (tubing rating falls with temperature), use a pump \
-pressure limit or relief, shield pressurised parts, and follow local codes and institutional rules.";
 
 fn um(d: f64) -> String {
     format_significant(d * 1e6, 3)
@@ -443,7 +440,7 @@ fn pressure_check(inlet: f64, total: &Figure, back: f64, rating: f64) -> Check {
             ratio * 100.0,
             bar(rating)
         ),
-        caution: (verdict != Verdict::Fine).then(|| OVER_PRESSURE_CAUTION.to_owned()),
+        caution: crate::physics::hazards::over_pressure_caution(verdict, crate::physics::hazards::LineContents::Liquid),
     }
 }
 

@@ -171,15 +171,12 @@ impl TubularInput {
 }
 
 
-const OVER_PRESSURE_CAUTION: &str = "Over-pressure can burst tubing or blow a fitting apart and spray hot, possibly toxic \
-liquid. Stay below the lowest-rated component (tubing rating falls with temperature), use a pump \
-pressure limit or relief, shield pressurised parts, and follow local codes and institutional rules.";
 
 fn pressure_check(inlet: PressureDifference, dp: PressureDifference, rating: PressureDifference) -> Check {
     let bar = |p: PressureDifference| format_significant(p.bar(), 3);
     let ratio = inlet.si() / rating.si();
     let verdict = budget_verdict(ratio, ratio);
-    let caution = (verdict != Verdict::Fine).then(|| OVER_PRESSURE_CAUTION.to_owned());
+    let caution = crate::physics::hazards::over_pressure_caution(verdict, crate::physics::hazards::LineContents::Liquid);
     let reason = format!(
         "Inlet pressure {} bar(g) (back-pressure + {} bar line drop) is {:.0} % of the {} bar(g) rating{}.",
         bar(inlet),
