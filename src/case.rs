@@ -104,6 +104,7 @@ const PACKED_BED_LAYOUT: &[FormItem] = &[
     Field(bed::VOIDAGE),
     Heading("Flow and liquid"),
     Field(bed::FLOW),
+    Field(crate::physics::practical::PUMP_MAX_FLOW),
     Choice(bed::FLOW_DIRECTION),
     Choice(bed::CONFINEMENT),
     Choice(fluids::selection::LIQUID),
@@ -137,6 +138,7 @@ const SLURRY_LAYOUT: &[FormItem] = &[
     Choice(slurry::OPERATION),
     Field(slurry::PASSES),
     Field(slurry::FLOW),
+    Field(crate::physics::practical::PUMP_MAX_FLOW),
     Choice(fluids::selection::LIQUID),
     Choice(fluids::selection::MIXTURE_FIRST),
     Choice(fluids::selection::MIXTURE_SECOND),
@@ -466,7 +468,7 @@ impl FieldSource for EntrySource<'_> {
             None => Err(InputError {
                 field: spec.key,
                 label: spec.label,
-                given: "(missing)".to_owned(),
+                given: crate::physics::form::MISSING.to_owned(),
                 problem: "this field is required".to_owned(),
             }),
         }
@@ -484,7 +486,7 @@ impl FieldSource for EntrySource<'_> {
             None => Err(InputError {
                 field: spec.key,
                 label: spec.label,
-                given: "(missing)".to_owned(),
+                given: crate::physics::form::MISSING.to_owned(),
                 problem: "this field is required".to_owned(),
             }),
         }

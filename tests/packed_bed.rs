@@ -679,10 +679,15 @@ fn a_size_distribution_uses_d10_and_says_so() {
     assert_eq!(dp(&a), dp(&b));
     assert!(b.check("pressure_budget").unwrap().reason.contains("d10 = 60.0 µm"));
     assert!(!a.check("pressure_budget").unwrap().reason.contains("d10"));
-    // d10 must be the smallest.
+    // d10 must be the smallest: the error sits at the entry that breaks the order, naming the
+    // one it must exceed; d90 is not faulted.
     spread.quantities.insert("d10", (120.0, "µm"));
     let errors = PackedBedInput::from_source(&spread).unwrap_err();
-    assert!(errors.iter().any(|e| e.field == "d50" && e.problem.contains("d10 < d50 < d90")), "{errors:?}");
+    assert_eq!(errors.len(), 1, "{errors:?}");
+    assert_eq!((errors[0].field, errors[0].problem.as_str()), ("d50", "must be above d10 (120.0 µm)"));
+    spread.quantities.insert("d90", (90.0, "µm"));
+    let errors = PackedBedInput::from_source(&spread).unwrap_err();
+    assert!(errors.iter().any(|e| e.field == "d90" && e.problem == "must be above d50 (100.0 µm)"), "{errors:?}");
 }
 
 #[test]

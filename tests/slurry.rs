@@ -10,7 +10,7 @@ use std::collections::HashMap;
 use common::Case;
 use clearbore::physics::fluids::selection::LiquidSelection;
 use clearbore::physics::pipe_flow::hagen_poiseuille;
-use clearbore::physics::report::{Report, Verdict};
+use clearbore::physics::report::{AdviceKind, Report, Verdict};
 use clearbore::physics::settling::Particle;
 use clearbore::physics::solids::SolidSelection;
 use clearbore::physics::slurry::series::{SeriesInput, settling_series};
@@ -155,6 +155,7 @@ fn line(elements: Vec<LineElement>) -> SlurryInput {
         rating: PressureDifference::from_bar(40.0),
         passes: 1,
         tubing: None,
+        pump_max_flow: VolumetricFlow::from_ml_per_min(10.0),
     }
 }
 
@@ -171,7 +172,9 @@ fn verdict(r: &Report, key: &str) -> Verdict {
 }
 
 #[test]
-fn horizontal_tubing_settles_and_the_fix_is_exact() {
+fn horizontal_tubing_settles_and_no_practical_flow_size_or_bore_fixes_it() {
+    // 80 µm d90 falls across 1 mm in about 0.1 s but stays 94 s in 2 m of tubing: no flow a
+    // 10 mL/min pump gives, no millable size and no practical bore brings deposition below 1 %.
     let input = line(vec![tube(ElementKind::Tubing, 1.0, 2.0, Orientation::Horizontal)]);
     let r = run(input.clone());
     assert_eq!(verdict(&r, "element_1_settling"), Verdict::Problem);
@@ -180,16 +183,64 @@ fn horizontal_tubing_settles_and_the_fix_is_exact() {
     // Z = τ/t_settle, both reported.
     let z = value(&r, "element_1_settling_number");
     assert!(rel(z, value(&r, "element_1_residence_time") / value(&r, "element_1_time_to_settle")) < 1e-12);
-    // The minimum flow brings the deposited fraction to the 1 % threshold.
+    assert!(r.figure("element_1_minimum_flow").is_none() && r.figure("element_1_maximum_particle_size").is_none());
+    let said: Vec<(AdviceKind, &str)> = r.advice_for("element_1_settling").map(|a| (a.kind, a.text.as_str())).collect();
+    assert!(said.iter().all(|(k, _)| *k != AdviceKind::Remedy), "{said:?}");
+    assert!(said.iter().any(|(k, t)| *k == AdviceKind::NoneExists && t.starts_with("No flow") && t.contains("the pump's largest flow, 10.0 mL/min")), "{said:?}");
+    assert!(said.iter().any(|(k, t)| *k == AdviceKind::NoneExists && t.starts_with("No millable size")), "{said:?}");
+    // What works instead: vertical up-flow at a flow the pump gives (5 × v_h ≈ 12 mm/s in 1 mm).
+    assert!(said.iter().any(|(k, t)| *k == AdviceKind::Alternative && t.starts_with("Route element 1 (tubing) vertically")), "{said:?}");
+    assert!(said.iter().any(|(k, t)| *k == AdviceKind::Alternative && t.starts_with("Segment the slurry")), "{said:?}");
+    assert_eq!(verdict(&r, "line_verdict"), Verdict::Problem);
+}
+
+#[test]
+fn a_short_horizontal_fitting_gets_exact_practical_fixes() {
+    // A 5/10/20 µm solid through a 0.5 mm × 5 mm fitting at 1 mL/min deposits about 6 %: a fix
+    // by flow and by size exists within the 10 mL/min pump, the 5 µm milling floor and laminar
+    // flow, and each brings deposition to 1 %.
+    let mut input = line(vec![tube(ElementKind::Fitting, 0.5, 0.005, Orientation::Horizontal)]);
+    input.size = ParticleSize::Distribution { d10: Length::from_m(5e-6), d50: Length::from_m(10e-6), d90: Length::from_m(20e-6) };
+    let r = run(input.clone());
+    assert_ne!(verdict(&r, "element_1_settling"), Verdict::Fine);
     let q_min = value(&r, "element_1_minimum_flow");
-    assert!(q_min > input.flow.si());
+    assert!(q_min > input.flow.si() && q_min <= input.pump_max_flow.si());
     let fixed = run(SlurryInput { flow: VolumetricFlow::from_si(q_min), ..input.clone() });
     assert!((value(&fixed, "element_1_deposited_fraction") - 0.01).abs() < 1e-8);
-    // The largest tolerable size gives 1 % for a single size at the entered flow.
+    // Laminar at that flow (Re = ρ U D / μ_s ≤ 2000).
+    let re = 776.0 * value(&fixed, "element_1_mean_velocity") * 0.5e-3 / value(&fixed, "suspension_viscosity");
+    assert!(re <= 2000.0, "{re}");
+    // The largest tolerable size gives 1 % for a single size at the entered flow, and is millable.
     let d_max = value(&r, "element_1_maximum_particle_size");
+    assert!(d_max >= 5e-6);
     let single = run(SlurryInput { size: ParticleSize::Single { diameter: Length::from_si(d_max) }, ..input });
     assert!((value(&single, "element_1_deposited_fraction") - 0.01).abs() < 1e-8);
-    assert_eq!(verdict(&r, "line_verdict"), Verdict::Problem);
+    let remedies: Vec<&str> = r.advice_for("element_1_settling").filter(|a| a.kind == AdviceKind::Remedy).map(|a| a.text.as_str()).collect();
+    assert!(remedies.iter().any(|t| t.starts_with("Raise the flow through element 1 (fitting) to at least")), "{remedies:?}");
+    assert!(remedies.iter().any(|t| t.starts_with("Mill or sieve the solid to a d90 of")), "{remedies:?}");
+}
+
+#[test]
+fn a_remedy_flow_never_exceeds_the_pump_and_advice_is_said_once() {
+    // Raising the pump's largest flow turns "no flow" into a flow remedy only when the flow it
+    // needs lies below both the pump and the laminar limit.
+    let mut input = line(vec![
+        tube(ElementKind::Fitting, 0.5, 0.005, Orientation::Horizontal),
+        tube(ElementKind::Fitting, 0.5, 0.005, Orientation::Horizontal),
+    ]);
+    input.size = ParticleSize::Distribution { d10: Length::from_m(5e-6), d50: Length::from_m(10e-6), d90: Length::from_m(20e-6) };
+    input.pump_max_flow = VolumetricFlow::from_ml_per_min(1.2);
+    let r = run(input.clone());
+    for a in &r.advice {
+        if let Some(q) = a.text.strip_prefix("Raise the flow through element 1 (fitting) to at least ") {
+            let ml: f64 = q.split(' ').next().unwrap().parse().unwrap();
+            assert!(ml <= 1.2, "{}", a.text);
+        }
+    }
+    // The two identical fittings share the alternatives: each is said once, naming both checks.
+    let segmentation: Vec<_> = r.advice.iter().filter(|a| a.text.starts_with("Segment the slurry")).collect();
+    assert_eq!(segmentation.len(), 1);
+    assert_eq!(segmentation[0].checks, vec!["element_1_settling", "element_2_settling"]);
 }
 
 #[test]
@@ -213,6 +264,12 @@ fn slow_up_flow_accumulates_and_names_a_minimum_flow() {
     let r = run(input.clone());
     assert_eq!(verdict(&r, "element_1_settling"), Verdict::Problem);
     assert!(r.figure("element_1_particle_residence_time").is_none());
+    // 5 × v_h for 300 µm in 4 mm takes about 260 mL/min, more than a 10 mL/min pump gives; a
+    // larger pump has it.
+    assert!(r.figure("element_1_minimum_flow").is_none());
+    assert!(r.advice_for("element_1_settling").any(|a| a.kind == AdviceKind::NoneExists && a.text.starts_with("No flow carries")));
+    input.pump_max_flow = VolumetricFlow::from_ml_per_min(500.0);
+    let r = run(input.clone());
     let q_min = value(&r, "element_1_minimum_flow");
     let fixed = run(SlurryInput { flow: VolumetricFlow::from_si(q_min * 1.000_001), ..input });
     assert_eq!(verdict(&fixed, "element_1_settling"), Verdict::Fine);
@@ -487,4 +544,84 @@ fn a_recirculation_loop_adds_up_the_deposition_of_every_pass() {
     assert!(looped.check("element_1_settling").unwrap().reason.contains("over the 4 passes"));
     let zero = SlurryInput { passes: 0, ..line(vec![tube]) }.validated().unwrap_err();
     assert!(zero.iter().any(|e| e.field == "passes"), "{zero:?}");
+}
+
+/// The slurry demo with the liquid, solid, sizes, flow and line replaced, as a chemist would
+/// enter them (case-file entries).
+fn chemist_case(solid: &str, liquid: &str, celsius: f64, sizes_um: [f64; 3], ml_min: f64, elements: serde_json::Value) -> Report {
+    let mut c: serde_json::Value = serde_json::from_str(clearbore::case::Calculator::SlurryLine.demo_json()).unwrap();
+    let i = &mut c["inputs"];
+    i["solid"] = serde_json::json!(solid);
+    i["liquid"] = serde_json::json!(liquid);
+    i["temperature"] = serde_json::json!({"value": celsius, "unit": "°C"});
+    i["size_mode"] = serde_json::json!("distribution");
+    for (k, v) in ["d10", "d50", "d90"].iter().zip(sizes_um) {
+        i[*k] = serde_json::json!({"value": v, "unit": "µm"});
+    }
+    i["sphericity"] = serde_json::json!({"value": 0.7, "unit": ""});
+    i["loading_basis"] = serde_json::json!("mass");
+    i["loading"] = serde_json::json!({"value": 5, "unit": "%"});
+    i["flow"] = serde_json::json!({"value": ml_min, "unit": "mL/min"});
+    i["pump_max_flow"] = serde_json::json!({"value": 10, "unit": "mL/min"});
+    i["tubing_material"] = serde_json::json!("none");
+    c["elements"] = elements;
+    clearbore::case::CaseFile::from_json(&c.to_string()).unwrap().evaluate().unwrap()
+}
+
+/// Every flow a remedy names lies within the 10 mL/min pump, every particle size at or above the
+/// 5 µm milling floor, and a failing element is never left without a statement of what works.
+fn assert_practical(r: &Report) {
+    for f in &r.figures {
+        if f.key.ends_with("_minimum_flow") {
+            assert!(f.value.get() <= 10e-6 / 60.0 * (1.0 + 1e-12), "{}: {}", f.key, f.value.get() * 6e7);
+        }
+        if f.key.ends_with("_maximum_particle_size") {
+            assert!(f.value.get() >= 5e-6, "{}: {}", f.key, f.value.get());
+        }
+    }
+    for c in r.checks.iter().filter(|c| c.key.ends_with("_settling") && c.verdict != Verdict::Fine) {
+        let advice: Vec<_> = r.advice_for(c.key).collect();
+        assert!(advice.iter().any(|a| a.kind != AdviceKind::Alternative), "{}: no remedy and no 'none exists'", c.key);
+        assert!(advice.iter().any(|a| a.kind == AdviceKind::Alternative), "{}: nothing that works", c.key);
+    }
+    for a in &r.advice {
+        assert!(!a.text.contains(" 0.1") || !a.text.contains("µm"), "sub-micron advice: {}", a.text);
+        assert!(a.text.ends_with('.') && a.text.chars().next().is_some_and(char::is_uppercase), "{}", a.text);
+    }
+}
+
+#[test]
+fn caesium_carbonate_in_hot_dmf_gets_no_impossible_flow_or_size() {
+    // 5 wt % Cs₂CO₃, d10/d50/d90 = 10/30/60 µm, sphericity 0.7, DMF at 80 °C, 1 mL/min through
+    // 1.59 mm PFA: once offered 51 100 mL/min (1 m) and 511 000 mL/min (10 m coil) and 0.169 µm
+    // particles. Now: no flow within the pump, no millable size; up-flow and segmentation work.
+    for (kind, metres) in [("tubing", 1.0), ("coil", 10.0)] {
+        let r = chemist_case("cs2co3", "dmf", 80.0, [10.0, 30.0, 60.0], 1.0, serde_json::json!([
+            {"kind": kind, "orientation": "horizontal", "inner_diameter": {"value": 1.59, "unit": "mm"}, "length": {"value": metres, "unit": "m"}}
+        ]));
+        assert_eq!(r.check("element_1_settling").unwrap().verdict, Verdict::Problem, "{kind}");
+        assert_practical(&r);
+        let said: Vec<&str> = r.advice_for("element_1_settling").map(|a| a.text.as_str()).collect();
+        assert!(said.iter().any(|t| t.starts_with("No flow keeps element 1")), "{said:?}");
+        assert!(said.iter().any(|t| t.starts_with("No millable size helps element 1")), "{said:?}");
+        if kind == "tubing" {
+            // 5 × v_h for 60 µm Cs₂CO₃ in 1.59 mm is a few mL/min: within the pump.
+            assert!(said.iter().any(|t| t.starts_with("Route element 1 (tubing) vertically with the flow upwards at")), "{said:?}");
+        } else {
+            assert!(said.iter().any(|t| t.contains("treated as a straight") || t.starts_with("Segment the slurry")), "{said:?}");
+            assert!(r.check("element_1_settling").unwrap().reason.contains("treated as a straight horizontal tube"));
+        }
+    }
+}
+
+#[test]
+fn fine_potassium_carbonate_in_a_narrow_bore_gets_practical_advice() {
+    // K₂CO₃ 3/8/20 µm in 0.76 mm at 5 mL/min: once offered 4580 mL/min and 0.439 µm particles.
+    let r = chemist_case("k2co3", "dmf", 25.0, [3.0, 8.0, 20.0], 5.0, serde_json::json!([
+        {"kind": "tubing", "orientation": "horizontal", "inner_diameter": {"value": 0.76, "unit": "mm"}, "length": {"value": 2, "unit": "m"}}
+    ]));
+    assert_practical(&r);
+    if r.check("element_1_settling").unwrap().verdict != Verdict::Fine {
+        assert!(r.advice_for("element_1_settling").any(|a| a.kind == AdviceKind::NoneExists || a.kind == AdviceKind::Remedy));
+    }
 }

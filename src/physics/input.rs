@@ -31,6 +31,21 @@ impl Allowed {
     pub const COUNT: Allowed =
         Allowed { low: 1.0, low_inclusive: true, high: None, high_inclusive: false, whole: true };
 
+    /// Strictly positive, up to and including `high` (SI).
+    pub const fn positive_up_to(high: f64) -> Allowed {
+        Allowed { low: 0.0, low_inclusive: false, high: Some(high), high_inclusive: true, whole: false }
+    }
+
+    /// Zero or more, up to and including `high` (SI).
+    pub const fn non_negative_up_to(high: f64) -> Allowed {
+        Allowed { low: 0.0, low_inclusive: true, high: Some(high), high_inclusive: true, whole: false }
+    }
+
+    /// From `low` to `high`, both included (SI).
+    pub const fn between(low: f64, high: f64) -> Allowed {
+        Allowed { low, low_inclusive: true, high: Some(high), high_inclusive: true, whole: false }
+    }
+
     fn admits(&self, v: f64) -> bool {
         let above = if self.low_inclusive { v >= self.low } else { v > self.low };
         let below = match self.high {
@@ -62,6 +77,62 @@ impl Allowed {
         }
         text
     }
+}
+
+/// The largest (and for temperature the lowest) entries a laboratory flow setup can have, SI.
+/// They are sanity bounds, far beyond ordinary use, so that a slip of a finger (1e30, a unit
+/// mixed up by 10⁶) gets a message at its field instead of a result: common practice, no source.
+pub mod lab {
+    use super::Allowed;
+
+    /// Liquid flow: 1 L/min, beyond preparative pumps.
+    pub const LIQUID_FLOW: Allowed = Allowed::positive_up_to(1e-3 / 60.0);
+    /// Gas flow at a reference state: 100 L/min.
+    pub const GAS_FLOW: Allowed = Allowed::positive_up_to(0.1 / 60.0);
+    /// Bore of a tube, cartridge, fitting or frit: 100 mm.
+    pub const BORE: Allowed = Allowed::positive_up_to(0.1);
+    /// Length of tubing or a coil: 1 km.
+    pub const TUBE_LENGTH: Allowed = Allowed::positive_up_to(1000.0);
+    /// Length of a packed bed: 2 m.
+    pub const BED_LENGTH: Allowed = Allowed::positive_up_to(2.0);
+    /// Particle size: 20 mm.
+    pub const PARTICLE_SIZE: Allowed = Allowed::positive_up_to(0.02);
+    /// Gauge pressure, rating or pressure limit: 1000 bar.
+    pub const PRESSURE: Allowed = Allowed::positive_up_to(1e8);
+    /// Back-pressure (may be zero): 1000 bar.
+    pub const BACK_PRESSURE: Allowed = Allowed::non_negative_up_to(1e8);
+    /// Absolute pressure of a reference state: 0.1–1000 bar.
+    pub const ABSOLUTE_PRESSURE: Allowed = Allowed::between(1e4, 1e8);
+    /// Working temperature: −100 to 350 °C.
+    pub const TEMPERATURE: Allowed = Allowed::between(173.15, 623.15);
+    /// Reference temperature of a gas-flow reading: −50 to 100 °C.
+    pub const REFERENCE_TEMPERATURE: Allowed = Allowed::between(223.15, 373.15);
+    /// Amount concentration: 30 mol/L (above any neat liquid's own).
+    pub const CONCENTRATION: Allowed = Allowed::positive_up_to(3e4);
+    /// Density of a liquid: 300–3000 kg/m³.
+    pub const LIQUID_DENSITY: Allowed = Allowed::between(300.0, 3000.0);
+    /// Density of a solid: up to 25 000 kg/m³ (osmium is 22 600).
+    pub const SOLID_DENSITY: Allowed = Allowed::positive_up_to(25_000.0);
+    /// Dynamic viscosity of a liquid: 10 Pa·s (ten times glycerol at 20 °C).
+    pub const VISCOSITY: Allowed = Allowed::positive_up_to(10.0);
+    /// Surface tension: 1 N/m (above mercury's 0.49).
+    pub const SURFACE_TENSION: Allowed = Allowed::positive_up_to(1.0);
+    /// Molar mass: 10⁶ g/mol.
+    pub const MOLAR_MASS: Allowed = Allowed::positive_up_to(1000.0);
+    /// Mass of solid in a cartridge: 10 kg.
+    pub const MASS: Allowed = Allowed::positive_up_to(10.0);
+    /// A target time: 100 h.
+    pub const DURATION: Allowed = Allowed::positive_up_to(3.6e5);
+    /// Volume of a reservoir: 100 L.
+    pub const RESERVOIR: Allowed = Allowed::positive_up_to(0.1);
+    /// Loading of a supported reagent: 50 mmol/g.
+    pub const LOADING: Allowed = Allowed::positive_up_to(50.0);
+    /// Moles of one species per mole of another: 1000.
+    pub const RATIO: Allowed = Allowed::positive_up_to(1000.0);
+    /// Diffusivity in a liquid: 10⁻⁶ m²/s (a gas's own is about 10⁻⁵).
+    pub const DIFFUSIVITY: Allowed = Allowed::positive_up_to(1e-6);
+    /// Passes round a loop: 10 000.
+    pub const PASSES: Allowed = Allowed { low: 1.0, low_inclusive: true, high: Some(1e4), high_inclusive: true, whole: true };
 }
 
 /// An input field of a calculator.
@@ -145,3 +216,19 @@ impl FieldSpec {
         }
     }
 }
+
+/// Entries that must rise in the order given (d10 < d50 < d90): an error at each entry that is
+/// not above the one before it, naming that one, in `unit` (already-validated SI values).
+pub fn increasing(entries: &[(&FieldSpec, f64)], unit: Unit) -> Vec<InputError> {
+    entries
+        .windows(2)
+        .filter(|w| w[1].1 <= w[0].1)
+        .map(|w| {
+            let (before, low) = w[0];
+            let (spec, value) = w[1];
+            let show = |si: f64| format!("{} {}", format_significant(unit.from_si(si), 4), unit.symbol).trim_end().to_owned();
+            spec.error(show(value), format!("must be above {} ({})", before.label, show(low)))
+        })
+        .collect()
+}
+

@@ -12,6 +12,7 @@ pub mod ode;
 pub mod packed_bed;
 pub mod pipe_flow;
 pub mod plot;
+pub mod practical;
 pub mod report;
 pub mod segmented_flow;
 pub mod settling;

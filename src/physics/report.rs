@@ -246,6 +246,32 @@ pub struct Check {
     pub caution: Option<String>,
 }
 
+/// What would make failing checks pass, said once with every check it serves: a practical change
+/// (inside its formula's range and what lab equipment can do), or, where none exists, that fact
+/// and what works instead.
+#[derive(Debug, Clone, PartialEq, Eq, Serialize)]
+pub struct Advice {
+    /// Keys of the checks it serves, in the order they were added.
+    pub checks: Vec<&'static str>,
+    /// Whether this is a practical change of an entry, or a statement that none exists (with
+    /// what works instead), or an alternative way of running.
+    pub kind: AdviceKind,
+    /// What to do, with its numbers and conditions, as one or more sentences.
+    pub text: String,
+}
+
+/// The three kinds of advice.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, PartialOrd, Ord, Serialize)]
+#[serde(rename_all = "snake_case")]
+pub enum AdviceKind {
+    /// A change of an entry that fixes the check within practical limits.
+    Remedy,
+    /// No practical value of an entry fixes the check; the text says so.
+    NoneExists,
+    /// Another way of running that works (routing, segmentation, sonication, …), with its condition.
+    Alternative,
+}
+
 /// Everything a calculator returns.
 #[derive(Debug, Clone, PartialEq, Serialize)]
 pub struct Report {
@@ -256,6 +282,31 @@ pub struct Report {
     /// Charts of how the answer changes (flow, size, position along the coil).
     #[serde(skip_serializing_if = "Vec::is_empty")]
     pub plots: Vec<super::plot::Plot>,
+    /// What would fix the failing checks, each said once.
+    #[serde(skip_serializing_if = "Vec::is_empty")]
+    pub advice: Vec<Advice>,
+}
+
+/// Collects advice, merging the same text offered for several checks into one entry.
+#[derive(Debug, Clone, Default, PartialEq)]
+pub struct AdviceList(Vec<Advice>);
+
+impl AdviceList {
+    /// Adds `text` for `check`; the same text already given for another check gains this one.
+    pub fn add(&mut self, check: &'static str, kind: AdviceKind, text: impl Into<String>) {
+        let text = text.into();
+        match self.0.iter_mut().find(|a| a.text == text && a.kind == kind) {
+            Some(a) if !a.checks.contains(&check) => a.checks.push(check),
+            Some(_) => {}
+            None => self.0.push(Advice { checks: vec![check], kind, text }),
+        }
+    }
+
+    /// The advice, remedies first, then statements that none exists, then alternatives.
+    pub fn into_vec(mut self) -> Vec<Advice> {
+        self.0.sort_by_key(|a| a.kind);
+        self.0
+    }
 }
 
 impl Report {
@@ -272,6 +323,11 @@ impl Report {
     /// The worst verdict over all checks (`Fine` when there are none).
     pub fn overall(&self) -> Verdict {
         self.checks.iter().map(|c| c.verdict).max().unwrap_or(Verdict::Fine)
+    }
+
+    /// The advice that serves the check with this key.
+    pub fn advice_for(&self, key: &str) -> impl Iterator<Item = &Advice> {
+        self.advice.iter().filter(move |a| a.checks.contains(&key))
     }
 
     /// Every range warning of every estimate, recommended estimates first.

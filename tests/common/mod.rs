@@ -18,14 +18,17 @@ impl FieldSource for Case {
         let (v, u) = self.quantities.get(spec.key).copied().ok_or_else(|| InputError {
             field: spec.key,
             label: spec.label,
-            given: "(missing)".to_owned(),
+            given: clearbore::physics::form::MISSING.to_owned(),
             problem: "required".to_owned(),
         })?;
         spec.accept(v, spec.unit(u)?)
     }
 
     fn choice(&self, spec: &ChoiceSpec) -> Result<usize, InputError> {
-        spec.index_of(self.choices.get(spec.key).copied().unwrap_or("(missing)"))
+        match self.choices.get(spec.key) {
+            Some(option) => spec.index_of(option),
+            None => Err(InputError { field: spec.key, label: spec.label, given: clearbore::physics::form::MISSING.to_owned(), problem: "required".to_owned() }),
+        }
     }
 }
 

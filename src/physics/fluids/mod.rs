@@ -12,7 +12,7 @@ pub use solvents::{Property, Solvent};
 
 use serde::Serialize;
 
-use crate::physics::input::{Allowed, FieldSpec, InputError};
+use crate::physics::input::{Allowed, FieldSpec, InputError, lab};
 use crate::physics::report::RangeWarning;
 use crate::physics::units::{Density, Dimension, DynamicViscosity, Pressure, SurfaceTension, Unit};
 
@@ -79,18 +79,19 @@ impl BoilingCheck {
     }
 }
 
-const fn positive_field(key: &'static str, label: &'static str, dimension: Dimension, help: &'static str) -> FieldSpec {
-    FieldSpec { key, label, dimension, allowed: Allowed::POSITIVE, help }
+const fn positive_field(key: &'static str, label: &'static str, dimension: Dimension, allowed: Allowed, help: &'static str) -> FieldSpec {
+    FieldSpec { key, label, dimension, allowed, help }
 }
 
 /// Field of a custom liquid's density.
 pub const CUSTOM_DENSITY: FieldSpec =
-    positive_field("liquid_density", "Liquid density", Dimension::Density, "density at the working temperature");
+    positive_field("liquid_density", "Liquid density", Dimension::Density, lab::LIQUID_DENSITY, "density at the working temperature");
 /// Field of a custom liquid's viscosity.
 pub const CUSTOM_VISCOSITY: FieldSpec = positive_field(
     "liquid_viscosity",
     "Liquid viscosity",
     Dimension::DynamicViscosity,
+    lab::VISCOSITY,
     "dynamic viscosity at the working temperature",
 );
 /// Field of a custom liquid's surface tension.
@@ -98,6 +99,7 @@ pub const CUSTOM_SURFACE_TENSION: FieldSpec = positive_field(
     "liquid_surface_tension",
     "Liquid surface tension",
     Dimension::SurfaceTension,
+    lab::SURFACE_TENSION,
     "surface tension against air at the working temperature",
 );
 /// Field of a custom liquid's vapour pressure (optional; zero allowed for involatile liquids).
@@ -105,7 +107,7 @@ pub const CUSTOM_VAPOUR_PRESSURE: FieldSpec = FieldSpec {
     key: "liquid_vapour_pressure",
     label: "Liquid vapour pressure",
     dimension: Dimension::Pressure,
-    allowed: Allowed { low: 0.0, low_inclusive: true, high: None, high_inclusive: false, whole: false },
+    allowed: Allowed::non_negative_up_to(1e8),
     help: "vapour pressure at the working temperature; leave empty if unknown",
 };
 

@@ -6,7 +6,7 @@ use serde::Serialize;
 use super::mixtures::{DENSITY_RULE, FIRST_VOLUME_FRACTION, SURFACE_TENSION_RULE, VAPOUR_PRESSURE_RULE, VISCOSITY_RULE};
 use super::{BinaryMixture, PropertyError, Property, Solvent};
 use crate::physics::form::{ChoiceSpec, Collector, FieldSource};
-use crate::physics::input::{Allowed, FieldSpec, InputError};
+use crate::physics::input::{FieldSpec, InputError};
 use crate::physics::report::{Check, Figure, ModelInfo, NumericalError, RangeWarning, Verdict};
 use crate::physics::units::{Density, Dimension, DynamicViscosity, Fraction, Pressure, Temperature, format_significant};
 
@@ -68,7 +68,7 @@ pub const TEMPERATURE: FieldSpec = FieldSpec {
     key: "temperature",
     label: "Temperature",
     dimension: Dimension::Temperature,
-    allowed: Allowed::POSITIVE,
+    allowed: crate::physics::input::lab::TEMPERATURE,
     help: "Temperature of the liquid in the line; the solvent's properties are taken at it.",
 };
 

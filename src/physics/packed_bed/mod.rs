@@ -43,17 +43,16 @@ use super::units::{
     VolumetricFlow, format_significant,
 };
 
-use super::input::field;
+use super::input::{field, lab};
 
-const NON_NEGATIVE: Allowed = Allowed { low: 0.0, low_inclusive: true, high: None, high_inclusive: false, whole: false };
 const OPEN_FRACTION: Allowed = Allowed { low: 0.0, low_inclusive: false, high: Some(1.0), high_inclusive: false, whole: false };
 
 /// Cartridge inner diameter.
-pub const TUBE_DIAMETER: FieldSpec = field("tube_diameter", "Cartridge inner diameter", Dimension::Length, Allowed::POSITIVE, "Bore of the packed section.");
+pub const TUBE_DIAMETER: FieldSpec = field("tube_diameter", "Cartridge inner diameter", Dimension::Length, lab::BORE, "Bore of the packed section.");
 /// Length of the packed bed.
-pub const BED_LENGTH: FieldSpec = field("bed_length", "Bed length", Dimension::Length, Allowed::POSITIVE, "Length of the packed section between the frits.");
+pub const BED_LENGTH: FieldSpec = field("bed_length", "Bed length", Dimension::Length, lab::BED_LENGTH, "Length of the packed section between the frits.");
 /// Volume-equivalent particle diameter.
-pub const PARTICLE_DIAMETER: FieldSpec = field("particle_diameter", "Particle diameter", Dimension::Length, Allowed::POSITIVE, "Volume-equivalent diameter of the particles as packed; fines and a wide size distribution raise the pressure drop.");
+pub const PARTICLE_DIAMETER: FieldSpec = field("particle_diameter", "Particle diameter", Dimension::Length, lab::PARTICLE_SIZE, "Volume-equivalent diameter of the particles as packed; fines and a wide size distribution raise the pressure drop.");
 /// Particle shape.
 /// Whether the bed length is entered or follows from the mass packed.
 pub const BED_LENGTH_SOURCE: ChoiceSpec = ChoiceSpec {
@@ -68,11 +67,11 @@ pub const SIZE_MODE: ChoiceSpec = ChoiceSpec {
     options: &[("single", "One size"), ("distribution", "d10 / d50 / d90 (fines set the pressure drop: d10 is used)")],
 };
 /// d10 of a size distribution.
-pub const D10: FieldSpec = field("d10", "d10", Dimension::Length, Allowed::POSITIVE, "10 % of the solid volume is in smaller particles; used for the pressure drop, lifting and sizing.");
+pub const D10: FieldSpec = field("d10", "d10", Dimension::Length, lab::PARTICLE_SIZE, "10 % of the solid volume is in smaller particles; used for the pressure drop, lifting and sizing.");
 /// d50 of a size distribution.
-pub const D50: FieldSpec = field("d50", "d50", Dimension::Length, Allowed::POSITIVE, "Median size by volume.");
+pub const D50: FieldSpec = field("d50", "d50", Dimension::Length, lab::PARTICLE_SIZE, "Median size by volume.");
 /// d90 of a size distribution.
-pub const D90: FieldSpec = field("d90", "d90", Dimension::Length, Allowed::POSITIVE, "90 % of the solid volume is in smaller particles.");
+pub const D90: FieldSpec = field("d90", "d90", Dimension::Length, lab::PARTICLE_SIZE, "90 % of the solid volume is in smaller particles.");
 /// Particle shape.
 pub const PARTICLE_SHAPE: ChoiceSpec = ChoiceSpec {
     key: "particle_shape",
@@ -90,9 +89,9 @@ pub const VOIDAGE_SOURCE: ChoiceSpec = ChoiceSpec {
 /// Interparticle voidage.
 pub const VOIDAGE: FieldSpec = field("voidage", "Bed voidage (between particles)", Dimension::Fraction, OPEN_FRACTION, "Volume fraction between the particles; random close-packed spheres about 0.36–0.40, dry-packed fine powders looser.");
 /// Particle (envelope) density.
-pub const PARTICLE_DENSITY: FieldSpec = field("particle_density", "Particle density", Dimension::Density, Allowed::POSITIVE, "Mass over envelope volume of one particle, pores included (lower than the skeletal density of porous solids).");
+pub const PARTICLE_DENSITY: FieldSpec = field("particle_density", "Particle density", Dimension::Density, lab::SOLID_DENSITY, "Mass over envelope volume of one particle, pores included (lower than the skeletal density of porous solids).");
 /// Liquid flow.
-pub const FLOW: FieldSpec = field("flow", "Flow", Dimension::VolumetricFlow, Allowed::POSITIVE, "Total liquid flow through the cartridge.");
+pub const FLOW: FieldSpec = field("flow", "Flow", Dimension::VolumetricFlow, lab::LIQUID_FLOW, "Total liquid flow through the cartridge.");
 /// Flow direction.
 pub const FLOW_DIRECTION: ChoiceSpec = ChoiceSpec {
     key: "flow_direction",
@@ -106,19 +105,19 @@ pub const CONFINEMENT: ChoiceSpec = ChoiceSpec {
     options: &[("free", "Free to move (headspace above the bed)"), ("confined", "Held between frits or spacers, no headspace")],
 };
 /// Liquid density.
-pub const DENSITY: FieldSpec = field("density", "Liquid density", Dimension::Density, Allowed::POSITIVE, "At the operating temperature.");
+pub const DENSITY: FieldSpec = field("density", "Liquid density", Dimension::Density, lab::LIQUID_DENSITY, "At the operating temperature.");
 /// Liquid viscosity.
-pub const VISCOSITY: FieldSpec = field("viscosity", "Liquid viscosity", Dimension::DynamicViscosity, Allowed::POSITIVE, "Dynamic viscosity at the operating temperature.");
+pub const VISCOSITY: FieldSpec = field("viscosity", "Liquid viscosity", Dimension::DynamicViscosity, lab::VISCOSITY, "Dynamic viscosity at the operating temperature.");
 /// Back-pressure regulator set point (gauge).
-pub const BACK_PRESSURE: FieldSpec = field("back_pressure", "Back-pressure (gauge)", Dimension::PressureDifference, NON_NEGATIVE, "Set point of the back-pressure regulator after the cartridge, above atmosphere; 0 if none.");
+pub const BACK_PRESSURE: FieldSpec = field("back_pressure", "Back-pressure (gauge)", Dimension::PressureDifference, lab::BACK_PRESSURE, "Set point of the back-pressure regulator after the cartridge, above atmosphere; 0 if none.");
 /// Rating of the weakest component (gauge).
-pub const RATING: FieldSpec = field("pressure_rating", "Cartridge rating (gauge)", Dimension::PressureDifference, Allowed::POSITIVE, "Working-pressure rating of the cartridge body with its frits and end fittings.");
+pub const RATING: FieldSpec = field("pressure_rating", "Cartridge rating (gauge)", Dimension::PressureDifference, lab::PRESSURE, "Working-pressure rating of the cartridge body with its frits and end fittings.");
 /// Pump pressure limit (gauge).
-pub const PUMP_LIMIT: FieldSpec = field("pump_limit", "Pump pressure limit (gauge)", Dimension::PressureDifference, Allowed::POSITIVE, "Highest pressure the pump delivers, or its pressure-limit setting.");
+pub const PUMP_LIMIT: FieldSpec = field("pump_limit", "Pump pressure limit (gauge)", Dimension::PressureDifference, lab::PRESSURE, "Highest pressure the pump delivers, or its pressure-limit setting.");
 /// Rating of the weakest fitting, tubing at temperature or sensor (gauge).
-pub const FITTING_RATING: FieldSpec = field("fitting_rating", "Fittings and tubing rating (gauge)", Dimension::PressureDifference, Allowed::POSITIVE, "Lowest rating among fittings, valves, sensors and the tubing at its temperature.");
+pub const FITTING_RATING: FieldSpec = field("fitting_rating", "Fittings and tubing rating (gauge)", Dimension::PressureDifference, lab::PRESSURE, "Lowest rating among fittings, valves, sensors and the tubing at its temperature.");
 /// Mass of solid in the bed.
-pub const SOLID_MASS: FieldSpec = field("solid_mass", "Mass of solid packed", Dimension::Mass, Allowed::POSITIVE, "Catalyst, supported reagent or scavenger weighed into the cartridge.");
+pub const SOLID_MASS: FieldSpec = field("solid_mass", "Mass of solid packed", Dimension::Mass, lab::MASS, "Catalyst, supported reagent or scavenger weighed into the cartridge.");
 /// Role of the solid.
 pub const BED_ROLE: ChoiceSpec = ChoiceSpec {
     key: "bed_role",
@@ -126,11 +125,11 @@ pub const BED_ROLE: ChoiceSpec = ChoiceSpec {
     options: &[("catalyst", "A catalyst (not consumed)"), ("reagent", "A supported reagent or scavenger (consumed)")],
 };
 /// Loading of active groups, mmol per gram of solid.
-pub const LOADING: FieldSpec = field("loading", "Loading", Dimension::SpecificAmount, Allowed::POSITIVE, "Active groups per mass of solid, as supplied or titrated.");
+pub const LOADING: FieldSpec = field("loading", "Loading", Dimension::SpecificAmount, lab::LOADING, "Active groups per mass of solid, as supplied or titrated.");
 /// Substrate concentration in the feed.
-pub const CONCENTRATION: FieldSpec = field("concentration", "Substrate concentration", Dimension::Concentration, Allowed::POSITIVE, "Substrate that consumes the active groups, in the feed.");
+pub const CONCENTRATION: FieldSpec = field("concentration", "Substrate concentration", Dimension::Concentration, lab::CONCENTRATION, "Substrate that consumes the active groups, in the feed.");
 /// Active groups consumed per substrate.
-pub const STOICHIOMETRY: FieldSpec = field("stoichiometry", "Active groups used per substrate (mol/mol)", Dimension::Number, Allowed::POSITIVE, "Moles of active groups consumed per mole of substrate converted.");
+pub const STOICHIOMETRY: FieldSpec = field("stoichiometry", "Active groups used per substrate (mol/mol)", Dimension::Number, lab::RATIO, "Moles of active groups consumed per mole of substrate converted.");
 /// Whether to size a bed.
 pub const SIZING: ChoiceSpec = ChoiceSpec {
     key: "sizing",
@@ -138,9 +137,9 @@ pub const SIZING: ChoiceSpec = ChoiceSpec {
     options: &[("check", "Check this bed only"), ("size", "Also size the bed for a target residence time")],
 };
 /// Target residence time between particles.
-pub const TARGET_RESIDENCE_TIME: FieldSpec = field("target_residence_time", "Target residence time", Dimension::Duration, Allowed::POSITIVE, "Mean time the liquid should spend between the particles.");
+pub const TARGET_RESIDENCE_TIME: FieldSpec = field("target_residence_time", "Target residence time", Dimension::Duration, lab::DURATION, "Mean time the liquid should spend between the particles.");
 /// Largest acceptable bed pressure drop.
-pub const MAX_PRESSURE_DROP: FieldSpec = field("max_pressure_drop", "Largest bed pressure drop", Dimension::PressureDifference, Allowed::POSITIVE, "Pressure drop over the bed the sized design may not exceed.");
+pub const MAX_PRESSURE_DROP: FieldSpec = field("max_pressure_drop", "Largest bed pressure drop", Dimension::PressureDifference, lab::PRESSURE, "Pressure drop over the bed the sized design may not exceed.");
 
 /// Every quantity field, in page order.
 pub const FIELDS: &[FieldSpec] = &[
@@ -258,18 +257,17 @@ impl PackedBedInput {
                 let d50 = c.take(src.quantity(&D50));
                 let d90 = c.take(src.quantity(&D90));
                 match (d10, d50, d90) {
-                    (Some(a), Some(b), Some(g)) if a < b && b < g => {
-                        Some((a, Some([Length::from_si(a), Length::from_si(b), Length::from_si(g)])))
-                    }
                     (Some(a), Some(b), Some(g)) => {
-                        let um = |v: f64| format_significant(v * 1e6, 4);
-                        c.take::<()>(Err(InputError {
-                            field: D50.key,
-                            label: D50.label,
-                            given: format!("d10 {} µm, d50 {} µm, d90 {} µm", um(a), um(b), um(g)),
-                            problem: "allowed: 0 < d10 < d50 < d90".to_owned(),
-                        }));
-                        None
+                        let micro = crate::physics::units::unit_by_symbol(Dimension::Length, "µm").unwrap_or(Dimension::Length.default_unit());
+                        let order = crate::physics::input::increasing(&[(&D10, a), (&D50, b), (&D90, g)], micro);
+                        if order.is_empty() {
+                            Some((a, Some([Length::from_si(a), Length::from_si(b), Length::from_si(g)])))
+                        } else {
+                            order.into_iter().for_each(|e| {
+                                c.take::<()>(Err(e));
+                            });
+                            None
+                        }
                     }
                     _ => None,
                 }
@@ -595,6 +593,45 @@ fn wall_check(ratio: f64, bed: &BedFlow) -> Check {
     }
 }
 
+/// Share of a full bed within which the mass packed and the bed agree (±5 %: weighing, voidage
+/// and tapping differ by that much; common practice, no source).
+pub const FILL_TOLERANCE: f64 = 0.05;
+
+/// Whether the mass packed fills the entered bed: much less leaves an empty head (or filler),
+/// much more does not fit at this voidage.
+fn fill_check(mass: Mass, full: Mass, length: Length, voidage: Fraction) -> Check {
+    let ratio = mass.si() / full.si();
+    let g = |m: f64| format_significant(m * 1e3, 3);
+    let mm = format_significant(length.mm(), 3);
+    let eps = format_significant(voidage.si(), 3);
+    let (verdict, reason) = if ratio < 1.0 - FILL_TOLERANCE {
+        (
+            Verdict::Caution,
+            format!(
+                "{} g packed fill {} % of the {} g that the {mm} mm bed holds at ε = {eps}: the solid occupies about {} mm, and the rest is empty volume or filler. Space velocity and capacity use the mass in the bed; the pressure drop and residence time are for a full {mm} mm bed. Enter the bed length from the mass, or fill the rest with an inert (glass beads, sand).",
+                g(mass.si()),
+                format_significant(ratio * 100.0, 3),
+                g(full.si()),
+                format_significant(length.mm() * ratio, 3)
+            ),
+        )
+    } else if ratio > 1.0 + FILL_TOLERANCE {
+        (
+            Verdict::Caution,
+            format!(
+                "{} g packed is {} % of the {} g that the {mm} mm bed holds at ε = {eps}: it does not fit unless the bed is denser (lower voidage) or longer. Space velocity and capacity use the {} g that fit; check the voidage, or enter the bed length from the mass.",
+                g(mass.si()),
+                format_significant(ratio * 100.0, 3),
+                g(full.si()),
+                g(full.si())
+            ),
+        )
+    } else {
+        (Verdict::Fine, format!("{} g packed fill the {mm} mm bed at ε = {eps} (it holds {} g).", g(mass.si()), g(full.si())))
+    };
+    Check { key: "bed_fill", topic: "Mass packed and bed", verdict, reason, caution: None }
+}
+
 fn plug_flow_check(ratio: f64) -> Check {
     let ok = ratio >= geometry::MIN_LENGTH_RATIO;
     Check {
@@ -723,6 +760,7 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
     let length_ratio = input.bed_length.si() / input.particle_diameter.si();
     let dp = pressure_drop::pressure_drop_spread(&bed)?;
     let inlet = input.back_pressure.si() + dp.value.get();
+    let full_mass = geometry::packed_mass(v_bed, eps, input.particle_density);
     let umf = minimum_fluidisation::minimum_fluidisation_spread(&FluidisationInput {
         particle_diameter: input.particle_diameter,
         // Buoyant weight of a particle with its pores full of liquid.
@@ -759,15 +797,17 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
         )?,
         dp.clone(),
         Figure::definition("inlet_pressure", "Inlet pressure (gauge)", Dimension::PressureDifference, INLET_PRESSURE_INFO, inlet)?,
-        Figure::definition("packed_mass", "Mass a full bed holds", Dimension::Mass, geometry::PACKED_MASS_INFO, geometry::packed_mass(v_bed, eps, input.particle_density).si())?,
+        Figure::definition("packed_mass", "Mass a full bed holds", Dimension::Mass, geometry::PACKED_MASS_INFO, full_mass.si())?,
     ];
     if let Some(f) = &umf {
         figures.push(f.clone());
     }
-    let whsv = capacity::weight_hourly_space_velocity(input.flow, input.density, input.solid_mass);
+    // What is not in the bed does not work: space velocity and capacity use the mass in it.
+    let in_bed = Mass::from_si(input.solid_mass.si().min(full_mass.si()));
+    let whsv = capacity::weight_hourly_space_velocity(input.flow, input.density, in_bed);
     figures.push(Figure::definition("whsv", "Weight hourly space velocity", Dimension::Frequency, capacity::WHSV_INFO, whsv.si())?);
     if let BedRole::Reagent { loading, concentration, stoichiometry } = input.role {
-        let n = capacity::active_amount(input.solid_mass, loading);
+        let n = capacity::active_amount(in_bed, loading);
         figures.push(Figure::definition("active_amount", "Active groups on the bed", Dimension::Amount, capacity::ACTIVE_AMOUNT_INFO, n.si())?);
         figures.push(Figure::definition(
             "consumption_time",
@@ -785,6 +825,7 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
         lifting_check(input, u_s, umf.as_ref()),
         wall_check(diameter_ratio, &bed),
         plug_flow_check(length_ratio),
+        fill_check(input.solid_mass, full_mass, input.bed_length, eps),
     ];
     if let Some(tubing) = &input.tubing {
         checks.push(crate::physics::tubing::check(tubing, PressureDifference::from_si(inlet), &input.liquid.solvents()));
@@ -795,5 +836,5 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
     checks.extend(input.liquid.checks(crate::physics::units::Pressure::from_gauge(input.back_pressure, input.ambient)));
     let lifting_flow = umf.as_ref().map(|f| f.value.get() * crate::physics::pipe_flow::bore_area(input.tube_diameter));
     let plots = vec![plots::pressure_drop_vs_flow(input, &bed, lifting_flow)?];
-    Ok(Report { figures, checks, plots })
+    Ok(Report { figures, checks, plots, advice: Vec::new() })
 }

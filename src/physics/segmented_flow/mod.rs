@@ -46,9 +46,8 @@ use super::units::{
     Temperature, VolumetricFlow, format_significant,
 };
 
-use super::input::field;
+use super::input::{field, lab};
 
-const NON_NEGATIVE: Allowed = Allowed { low: 0.0, low_inclusive: true, high: None, high_inclusive: false, whole: false };
 const BELOW_ONE: Allowed = Allowed { low: 0.0, low_inclusive: true, high: Some(1.0), high_inclusive: false, whole: false };
 
 /// The gas.
@@ -67,7 +66,7 @@ pub const GAS: ChoiceSpec = ChoiceSpec {
 /// Mole fraction of the named gas in the feed, the rest nitrogen (not read for air and nitrogen).
 pub const GAS_MOLE_FRACTION: FieldSpec = field("gas_mole_fraction", "Gas in the feed (rest N₂)", Dimension::Fraction, Allowed::UNIT_FRACTION, "Mole fraction of the named gas in the cylinder or mixture, the balance nitrogen (e.g. 9 % O₂ in N₂); 100 % for the pure gas.");
 /// Gas flow at the reference state.
-pub const GAS_FLOW: FieldSpec = field("gas_flow", "Gas flow at the reference state", Dimension::VolumetricFlow, Allowed::POSITIVE, "Reading of the mass-flow controller, in volume per time at its reference state (choose the state below).");
+pub const GAS_FLOW: FieldSpec = field("gas_flow", "Gas flow at the reference state", Dimension::VolumetricFlow, lab::GAS_FLOW, "Reading of the mass-flow controller, in volume per time at its reference state (choose the state below).");
 /// Reference state of the gas flow.
 pub const REFERENCE_STATE: ChoiceSpec = ChoiceSpec {
     key: "reference_state",
@@ -80,23 +79,23 @@ pub const REFERENCE_STATE: ChoiceSpec = ChoiceSpec {
     ],
 };
 /// User-defined reference temperature.
-pub const REFERENCE_TEMPERATURE: FieldSpec = field("reference_temperature", "Reference temperature", Dimension::Temperature, Allowed::POSITIVE, "Temperature the flow reading refers to (see the instrument's manual).");
+pub const REFERENCE_TEMPERATURE: FieldSpec = field("reference_temperature", "Reference temperature", Dimension::Temperature, lab::REFERENCE_TEMPERATURE, "Temperature the flow reading refers to (see the instrument's manual).");
 /// User-defined reference pressure (absolute).
-pub const REFERENCE_PRESSURE: FieldSpec = field("reference_pressure", "Reference pressure (absolute)", Dimension::Pressure, Allowed::POSITIVE, "Absolute pressure the flow reading refers to.");
+pub const REFERENCE_PRESSURE: FieldSpec = field("reference_pressure", "Reference pressure (absolute)", Dimension::Pressure, lab::ABSOLUTE_PRESSURE, "Absolute pressure the flow reading refers to.");
 /// Liquid flow.
-pub const LIQUID_FLOW: FieldSpec = field("liquid_flow", "Liquid flow", Dimension::VolumetricFlow, Allowed::POSITIVE, "Total liquid pumped into the gas–liquid junction.");
+pub const LIQUID_FLOW: FieldSpec = field("liquid_flow", "Liquid flow", Dimension::VolumetricFlow, lab::LIQUID_FLOW, "Total liquid pumped into the gas–liquid junction.");
 /// Substrate concentration in the liquid.
-pub const CONCENTRATION: FieldSpec = field("concentration", "Substrate concentration", Dimension::Concentration, Allowed::POSITIVE, "Substrate that consumes the gas, in the liquid after mixing.");
+pub const CONCENTRATION: FieldSpec = field("concentration", "Substrate concentration", Dimension::Concentration, lab::CONCENTRATION, "Substrate that consumes the gas, in the liquid after mixing.");
 /// Tube bore.
-pub const INNER_DIAMETER: FieldSpec = field("inner_diameter", "Tube inner diameter", Dimension::Length, Allowed::POSITIVE, "Bore of the coil; the junction is taken to have the same bore.");
+pub const INNER_DIAMETER: FieldSpec = field("inner_diameter", "Tube inner diameter", Dimension::Length, lab::BORE, "Bore of the coil; the junction is taken to have the same bore.");
 /// Coil length.
-pub const LENGTH: FieldSpec = field("length", "Coil length", Dimension::Length, Allowed::POSITIVE, "From the gas–liquid junction to the back-pressure regulator.");
+pub const LENGTH: FieldSpec = field("length", "Coil length", Dimension::Length, lab::TUBE_LENGTH, "From the gas–liquid junction to the back-pressure regulator.");
 /// Temperature.
-pub const TEMPERATURE: FieldSpec = field("temperature", "Temperature", Dimension::Temperature, Allowed::POSITIVE, "Temperature of the coil (taken as uniform).");
+pub const TEMPERATURE: FieldSpec = field("temperature", "Temperature", Dimension::Temperature, lab::TEMPERATURE, "Temperature of the coil (taken as uniform).");
 /// Back-pressure regulator set point (gauge).
-pub const BACK_PRESSURE: FieldSpec = field("back_pressure", "Back-pressure (gauge)", Dimension::PressureDifference, NON_NEGATIVE, "Set point of the back-pressure regulator, above atmosphere; 0 if none.");
+pub const BACK_PRESSURE: FieldSpec = field("back_pressure", "Back-pressure (gauge)", Dimension::PressureDifference, lab::BACK_PRESSURE, "Set point of the back-pressure regulator, above atmosphere; 0 if none.");
 /// Lowest component rating (gauge).
-pub const RATING: FieldSpec = field("pressure_rating", "Lowest component rating (gauge)", Dimension::PressureDifference, Allowed::POSITIVE, "Lowest working-pressure rating among tubing at temperature, fittings, mixer, regulator and sensors.");
+pub const RATING: FieldSpec = field("pressure_rating", "Lowest component rating (gauge)", Dimension::PressureDifference, lab::PRESSURE, "Lowest working-pressure rating among tubing at temperature, fittings, mixer, regulator and sensors.");
 /// The liquid.
 pub const SOLVENT: ChoiceSpec = ChoiceSpec { key: "solvent", label: "Liquid", options: fluids::selection::SINGLE_LIQUID_OPTIONS };
 /// The gas–liquid junction.
@@ -106,7 +105,7 @@ pub const JUNCTION: ChoiceSpec = ChoiceSpec {
     options: &[("tee", "T-junction"), ("cross", "Cross (flow-focusing) junction")],
 };
 /// Main-channel width of the junction.
-pub const JUNCTION_WIDTH: FieldSpec = field("junction_width", "Junction main-channel width", Dimension::Length, Allowed::POSITIVE, "Bore of the junction's main (liquid) channel where the bubbles pinch off; the tube's bore if the tube forms the junction.");
+pub const JUNCTION_WIDTH: FieldSpec = field("junction_width", "Junction main-channel width", Dimension::Length, lab::BORE, "Bore of the junction's main (liquid) channel where the bubbles pinch off; the tube's bore if the tube forms the junction.");
 /// Where the gas solubility comes from for a built-in solvent.
 pub const SOLUBILITY_SOURCE: ChoiceSpec = ChoiceSpec {
     key: "solubility_source",
@@ -114,9 +113,9 @@ pub const SOLUBILITY_SOURCE: ChoiceSpec = ChoiceSpec {
     options: &[("built_in", "Built-in (water: Sander 2023; organics: order of magnitude)"), ("entered", "Enter a measured value")],
 };
 /// Entered solubility: concentration at 1 bar partial pressure of the gas.
-pub const SOLUBILITY: FieldSpec = field("solubility", "Gas solubility at 1 bar of the gas", Dimension::Concentration, Allowed::POSITIVE, "Dissolved concentration at saturation under 1 bar partial pressure of the gas, at the working temperature.");
+pub const SOLUBILITY: FieldSpec = field("solubility", "Gas solubility at 1 bar of the gas", Dimension::Concentration, lab::CONCENTRATION, "Dissolved concentration at saturation under 1 bar partial pressure of the gas, at the working temperature.");
 /// Entered diffusivity of the gas in a custom liquid.
-pub const DIFFUSIVITY: FieldSpec = field("diffusivity", "Gas diffusivity in the liquid", Dimension::Diffusivity, Allowed::POSITIVE, "Diffusion coefficient of the dissolved gas (typically 1–10 × 10⁻⁵ cm²/s).");
+pub const DIFFUSIVITY: FieldSpec = field("diffusivity", "Gas diffusivity in the liquid", Dimension::Diffusivity, lab::DIFFUSIVITY, "Diffusion coefficient of the dissolved gas (typically 1–10 × 10⁻⁵ cm²/s).");
 /// Whether gas is consumed in the coil.
 pub const CONSUMPTION: ChoiceSpec = ChoiceSpec {
     key: "consumption",
@@ -536,7 +535,7 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
     checks.push(mass_transfer_check(t95, tau, share, reactive_feed.equivalents(input.concentration, input.liquid_flow)));
     let mut plots = plots::profiles(&profile, input.rating, input.ambient);
     plots.extend(plots::lengths_vs_gas_fraction(&junction.flow));
-    Ok(SegmentedFlowResult { report: Report { figures, checks, plots }, profile })
+    Ok(SegmentedFlowResult { report: Report { figures, checks, plots, advice: Vec::new() }, profile })
 }
 
 fn liquid_state(input: &SegmentedFlowInput) -> Result<(Liquid, Vec<RangeWarning>, Figure), SegmentedFlowError> {

@@ -10,7 +10,8 @@ use super::{
 };
 use crate::physics::numeric::{RootError, Tolerance, brent};
 use crate::physics::pipe_flow::{self, hagen_poiseuille};
-use crate::physics::report::{Check, Estimate, Figure, Finite, ModelInfo, NumericalError, RangeWarning, Report, Verdict, budget_verdict};
+use crate::physics::practical::{FINEST_MILLED_D90, LAMINAR_REYNOLDS, SMALLEST_BORE};
+use crate::physics::report::{AdviceKind, AdviceList, Check, Estimate, Figure, Finite, ModelInfo, NumericalError, RangeWarning, Report, Verdict, budget_verdict};
 use crate::physics::settling::drag::terminal_velocity_spread;
 use crate::physics::settling::hindered::{HinderedModel, Suspension, hindered_velocity_spread};
 use crate::physics::settling::{Drift, range_warnings};
@@ -25,10 +26,6 @@ pub const DEPOSIT_PROBLEM: f64 = 0.1;
 /// Up-flow margin: U ≥ 5 v_h keeps the wall zone slower than the particles below 10 % of the bore
 /// area (this tool's margin: common practice, no source).
 pub const UPFLOW_MARGIN: f64 = 5.0;
-/// Smallest particle size searched when solving for the largest tolerable size, 0.1 µm.
-pub const SMALLEST_SEARCHED: f64 = 1e-7;
-/// Largest flow searched, as a multiple of the entered flow.
-pub const FLOW_SEARCH_FACTOR: f64 = 1e6;
 
 /// Metadata of definitions used for figures.
 pub const SETTLE_TIME_INFO: ModelInfo =
@@ -41,8 +38,8 @@ pub const FRACTION_INFO: ModelInfo =
 /// Fixes solved for.
 pub const FIX_INFO: ModelInfo = ModelInfo {
     name: "Solved with Brent's method",
-    formula: "the flow or particle size at which the element's criterion is just met",
-    source: "this tool's thresholds (common practice, no source) on the correlations named in the check",
+    formula: "the flow or particle size at which the element's criterion is just met, within the pump's largest flow, laminar flow (Re ≤ 2000) and the finest millable d90 (5 µm)",
+    source: "this tool's thresholds and practical limits (common practice, no source) on the correlations named in the check",
     validity: &[],
 };
 /// Narrowest passage.
@@ -55,9 +52,14 @@ pub const INLET_INFO: ModelInfo = ModelInfo {
     validity: &[],
 };
 
-const GAS_AND_SONICATION: &str = "Gas–liquid segmentation keeps solids suspended by slug recirculation, and an ultrasound bath \
-breaks bridges (common practice, no source; ultrasound against bridging is reported by \
-Hartman et al., Org. Process Res. Dev. 2010, 14, 1347, abstract).";
+/// Ways of running that keep solids moving whatever the element (alternatives, with their conditions).
+const SEGMENTATION: &str = "Segment the slurry with gas or an immiscible liquid: the circulation inside each slug keeps particles \
+suspended, provided the slugs are shorter than a few bore diameters (size them on the gas–liquid tab; common practice, \
+no source).";
+const SONICATION: &str = "Immerse the line, or its narrowest part, in an ultrasound bath: it breaks bridges and loosens deposits \
+(reported by Hartman et al., Org. Process Res. Dev. 2010, 14, 1347, abstract).";
+const STIRRED_FEED: &str = "Keep the feed stirred and the line short and steep where you can; flush with clean solvent before \
+stopping the flow, since deposits grow fastest when the flow stops (common practice, no source).";
 
 const PLUG_CAUTION: &str = "A plug here stops the flow while a positive-displacement pump keeps pushing: the pressure \
 rises to the pump limit or until the weakest part fails, spraying hot, possibly toxic liquid. \
@@ -92,6 +94,24 @@ struct Line<'a> {
 }
 
 impl Line<'_> {
+    /// Flow at which a tube of bore `d` reaches the laminar limit (Re = 2000 with the suspension
+    /// viscosity): the top of the range of the laminar deposition and resuspension results.
+    fn laminar_flow_limit(&self, d: f64) -> f64 {
+        LAMINAR_REYNOLDS * self.mu_s * std::f64::consts::PI * d / (4.0 * self.input.density.si())
+    }
+
+    /// The largest flow a remedy may ask of bore `d`: the pump's largest flow or the laminar
+    /// limit, whichever is lower, with the words that say which.
+    fn flow_ceiling(&self, d: f64) -> (f64, String) {
+        let laminar = self.laminar_flow_limit(d);
+        let pump = self.input.pump_max_flow.si();
+        if pump <= laminar {
+            (pump, format!("the pump's largest flow, {} mL/min", ml_min(pump)))
+        } else {
+            (laminar, format!("{} mL/min, where the flow in this bore stops being laminar (Re = 2000) and the laminar results used here end", ml_min(laminar)))
+        }
+    }
+
     /// Hindered settling speed (Richardson–Zaki on the recommended drag law) of particles of
     /// diameter `d` in a passage of bore `bore`.
     fn hindered(&self, d: Length, bore: Length) -> Result<f64, NumericalError> {
@@ -126,9 +146,8 @@ struct ElementResult {
     clogging: Verdict,
 }
 
-fn horizontal(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<Figure>) -> Result<(Verdict, String), NumericalError> {
+fn horizontal(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<Figure>, advice: &mut AdviceList) -> Result<(Verdict, String), NumericalError> {
     let d = e.inner_diameter.si();
-    let area = pipe_flow::bore_area(e.inner_diameter);
     let v90 = line.hindered(line.largest, e.inner_diameter)?;
     let z90 = fuchs_thomas::settling_number(e.length.si(), v90, d, u);
     let speeds = line.classes.iter().map(|c| line.hindered(c.diameter, e.inner_diameter)).collect::<Result<Vec<_>, _>>()?;
@@ -164,59 +183,108 @@ fn horizontal(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<
         format_significant(theta, 3),
         if moving { "a settled layer is pushed along as bed load but can still grow" } else { "a settled layer stays put and grows" },
     );
+    if e.kind == ElementKind::Coil {
+        reason.push_str(&format!(
+            " The coil is treated as a straight horizontal tube: its Dean vortices add cross-stream mixing that can only help keep particles up, and at Re = {} they are weak, so this errs on the safe side (common practice, no source).",
+            format_significant(line.input.density.si() * u * d / line.mu_s, 3)
+        ));
+    }
     if verdict == Verdict::Fine {
         return Ok((verdict, reason));
     }
-    reason.push_str(" To fix:");
-    // Minimum flow for η ≤ 1 %: Z ∝ 1/U, so η falls with flow; solved in ln Q.
+    horizontal_advice(line, i, e, u, &speeds, figures, advice)?;
+    Ok((verdict, reason))
+}
+
+/// What would keep a horizontal element below 1 % deposition, within practical limits: a higher
+/// flow, finer particles, a narrower bore, vertical routing, or the ways of running that work
+/// when none of these does.
+fn horizontal_advice(line: &Line, i: usize, e: &LineElement, u: f64, speeds: &[f64], figures: &mut Vec<Figure>, advice: &mut AdviceList) -> Result<(), NumericalError> {
+    let key = keys::SETTLING[i].key;
+    let d = e.inner_diameter.si();
+    let area = pipe_flow::bore_area(e.inner_diameter);
+    let passes = line.input.passes;
     let q = line.input.flow.si();
-    let at = |ln_q: f64| over_passes(deposited_mass_fraction(&line.classes, &speeds, e, ln_q.exp() / area), passes) - DEPOSIT_CAUTION;
-    match brent(at, q.ln(), (q * FLOW_SEARCH_FACTOR).ln(), Tolerance::TIGHT) {
-        Ok(ln_q) => {
-            let q_min = ln_q.exp();
+    let n = i + 1;
+    let what = format!("element {n} ({})", e.kind.word());
+    let (ceiling, ceiling_words) = line.flow_ceiling(d);
+    // Flow: η falls as the flow rises (Z ∝ 1/U); solved in ln Q up to the ceiling.
+    let deposit_at = |ln_q: f64| over_passes(deposited_mass_fraction(&line.classes, speeds, e, ln_q.exp() / area), passes) - DEPOSIT_CAUTION;
+    let flow_fix = if ceiling > q { brent(deposit_at, q.ln(), ceiling.ln(), Tolerance::TIGHT).ok().map(f64::exp) } else { None };
+    match flow_fix {
+        Some(q_min) => {
             figures.push(fig(&keys::MINIMUM_FLOW[i], Dimension::VolumetricFlow, FIX_INFO, q_min, Vec::new())?);
-            reason.push_str(&format!(" a flow of at least {} mL/min keeps deposition below 1 % here;", ml_min(q_min)));
+            advice.add(key, AdviceKind::Remedy, format!(
+                "Raise the flow through {what} to at least {} mL/min: deposition then stays below 1 % (laminar Thomas/Fuchs result, Re = {}).",
+                ml_min(q_min),
+                format_significant(line.input.density.si() * q_min / area * d / line.mu_s, 3)
+            ));
         }
-        Err(_) => reason.push_str(" no flow within a factor 10⁶ keeps deposition below 1 %;"),
+        None => advice.add(key, AdviceKind::NoneExists, format!(
+            "No flow keeps {what} below 1 % deposition: it would take more than {ceiling_words}."
+        )),
     }
-    let q_c = shields::critical_velocity(mu, d, dr, line.largest.si()) * area;
-    reason.push_str(&format!(" {} mL/min would move a settled d90 layer (θ = θ_c);", ml_min(q_c)));
-    // Largest single size with η ≤ 1 % at this flow: v_h rises with d; solved in ln d.
+    // Largest particles (d90) with η ≤ 1 % at this flow, not finer than a mill makes.
     let size_at = |ln_d: f64| match line.hindered(Length::from_si(ln_d.exp()), e.inner_diameter) {
         Ok(v) => over_passes(fuchs_thomas::deposited_fraction(fuchs_thomas::settling_number(e.length.si(), v, d, u)), passes) - DEPOSIT_CAUTION,
         Err(_) => f64::NAN,
     };
-    match brent(size_at, SMALLEST_SEARCHED.ln(), line.largest.si().ln(), Tolerance::TIGHT) {
-        Ok(ln_d) => {
-            let d_max = ln_d.exp();
-            figures.push(fig(&keys::MAXIMUM_PARTICLE_SIZE[i], Dimension::Length, FIX_INFO, d_max, Vec::new())?);
-            reason.push_str(&format!(" particles up to {} µm stay below 1 % deposition at this flow;", um(d_max)));
+    millable_size(line, i, size_at, figures, advice, &format!("at this flow such particles stay below 1 % deposition in {what}."), &format!(
+        "No millable size helps {what}: even particles of {} µm, about the finest d90 a mill makes (common practice, no source), deposit more than 1 % at this flow.",
+        um(FINEST_MILLED_D90)
+    ))?;
+    // A narrower bore: at a fixed flow Z ∝ D, so deposition falls as the bore narrows, down to the
+    // smallest bore that is laminar, clear of clogging (10 × d90) and made (0.25 mm).
+    let narrowest = SMALLEST_BORE.max(clogging::MARGIN_RATIO * line.largest.si()).max(4.0 * line.input.density.si() * q / (std::f64::consts::PI * LAMINAR_REYNOLDS * line.mu_s));
+    if narrowest < d {
+        let bore_at = |ln_b: f64| {
+            let b = ln_b.exp();
+            let narrower = LineElement { inner_diameter: Length::from_si(b), ..*e };
+            let u_b = q / (std::f64::consts::PI * b * b / 4.0);
+            line.classes
+                .iter()
+                .map(|c| line.hindered(c.diameter, narrower.inner_diameter))
+                .collect::<Result<Vec<_>, _>>()
+                .map_or(f64::NAN, |v| over_passes(deposited_mass_fraction(&line.classes, &v, &narrower, u_b), passes) - DEPOSIT_CAUTION)
+        };
+        match brent(bore_at, narrowest.ln(), d.ln(), Tolerance::TIGHT) {
+            Ok(ln_b) => advice.add(key, AdviceKind::Remedy, format!(
+                "Use a bore of {} mm or less for {what} at this flow: deposition stays below 1 %, with the passage at least 10 × d90; the pressure drop rises as 1/D⁴, so check the budget.",
+                format_significant(ln_b.exp() * 1e3, 3)
+            )),
+            Err(RootError::NoBracket { f_low, .. }) if f_low > 0.0 => advice.add(key, AdviceKind::NoneExists, format!(
+                "No practical bore helps {what} at this flow: even {} mm (laminar, at least 10 × d90 and 0.25 mm) deposits more than 1 %.",
+                format_significant(narrowest * 1e3, 3)
+            )),
+            Err(_) => {}
         }
-        Err(RootError::NoBracket { f_low, .. }) if f_low > 0.0 => reason.push_str(" no particle size from 0.1 µm up stays below 1 % at this flow;"),
-        Err(_) => {}
     }
-    let d_c = shields::critical_bore(mu, q, dr, line.largest.si());
-    let ratio_c = d_c / line.largest.si();
-    // A narrower bore only helps if it is narrower than the one there.
-    if d_c < e.inner_diameter.si() {
-        reason.push_str(&format!(
-            " a bore of {} mm or less at this flow moves a settled layer (passage ratio {} for d90{});",
-            format_significant(d_c * 1e3, 3),
-            format_significant(ratio_c, 3),
-            if ratio_c < clogging::MARGIN_RATIO { ", too small against clogging" } else { "" }
-        ));
+    // Vertical up-flow carries the particles when U ≥ 5 v_h in that bore (a coil cannot be
+    // re-routed; its tubing can be replaced by a vertical run).
+    let v90 = line.hindered(line.largest, e.inner_diameter)?;
+    let q_up = UPFLOW_MARGIN * v90 * area;
+    let pump = line.input.pump_max_flow.si();
+    if e.kind != ElementKind::Coil {
+        if q_up <= q {
+            advice.add(key, AdviceKind::Alternative, format!(
+                "Route {what} vertically with the flow upwards: at this flow the liquid rises at {} × the d90 particles' settling speed and carries them (margin 5: common practice, no source).",
+                format_significant(u / v90, 3)
+            ));
+        } else if q_up <= pump {
+            advice.add(key, AdviceKind::Alternative, format!(
+                "Route {what} vertically with the flow upwards at {} mL/min or more (U ≥ 5 × the d90 settling speed of {} mm/s; margin: common practice, no source).",
+                ml_min(q_up),
+                mm_s(v90)
+            ));
+        }
     }
-    reason.push_str(&if u > UPFLOW_MARGIN * v90 {
-        format!(" routed vertically with up-flow the particles would be carried (U = {} × v_h);", format_significant(u / v90, 3))
-    } else {
-        format!(" routed vertically with up-flow, d90 particles are carried reliably only from U = {} mm/s;", mm_s(UPFLOW_MARGIN * v90))
-    });
-    reason.push(' ');
-    reason.push_str(GAS_AND_SONICATION);
-    Ok((verdict, reason))
+    advice.add(key, AdviceKind::Alternative, SEGMENTATION);
+    advice.add(key, AdviceKind::Alternative, SONICATION);
+    advice.add(key, AdviceKind::Alternative, STIRRED_FEED);
+    Ok(())
 }
 
-fn up_flow(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<Figure>) -> Result<(Verdict, String), NumericalError> {
+fn up_flow(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<Figure>, advice: &mut AdviceList) -> Result<(Verdict, String), NumericalError> {
     let v90 = line.hindered(line.largest, e.inner_diameter)?;
     let recirculating = vertical::recirculating_area_fraction(u, v90);
     let holdup = vertical::solids_holdup(line.phi, u, -v90);
@@ -235,7 +303,7 @@ fn up_flow(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<Fig
     } else {
         Verdict::Fine
     };
-    let mut reason = match carried {
+    let reason = match carried {
         Some(s) => format!(
             "Up-flow {}: U = {} mm/s against v_h = {} mm/s for d90 (Richardson–Zaki); the particles travel at {} mm/s and stay {} s against the liquid's {} s; the solids fraction rises from {} to {} %; the liquid near the wall is slower than v_h over {} % of the bore, where particles slide back (margin U ≥ 5 v_h: common practice, no source).",
             e.kind.word(),
@@ -258,21 +326,91 @@ fn up_flow(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<Fig
     if verdict == Verdict::Fine {
         return Ok((verdict, reason));
     }
+    up_flow_advice(line, i, e, v90, figures, advice)?;
+    Ok((verdict, reason))
+}
+
+/// What would carry the particles up a vertical element with margin: a higher flow, finer
+/// particles or a narrower bore, within practical limits, and the ways of running that work.
+fn up_flow_advice(line: &Line, i: usize, e: &LineElement, v90: f64, figures: &mut Vec<Figure>, advice: &mut AdviceList) -> Result<(), NumericalError> {
+    let key = keys::SETTLING[i].key;
+    let what = format!("element {} ({})", i + 1, e.kind.word());
+    let d = e.inner_diameter.si();
+    let q = line.input.flow.si();
+    let u = q / pipe_flow::bore_area(e.inner_diameter);
     let q_min = UPFLOW_MARGIN * v90 * pipe_flow::bore_area(e.inner_diameter);
-    figures.push(fig(&keys::MINIMUM_FLOW[i], Dimension::VolumetricFlow, FIX_INFO, q_min, Vec::new())?);
-    reason.push_str(&format!(" To fix: a flow of at least {} mL/min (U = 5 v_h);", ml_min(q_min)));
+    // Carrying up a vertical tube only gets easier if the flow turns turbulent, so the pump alone
+    // bounds this flow.
+    let pump = line.input.pump_max_flow.si();
+    if q_min <= pump {
+        figures.push(fig(&keys::MINIMUM_FLOW[i], Dimension::VolumetricFlow, FIX_INFO, q_min, Vec::new())?);
+        advice.add(key, AdviceKind::Remedy, format!(
+            "Raise the flow through {what} to at least {} mL/min, so that the liquid rises at 5 × the d90 settling speed of {} mm/s (margin: common practice, no source).",
+            ml_min(q_min),
+            mm_s(v90)
+        ));
+    } else {
+        advice.add(key, AdviceKind::NoneExists, format!(
+            "No flow carries the particles up {what} with margin: it would take {} mL/min, more than the pump's largest flow, {} mL/min.",
+            ml_min(q_min),
+            ml_min(pump)
+        ));
+    }
     let size_at = |ln_d: f64| match line.hindered(Length::from_si(ln_d.exp()), e.inner_diameter) {
         Ok(v) => UPFLOW_MARGIN * v - u,
         Err(_) => f64::NAN,
     };
-    if let Ok(ln_d) = brent(size_at, SMALLEST_SEARCHED.ln(), line.largest.si().ln(), Tolerance::TIGHT) {
-        let d_max = ln_d.exp();
-        figures.push(fig(&keys::MAXIMUM_PARTICLE_SIZE[i], Dimension::Length, FIX_INFO, d_max, Vec::new())?);
-        reason.push_str(&format!(" or particles no larger than {} µm at this flow;", um(d_max)));
+    millable_size(line, i, size_at, figures, advice, &format!("the flow then carries it up {what} with margin."), &format!(
+        "No millable size is carried up {what} with margin at this flow: even {} µm particles (about the finest d90 a mill makes) settle too fast.",
+        um(FINEST_MILLED_D90)
+    ))?;
+    // At a fixed flow U ∝ 1/D²: the bore at which U = 5 v_h, if it is practical.
+    let bore = (4.0 * q / (std::f64::consts::PI * UPFLOW_MARGIN * v90)).sqrt();
+    let narrowest = SMALLEST_BORE.max(clogging::MARGIN_RATIO * line.largest.si());
+    if bore >= narrowest && bore < d {
+        advice.add(key, AdviceKind::Remedy, format!(
+            "Use a bore of {} mm or less for {what} at this flow: the liquid then rises at 5 × the d90 settling speed; the pressure drop rises as 1/D⁴, so check the budget.",
+            format_significant(bore * 1e3, 3)
+        ));
+    } else if bore < narrowest {
+        advice.add(key, AdviceKind::NoneExists, format!(
+            "No practical bore carries the particles up {what} at this flow: it would take {} mm, narrower than {} mm (10 × d90, and at least 0.25 mm).",
+            format_significant(bore * 1e3, 3),
+            format_significant(narrowest * 1e3, 3)
+        ));
     }
-    reason.push_str(" a smaller bore raises U as 1/D²; a lower loading keeps the accumulated solids fluid. ");
-    reason.push_str(GAS_AND_SONICATION);
-    Ok((verdict, reason))
+    advice.add(key, AdviceKind::Alternative, "Keep the solids loading low where the flow rises slowly: particles held back in an up-flow section concentrate there (common practice, no source).");
+    advice.add(key, AdviceKind::Alternative, SEGMENTATION);
+    advice.add(key, AdviceKind::Alternative, SONICATION);
+    Ok(())
+}
+
+/// The largest d90, not finer than a mill makes, at which `residual` (of ln d; negative where the
+/// element's criterion is met) crosses zero: its figure and a remedy ending in `fixed`, or the
+/// statement `none` when even the milling floor fails.
+fn millable_size(
+    line: &Line,
+    i: usize,
+    residual: impl Fn(f64) -> f64,
+    figures: &mut Vec<Figure>,
+    advice: &mut AdviceList,
+    fixed: &str,
+    none: &str,
+) -> Result<(), NumericalError> {
+    if line.largest.si() <= FINEST_MILLED_D90 {
+        return Ok(());
+    }
+    let key = keys::SETTLING[i].key;
+    match brent(residual, FINEST_MILLED_D90.ln(), line.largest.si().ln(), Tolerance::TIGHT) {
+        Ok(ln_d) => {
+            let d_max = ln_d.exp();
+            figures.push(fig(&keys::MAXIMUM_PARTICLE_SIZE[i], Dimension::Length, FIX_INFO, d_max, Vec::new())?);
+            advice.add(key, AdviceKind::Remedy, format!("Mill or sieve the solid to a d90 of {} µm or less: {fixed}", um(d_max)));
+        }
+        Err(RootError::NoBracket { f_low, .. }) if f_low > 0.0 => advice.add(key, AdviceKind::NoneExists, none),
+        Err(_) => {}
+    }
+    Ok(())
 }
 
 fn down_flow(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<Figure>) -> Result<(Verdict, String), NumericalError> {
@@ -294,7 +432,7 @@ fn down_flow(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<F
     ))
 }
 
-fn clogging_check(line: &Line, i: usize, e: &LineElement, figures: &mut Vec<Figure>, checks: &mut Vec<Check>) -> Result<Verdict, NumericalError> {
+fn clogging_check(line: &Line, i: usize, e: &LineElement, figures: &mut Vec<Figure>, checks: &mut Vec<Check>, advice: &mut AdviceList) -> Result<Verdict, NumericalError> {
     let w = e.inner_diameter.si();
     let d = line.largest.si();
     let ratio = w / d;
@@ -314,7 +452,7 @@ fn clogging_check(line: &Line, i: usize, e: &LineElement, figures: &mut Vec<Figu
         clogging::ClogRisk::SmallMargin => "between 3 and 10: arches are unlikely but the margin for agglomerates and d99 is small (10: common practice, no source)",
         clogging::ClogRisk::Clear => "10 or more: clear for single particles (common practice, no source)",
     };
-    let mut reason = format!(
+    let reason = format!(
         "{} opening {} µm over d90 {} µm: ratio {} — {what}.{}",
         crate::physics::fluids::selection::capitalised(e.kind.word()),
         um(w),
@@ -330,13 +468,36 @@ fn clogging_check(line: &Line, i: usize, e: &LineElement, figures: &mut Vec<Figu
         }
     );
     if verdict != Verdict::Fine {
-        reason.push_str(&format!(
-            " To fix: particles below {} µm (W/10) for continuous flow, at least below {} µm (W/3); a wider opening of {} mm or more for this d90{}. {GAS_AND_SONICATION}",
-            um(w / clogging::MARGIN_RATIO),
-            um(w / clogging::BRIDGING_RATIO),
-            format_significant(d * clogging::MARGIN_RATIO * 1e3, 3),
-            if concentrated { "; a loading below 10 vol %" } else { "" }
-        ));
+        let key = keys::CLOGGING[i].key;
+        let what = format!("element {} ({})", i + 1, e.kind.word());
+        if ratio < clogging::MARGIN_RATIO {
+            let fine_enough = w / clogging::MARGIN_RATIO;
+            if fine_enough >= FINEST_MILLED_D90 {
+                advice.add(key, AdviceKind::Remedy, format!(
+                    "Mill or sieve the solid to a d90 of {} µm or less (a tenth of the {} µm opening of {what}); below {} µm (a third) at the very least.",
+                    um(fine_enough),
+                    um(w),
+                    um(w / clogging::BRIDGING_RATIO)
+                ));
+            } else {
+                advice.add(key, AdviceKind::NoneExists, format!(
+                    "No millable size clears the {} µm opening of {what} with margin: it would need a d90 below {} µm, finer than a mill makes (about {} µm).",
+                    um(w),
+                    um(fine_enough),
+                    um(FINEST_MILLED_D90)
+                ));
+            }
+            advice.add(key, AdviceKind::Remedy, format!(
+                "Give {what} an opening of {} mm or more (10 × d90; common practice, no source).",
+                format_significant(d * clogging::MARGIN_RATIO * 1e3, 3)
+            ));
+        }
+        if concentrated {
+            advice.add(key, AdviceKind::Remedy, "Lower the solids loading below 10 vol %.");
+        }
+        if e.kind != ElementKind::Frit {
+            advice.add(key, AdviceKind::Alternative, SONICATION);
+        }
     }
     checks.push(Check {
         key: keys::CLOGGING[i].key,
@@ -348,7 +509,7 @@ fn clogging_check(line: &Line, i: usize, e: &LineElement, figures: &mut Vec<Figu
     Ok(verdict)
 }
 
-fn element(line: &Line, i: usize, e: &LineElement, figures: &mut Vec<Figure>, checks: &mut Vec<Check>) -> Result<ElementResult, NumericalError> {
+fn element(line: &Line, i: usize, e: &LineElement, figures: &mut Vec<Figure>, checks: &mut Vec<Check>, advice: &mut AdviceList) -> Result<ElementResult, NumericalError> {
     let input = line.input;
     let u = pipe_flow::mean_velocity(input.flow, e.inner_diameter).si();
     figures.push(fig(&keys::MEAN_VELOCITY[i], Dimension::Velocity, pipe_flow::VELOCITY_INFO, u, Vec::new())?);
@@ -371,8 +532,8 @@ fn element(line: &Line, i: usize, e: &LineElement, figures: &mut Vec<Figure>, ch
             (o, _) => o,
         };
         let (v, mut r) = match effective {
-            Orientation::Horizontal => horizontal(line, i, e, u, figures)?,
-            Orientation::Up => up_flow(line, i, e, u, figures)?,
+            Orientation::Horizontal => horizontal(line, i, e, u, figures, advice)?,
+            Orientation::Up => up_flow(line, i, e, u, figures, advice)?,
             Orientation::Down => down_flow(line, i, e, u, figures)?,
         };
         if line.drift == Drift::Rises {
@@ -386,7 +547,7 @@ fn element(line: &Line, i: usize, e: &LineElement, figures: &mut Vec<Figure>, ch
     // Deposits grow into plugs: a settling problem carries the same caution as a clogging one.
     let caution = (settling == Verdict::Problem).then(|| PLUG_CAUTION.to_owned());
     checks.push(Check { key: keys::SETTLING[i].key, topic: keys::SETTLING[i].label, verdict: settling, reason, caution });
-    let clogging = clogging_check(line, i, e, figures, checks)?;
+    let clogging = clogging_check(line, i, e, figures, checks, advice)?;
     Ok(ElementResult { settling, clogging })
 }
 
@@ -484,9 +645,10 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
         });
     }
 
+    let mut advice = AdviceList::default();
     let mut results = Vec::with_capacity(input.elements.len());
     for (i, e) in input.elements.iter().enumerate().take(keys::MAX_ELEMENTS) {
-        results.push(element(&line, i, e, &mut figures, &mut checks)?);
+        results.push(element(&line, i, e, &mut figures, &mut checks, &mut advice)?);
     }
 
     // Hagen–Poiseuille is linear in μ: the total for each viscosity model scales the recommended one.
@@ -563,7 +725,7 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
         caution: (verdict == Verdict::Problem).then(|| PLUG_CAUTION.to_owned()),
     });
     let plots = if drift == Drift::Neutral { Vec::new() } else { vec![super::plots::settling_vs_size(input, phi)?] };
-    Ok(Report { figures, checks, plots })
+    Ok(Report { figures, checks, plots, advice: advice.into_vec() })
 }
 
 /// Metadata of the fitted log-normal spread.

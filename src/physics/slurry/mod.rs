@@ -39,39 +39,38 @@ pub const PIPE_REYNOLDS: &str = "pipe Reynolds number Re = ρ U D / μ_s";
 /// Pipe Reynolds number above which flow is taken as turbulent (common practice, no source).
 pub const TURBULENT_REYNOLDS: f64 = 4000.0;
 
-use super::input::field;
+use super::input::{field, lab};
 
-const NON_NEGATIVE: Allowed = Allowed { low: 0.0, low_inclusive: true, high: None, high_inclusive: false, whole: false };
 const OPEN_FRACTION: Allowed = Allowed { low: 0.0, low_inclusive: false, high: Some(1.0), high_inclusive: false, whole: false };
 
 /// Total flow through the line.
-pub const FLOW: FieldSpec = field("flow", "Total flow", Dimension::VolumetricFlow, Allowed::POSITIVE, "Slurry flow through the line (liquid plus solids).");
+pub const FLOW: FieldSpec = field("flow", "Total flow", Dimension::VolumetricFlow, lab::LIQUID_FLOW, "Slurry flow through the line (liquid plus solids).");
 /// Liquid density.
-pub const DENSITY: FieldSpec = field("density", "Liquid density", Dimension::Density, Allowed::POSITIVE, "At the operating temperature.");
+pub const DENSITY: FieldSpec = field("density", "Liquid density", Dimension::Density, lab::LIQUID_DENSITY, "At the operating temperature.");
 /// Liquid viscosity.
-pub const VISCOSITY: FieldSpec = field("viscosity", "Liquid viscosity", Dimension::DynamicViscosity, Allowed::POSITIVE, "Dynamic viscosity of the liquid alone at the operating temperature.");
+pub const VISCOSITY: FieldSpec = field("viscosity", "Liquid viscosity", Dimension::DynamicViscosity, lab::VISCOSITY, "Dynamic viscosity of the liquid alone at the operating temperature.");
 /// Particle density.
-pub const PARTICLE_DENSITY: FieldSpec = field("particle_density", "Particle density", Dimension::Density, Allowed::POSITIVE, "Skeletal density of a dense solid; for porous solids the liquid-filled density.");
+pub const PARTICLE_DENSITY: FieldSpec = field("particle_density", "Particle density", Dimension::Density, lab::SOLID_DENSITY, "Skeletal density of a dense solid; for porous solids the liquid-filled density.");
 /// One particle size.
-pub const PARTICLE_SIZE: FieldSpec = field("particle_size", "Particle size", Dimension::Length, Allowed::POSITIVE, "Volume-equivalent diameter when all particles are about one size.");
+pub const PARTICLE_SIZE: FieldSpec = field("particle_size", "Particle size", Dimension::Length, lab::PARTICLE_SIZE, "Volume-equivalent diameter when all particles are about one size.");
 /// d₁₀ of the size distribution.
-pub const D10: FieldSpec = field("d10", "d10", Dimension::Length, Allowed::POSITIVE, "10 % of the solid volume is in smaller particles.");
+pub const D10: FieldSpec = field("d10", "d10", Dimension::Length, lab::PARTICLE_SIZE, "10 % of the solid volume is in smaller particles.");
 /// d₅₀ of the size distribution.
-pub const D50: FieldSpec = field("d50", "d50", Dimension::Length, Allowed::POSITIVE, "Median size by volume.");
+pub const D50: FieldSpec = field("d50", "d50", Dimension::Length, lab::PARTICLE_SIZE, "Median size by volume.");
 /// d₉₀ of the size distribution.
-pub const D90: FieldSpec = field("d90", "d90", Dimension::Length, Allowed::POSITIVE, "90 % of the solid volume is in smaller particles; agglomerates count.");
+pub const D90: FieldSpec = field("d90", "d90", Dimension::Length, lab::PARTICLE_SIZE, "90 % of the solid volume is in smaller particles; agglomerates count.");
 /// Sphericity.
 pub const SPHERICITY: FieldSpec = field("sphericity", "Sphericity", Dimension::Number, Allowed::UNIT_FRACTION, "1 for spheres; crushed or crystalline solids about 0.6–0.8.");
 /// Solids loading.
 pub const LOADING: FieldSpec = field("loading", "Solids loading", Dimension::Fraction, OPEN_FRACTION, "Solids in the slurry, by mass or by volume as chosen.");
 /// Back-pressure set point (gauge).
-pub const BACK_PRESSURE: FieldSpec = field("back_pressure", "Back-pressure (gauge)", Dimension::PressureDifference, NON_NEGATIVE, "Set point of the back-pressure regulator at the outlet, above atmosphere; 0 if none.");
+pub const BACK_PRESSURE: FieldSpec = field("back_pressure", "Back-pressure (gauge)", Dimension::PressureDifference, lab::BACK_PRESSURE, "Set point of the back-pressure regulator at the outlet, above atmosphere; 0 if none.");
 /// Lowest component rating (gauge).
-pub const RATING: FieldSpec = field("pressure_rating", "Lowest component rating (gauge)", Dimension::PressureDifference, Allowed::POSITIVE, "Lowest working-pressure rating among pump, tubing at temperature, fittings, valves and sensors.");
+pub const RATING: FieldSpec = field("pressure_rating", "Lowest component rating (gauge)", Dimension::PressureDifference, lab::PRESSURE, "Lowest working-pressure rating among pump, tubing at temperature, fittings, valves and sensors.");
 /// Element inner diameter (the per-element key replaces `inner_diameter` in errors).
-pub const ELEMENT_INNER_DIAMETER: FieldSpec = field("inner_diameter", "Inner diameter", Dimension::Length, Allowed::POSITIVE, "Bore of tubing; narrowest opening of a fitting, valve, mixer or seat; pore size of a frit.");
+pub const ELEMENT_INNER_DIAMETER: FieldSpec = field("inner_diameter", "Inner diameter", Dimension::Length, lab::BORE, "Bore of tubing; narrowest opening of a fitting, valve, mixer or seat; pore size of a frit.");
 /// Element length.
-pub const ELEMENT_LENGTH: FieldSpec = field("length", "Length", Dimension::Length, Allowed::POSITIVE, "Flow path length through the element.");
+pub const ELEMENT_LENGTH: FieldSpec = field("length", "Length", Dimension::Length, lab::TUBE_LENGTH, "Flow path length through the element.");
 
 /// One size or a distribution.
 pub const SIZE_MODE: ChoiceSpec = ChoiceSpec { key: "size_mode", label: "Particle size", options: &[("single", "One size"), ("distribution", "d10 / d50 / d90")] };
@@ -82,7 +81,7 @@ pub const OPERATION: ChoiceSpec = ChoiceSpec {
     options: &[("single_pass", "Single pass"), ("recirculation", "Recirculation loop (stirred reservoir)")],
 };
 /// Passes of the slurry through the line in a recirculation loop.
-pub const PASSES: FieldSpec = field("passes", "Number of passes", Dimension::Number, Allowed::COUNT, "How many times the slurry goes round the loop; deposition adds up over the passes.");
+pub const PASSES: FieldSpec = field("passes", "Number of passes", Dimension::Number, lab::PASSES, "How many times the slurry goes round the loop; deposition adds up over the passes.");
 /// Loading by mass or by volume.
 pub const LOADING_BASIS: ChoiceSpec = ChoiceSpec { key: "loading_basis", label: "Loading basis", options: &[("mass", "wt %"), ("volume", "vol %")] };
 /// Element kind.
@@ -226,6 +225,8 @@ pub struct SlurryInput {
     pub passes: u32,
     /// The line's tubing from the table, for its rating at temperature.
     pub tubing: Option<crate::physics::tubing::TubingChoice>,
+    /// The pump's largest flow: no remedy asks for more.
+    pub pump_max_flow: VolumetricFlow,
 }
 
 /// Field name used for errors about the list of elements as a whole.
@@ -301,8 +302,10 @@ impl SlurryInput {
                 }
             }
             ParticleSize::Distribution { d10, d50, d90 } => {
-                let ok = [d10, d50, d90].iter().all(|d| d.si().is_finite() && d.si() > 0.0);
-                if !(ok && d10.si() < d50.si() && d50.si() < d90.si()) {
+                if [d10, d50, d90].iter().all(|d| d.si().is_finite() && d.si() > 0.0) {
+                    let micro = super::units::unit_by_symbol(Dimension::Length, "µm").unwrap_or(Dimension::Length.default_unit());
+                    errors.extend(super::input::increasing(&[(&D10, d10.si()), (&D50, d50.si()), (&D90, d90.si())], micro));
+                } else {
                     errors.push(InputError {
                         field: D50.key,
                         label: D50.label,
@@ -363,6 +366,7 @@ impl SlurryInput {
             }
         }
         let flow = c.take(src.quantity(&FLOW));
+        let pump_max_flow = super::practical::read_pump_max_flow(src, &mut c);
         let (liquid, density, viscosity) = selection::read_with_properties(src, &mut c, &DENSITY, &VISCOSITY);
         let solid = solids::read(src, &mut c, &PARTICLE_DENSITY);
         let size = match c.take(src.choice(&SIZE_MODE)) {
@@ -392,8 +396,8 @@ impl SlurryInput {
             None => None,
         };
         let errors = c.into_errors();
-        let (Some(flow), Some(rho), Some(mu), Some(solid), Some(size), Some(phi), Some(basis), Some(w), Some(bp), Some(rating), Some(passes), Some(tubing), Some(ambient), true) =
-            (flow, density, viscosity, solid, size, sphericity, basis, loading_value, back_pressure, rating, passes, tubing, ambient, errors.is_empty())
+        let (Some(flow), Some(rho), Some(mu), Some(solid), Some(size), Some(phi), Some(basis), Some(w), Some(bp), Some(rating), Some(passes), Some(tubing), Some(ambient), Some(pump), true) =
+            (flow, density, viscosity, solid, size, sphericity, basis, loading_value, back_pressure, rating, passes, tubing, ambient, pump_max_flow, errors.is_empty())
         else {
             return Err(errors);
         };
@@ -413,6 +417,7 @@ impl SlurryInput {
             rating: PressureDifference::from_si(rating),
             passes,
             tubing,
+            pump_max_flow: VolumetricFlow::from_si(pump),
         }
         .validated()
     }

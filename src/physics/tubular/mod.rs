@@ -20,35 +20,33 @@ use super::units::{
     PressureDifference, Volume, VolumetricFlow, format_significant,
 };
 
-use super::input::field;
+use super::input::{field, lab};
 
-const NON_NEGATIVE: Allowed =
-    Allowed { low: 0.0, low_inclusive: true, high: None, high_inclusive: false, whole: false };
 
 /// Inner diameter of the tube.
-pub const INNER_DIAMETER: FieldSpec = field("inner_diameter", "Tube inner diameter", Dimension::Length, Allowed::POSITIVE, "Bore of the tubing (not the outer diameter).");
+pub const INNER_DIAMETER: FieldSpec = field("inner_diameter", "Tube inner diameter", Dimension::Length, lab::BORE, "Bore of the tubing (not the outer diameter).");
 /// Tube length.
-pub const LENGTH: FieldSpec = field("length", "Tube length", Dimension::Length, Allowed::POSITIVE, "Heated or irradiated length that counts as reactor.");
+pub const LENGTH: FieldSpec = field("length", "Tube length", Dimension::Length, lab::TUBE_LENGTH, "Heated or irradiated length that counts as reactor.");
 /// Total liquid flow through the tube.
-pub const FLOW: FieldSpec = field("flow", "Total flow", Dimension::VolumetricFlow, Allowed::POSITIVE, "Sum of all pumped streams entering the tube.");
+pub const FLOW: FieldSpec = field("flow", "Total flow", Dimension::VolumetricFlow, lab::LIQUID_FLOW, "Sum of all pumped streams entering the tube.");
 /// Concentration of the limiting substrate in the combined stream.
-pub const CONCENTRATION: FieldSpec = field("concentration", "Substrate concentration", Dimension::Concentration, Allowed::POSITIVE, "Limiting substrate, in the combined stream after mixing.");
+pub const CONCENTRATION: FieldSpec = field("concentration", "Substrate concentration", Dimension::Concentration, lab::CONCENTRATION, "Limiting substrate, in the combined stream after mixing.");
 /// Product yield.
 pub const YIELD: FieldSpec = field("yield", "Yield", Dimension::Fraction, Allowed::UNIT_FRACTION, "Expected or measured yield of product on the limiting substrate.");
 /// Molar mass of the product.
-pub const MOLAR_MASS: FieldSpec = field("molar_mass", "Product molar mass", Dimension::MolarMass, Allowed::POSITIVE, "Molar mass of the isolated product.");
+pub const MOLAR_MASS: FieldSpec = field("molar_mass", "Product molar mass", Dimension::MolarMass, lab::MOLAR_MASS, "Molar mass of the isolated product.");
 /// Liquid density.
-pub const DENSITY: FieldSpec = field("density", "Liquid density", Dimension::Density, Allowed::POSITIVE, "At the reaction temperature.");
+pub const DENSITY: FieldSpec = field("density", "Liquid density", Dimension::Density, lab::LIQUID_DENSITY, "At the reaction temperature.");
 /// Liquid viscosity.
-pub const VISCOSITY: FieldSpec = field("viscosity", "Liquid viscosity", Dimension::DynamicViscosity, Allowed::POSITIVE, "Dynamic viscosity at the reaction temperature.");
+pub const VISCOSITY: FieldSpec = field("viscosity", "Liquid viscosity", Dimension::DynamicViscosity, lab::VISCOSITY, "Dynamic viscosity at the reaction temperature.");
 /// Back-pressure regulator set point (gauge).
-pub const BACK_PRESSURE: FieldSpec = field("back_pressure", "Back-pressure (gauge)", Dimension::PressureDifference, NON_NEGATIVE, "Set point of the back-pressure regulator at the outlet, above atmosphere; 0 if none.");
+pub const BACK_PRESSURE: FieldSpec = field("back_pressure", "Back-pressure (gauge)", Dimension::PressureDifference, lab::BACK_PRESSURE, "Set point of the back-pressure regulator at the outlet, above atmosphere; 0 if none.");
 /// Rating of the weakest component (gauge).
-pub const RATING: FieldSpec = field("pressure_rating", "Lowest component rating (gauge)", Dimension::PressureDifference, Allowed::POSITIVE, "Lowest working-pressure rating among pump, tubing at temperature, fittings and sensors.");
+pub const RATING: FieldSpec = field("pressure_rating", "Lowest component rating (gauge)", Dimension::PressureDifference, lab::PRESSURE, "Lowest working-pressure rating among pump, tubing at temperature, fittings and sensors.");
 /// Reservoir volume of a recirculation loop.
-pub const RESERVOIR: FieldSpec = field("reservoir_volume", "Reservoir volume", Dimension::Volume, NON_NEGATIVE, "Liquid held in the reservoir outside the tube.");
+pub const RESERVOIR: FieldSpec = field("reservoir_volume", "Reservoir volume", Dimension::Volume, Allowed::non_negative_up_to(0.1), "Liquid held in the reservoir outside the tube.");
 /// Number of passes through the tube in a recirculation loop.
-pub const PASSES: FieldSpec = field("passes", "Number of passes", Dimension::Number, Allowed::COUNT, "How many times the whole batch is pumped through the tube.");
+pub const PASSES: FieldSpec = field("passes", "Number of passes", Dimension::Number, lab::PASSES, "How many times the whole batch is pumped through the tube.");
 
 /// Single pass or recirculation.
 pub const OPERATION: ChoiceSpec = ChoiceSpec {
@@ -270,5 +268,5 @@ pub fn evaluate(input: &TubularInput) -> Result<Report, NumericalError> {
         checks.push(check);
     }
     checks.extend(input.liquid.checks(Pressure::from_gauge(input.back_pressure, input.ambient)));
-    Ok(Report { figures, checks, plots: Vec::new() })
+    Ok(Report { figures, checks, plots: Vec::new(), advice: Vec::new() })
 }
