@@ -16,7 +16,7 @@ use clearbore::physics::packed_bed::sizing::SizingProblem;
 use clearbore::physics::packed_bed::{
     self as bed_calc, benyahia_oneill, ergun, kunii_levenspiel, mehta_hawley, wen_yu, PackedBedInput,
 };
-use clearbore::physics::report::{Report, Verdict};
+use clearbore::physics::report::{AdviceKind, Report, Verdict};
 use clearbore::physics::units::{
     Density, Duration, DynamicViscosity, Fraction, Length, PressureDifference, Velocity, VolumetricFlow,
 };
@@ -532,7 +532,10 @@ fn lab_case_figures_by_hand() {
     assert!(rel(fig("packed_mass"), 2500.0 * 0.6 * area * 0.05) < 1e-14);
     // Sizing: L = τ Q / (ε A).
     assert!(rel(fig("sized_bed_length"), 120.0 * (1e-6 / 60.0) / (0.4 * area)) < 1e-12);
-    assert!(r.figure("smallest_particle_diameter").is_some());
+    // The finest particles within the 5 bar limit are below the 10 µm packing floor, so every
+    // practical packing is said to fit instead of a size no one would pack.
+    assert!(r.figure("smallest_particle_diameter").is_none());
+    assert!(r.check("sizing").unwrap().reason.contains("Every practical packing from 10.0 µm up stays within the limit"));
     // Entered voidage is recommended; the Benyahia–O'Neill estimate is shown beside it.
     let v = r.figure("bed_voidage").unwrap();
     assert_eq!(v.estimates.len(), 2);
@@ -614,8 +617,11 @@ fn sizing_reports_an_unreachable_limit_without_failing() {
     let c = with_quantity(case(), "max_pressure_drop", 1e-6, "Pa");
     let r = run(&c);
     assert_eq!(verdict(&r, "sizing"), Verdict::Caution);
-    assert!(r.check("sizing").unwrap().reason.contains("No particle size up to"));
-    assert!(r.figure("smallest_particle_diameter").is_none());
+    let reason = &r.check("sizing").unwrap().reason;
+    assert!(reason.contains("No lab cartridge (2–50 mm ID, 10–300 mm of bed) meets the target") && reason.contains("No particle size keeps"), "{reason}");
+    assert!(r.figure("smallest_particle_diameter").is_none() && r.figure("narrowest_tube_diameter").is_none());
+    assert!(r.advice_for("sizing").any(|a| a.kind == AdviceKind::NoneExists));
+    assert!(r.advice_for("sizing").any(|a| a.kind == AdviceKind::Alternative));
 }
 
 #[test]
@@ -713,7 +719,11 @@ fn sizing_gives_the_narrowest_cartridge_for_these_particles() {
     // The pair keeps the 2 min residence time at ε = 0.4: L = τ Q / (ε π D²/4).
     let expected_l = 120.0 * (1e-6 / 60.0) / (0.4 * std::f64::consts::PI * d * d / 4.0);
     assert!((l / expected_l - 1.0).abs() < 1e-9);
-    assert!(r.check("sizing").unwrap().reason.contains("narrowest cartridge"));
+    // Within the lab range (2–50 mm ID, 10–300 mm of bed, common practice) and ten particle
+    // diameters wide.
+    assert!((2e-3..=50e-3).contains(&d) && (10e-3..=0.3 * (1.0 + 1e-9)).contains(&l), "{d} {l}");
+    assert!(d >= 10.0 * 100e-6);
+    assert!(r.check("sizing").unwrap().reason.contains("narrowest lab cartridge"));
 }
 
 #[test]

@@ -191,7 +191,9 @@ impl FieldSpec {
 
     /// Validates a number given in `unit`; returns the SI value.
     pub fn accept(&self, value: f64, unit: Unit) -> Result<f64, InputError> {
-        let given = || format!("{} {}", value, unit.symbol).trim_end().to_owned();
+        // Very large or small numbers as written in exponent form (1e30, not thirty-one digits).
+        let number = if value != 0.0 && !(1e-4..1e7).contains(&value.abs()) { format!("{value:e}") } else { value.to_string() };
+        let given = || format!("{number} {}", unit.symbol).trim_end().to_owned();
         if !value.is_finite() {
             return Err(self.error(given(), NumberError::NotFinite.to_string()));
         }

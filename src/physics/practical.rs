@@ -5,7 +5,8 @@
 
 use super::form::{Collector, FieldSource};
 use super::input::{FieldSpec, field, lab};
-use super::units::Dimension;
+use super::report::{Check, Verdict};
+use super::units::{Dimension, VolumetricFlow, format_significant};
 
 /// Default of the pump's largest flow, 10 mL/min: the top of a typical HPLC-type lab pump's
 /// range (common practice, no source). Used when a case file leaves the entry out.
@@ -47,4 +48,21 @@ pub const LAMINAR_REYNOLDS: f64 = 2000.0;
 /// default (an entry that is present but wrong is still an error).
 pub fn read_pump_max_flow(src: &dyn FieldSource, c: &mut Collector) -> Option<f64> {
     c.take(src.quantity_or(&PUMP_MAX_FLOW, DEFAULT_PUMP_MAX_FLOW))
+}
+
+/// Whether the pump can deliver the entered flow: key `pump_flow`, a problem above its largest flow.
+pub fn pump_flow_check(flow: VolumetricFlow, pump_max: VolumetricFlow) -> Check {
+    let ml = |q: VolumetricFlow| format_significant(q.ml_per_min(), 3);
+    let over = flow.si() > pump_max.si() * (1.0 + 1e-12);
+    Check {
+        key: "pump_flow",
+        topic: "Pump flow",
+        verdict: if over { Verdict::Problem } else { Verdict::Fine },
+        reason: if over {
+            format!("The flow of {} mL/min is more than the pump's largest flow, {} mL/min: this pump cannot run it.", ml(flow), ml(pump_max))
+        } else {
+            format!("The flow of {} mL/min is within the pump's largest flow, {} mL/min.", ml(flow), ml(pump_max))
+        },
+        caution: None,
+    }
 }

@@ -2,6 +2,7 @@
 //! fluidisation in up-flow, capacity of an active solid and optional sizing for a target
 //! residence time, with checks on the pressure budget, bed lifting, wall effect and plug flow.
 
+pub mod advice;
 pub mod benyahia_oneill;
 pub mod capacity;
 pub mod carman;
@@ -37,7 +38,7 @@ use super::form::{ChoiceSpec, Collector, FieldSource};
 use super::input::{Allowed, FieldSpec, InputError};
 use super::numeric::RootError;
 use super::solids::{self, SolidSelection};
-use super::report::{Check, Estimate, Figure, Finite, ModelInfo, NumericalError, PRESSURE_MARGIN, Report, Verdict, budget_verdict};
+use super::report::{AdviceKind, AdviceList, Check, Estimate, Figure, Finite, ModelInfo, NumericalError, PRESSURE_MARGIN, Report, Verdict, budget_verdict};
 use super::units::{
     Concentration, Density, Dimension, Duration, DynamicViscosity, Fraction, Length, PressureDifference, Velocity,
     VolumetricFlow, format_significant,
@@ -233,6 +234,8 @@ pub struct PackedBedInput {
     pub role: BedRole,
     /// Sizing target, if sizing was asked for.
     pub sizing: Option<SizingTarget>,
+    /// The pump's largest flow.
+    pub pump_max_flow: VolumetricFlow,
 }
 
 impl PackedBedInput {
@@ -289,6 +292,7 @@ impl PackedBedInput {
         };
         let solid = solids::read(src, &mut c, &PARTICLE_DENSITY);
         let flow = c.take(src.quantity(&FLOW));
+        let pump_max_flow = crate::physics::practical::read_pump_max_flow(src, &mut c);
         let direction = match c.take(src.choice(&FLOW_DIRECTION)) {
             Some(0) => Some(FlowDirection::Down),
             Some(_) => match c.take(src.choice(&CONFINEMENT)) {
@@ -346,10 +350,10 @@ impl PackedBedInput {
         };
         let (
             Some(dt), Some(l), Some(dv), Some(shape), Some(voidage), Some(solid), Some(q), Some(direction), Some(rho),
-            Some(mu), Some(bp), Some(rating), Some(mass), Some(role), Some(sizing), Some(ambient), Some(tubing),
+            Some(mu), Some(bp), Some(rating), Some(mass), Some(role), Some(sizing), Some(ambient), Some(tubing), Some(pump),
         ) = (
             tube_diameter, bed_length, particle_diameter, shape, voidage, solid, flow, direction, density,
-            viscosity, back_pressure, rating, solid_mass, role, sizing, ambient, tubing,
+            viscosity, back_pressure, rating, solid_mass, role, sizing, ambient, tubing, pump_max_flow,
         )
         else {
             return Err(c.into_errors());
@@ -376,6 +380,7 @@ impl PackedBedInput {
             solid_mass: Mass::from_si(mass),
             role,
             sizing,
+            pump_max_flow: VolumetricFlow::from_si(pump),
         };
         let mut input = input;
         if length_from_mass {
@@ -648,7 +653,15 @@ fn plug_flow_check(ratio: f64) -> Check {
     }
 }
 
-fn sizing_figures_and_check(input: &PackedBedInput, target: &SizingTarget, voidage: Fraction, figures: &mut Vec<Figure>) -> Result<Check, NumericalError> {
+fn sizing_figures_and_check(
+    input: &PackedBedInput,
+    target: &SizingTarget,
+    bed: &BedFlow,
+    voidage: Fraction,
+    figures: &mut Vec<Figure>,
+    advice: &mut AdviceList,
+) -> Result<Check, NumericalError> {
+    let key = "sizing";
     let problem = SizingProblem {
         tube_diameter: input.tube_diameter,
         flow: input.flow,
@@ -661,16 +674,8 @@ fn sizing_figures_and_check(input: &PackedBedInput, target: &SizingTarget, voida
         model: RECOMMENDED,
     };
     let length = geometry::length_for_residence_time(target.residence_time, input.flow, input.tube_diameter, voidage);
-    let bed = BedFlow {
-        particle_diameter: input.shape.effective_diameter(input.particle_diameter),
-        voidage,
-        superficial_velocity: geometry::superficial_velocity(input.flow, input.tube_diameter),
-        density: input.density,
-        viscosity: input.viscosity,
-        length,
-        tube_diameter: input.tube_diameter,
-    };
-    let dp = RECOMMENDED.pressure_drop(&bed).si();
+    let sized = BedFlow { length, ..*bed };
+    let dp = RECOMMENDED.pressure_drop(&sized).si();
     figures.push(Figure::definition("sized_bed_length", "Bed length for the target residence time", Dimension::Length, LENGTH_FOR_TIME_INFO, length.si())?);
     figures.push(Figure::single(
         "sized_bed_pressure_drop",
@@ -678,66 +683,89 @@ fn sizing_figures_and_check(input: &PackedBedInput, target: &SizingTarget, voida
         Dimension::PressureDifference,
         RECOMMENDED.info(),
         dp,
-        RECOMMENDED.warnings(&bed),
+        RECOMMENDED.warnings(&sized),
     )?);
-    let fits = dp <= target.max_pressure_drop.si();
-    let mm = |l: Length| format_significant(l.mm(), 3);
-    let head = format!(
+    let (l_low, l_high) = crate::physics::practical::CARTRIDGE_LENGTH;
+    let fits = dp <= target.max_pressure_drop.si() && (l_low..=l_high).contains(&length.si());
+    let mm = |l: f64| format_significant(l * 1e3, 3);
+    let mut text = format!(
         "For {} s between the particles this cartridge needs a {} mm bed; with the entered particles its pressure drop is {} bar ({} the {} bar limit).",
         format_significant(target.residence_time.si(), 3),
-        mm(length),
+        mm(length.si()),
         bar(dp),
-        if fits { "within" } else { "over" },
+        if dp <= target.max_pressure_drop.si() { "within" } else { "over" },
         bar(target.max_pressure_drop.si())
     );
-    let pair = match problem.narrowest_tube(input.particle_diameter) {
-        Ok((d, sized)) => {
-            figures.push(Figure::definition("narrowest_tube_diameter", "Narrowest cartridge ID within the limit (these particles)", Dimension::Length, NARROWEST_TUBE_INFO, d.si())?);
-            figures.push(Figure::definition("narrowest_tube_length", "Bed length in that cartridge", Dimension::Length, NARROWEST_TUBE_INFO, sized.length.si())?);
-            format!(" With these particles the narrowest cartridge within the limit is {} mm ID × {} mm.", mm(d), mm(sized.length))
+    if length.si() > l_high {
+        text.push_str(&format!(" That is longer than a lab cartridge ({} mm; common practice, no source).", mm(l_high)));
+    } else if length.si() < l_low {
+        text.push_str(&format!(" That is shorter than a lab cartridge ({} mm; common practice, no source).", mm(l_low)));
+    }
+    match advice::practical_cartridge(input, bed, target.residence_time.si(), target.max_pressure_drop.si()) {
+        Ok((d, l, p)) => {
+            figures.push(Figure::definition("narrowest_tube_diameter", "Narrowest lab cartridge ID for the target (these particles)", Dimension::Length, NARROWEST_TUBE_INFO, d)?);
+            figures.push(Figure::definition("narrowest_tube_length", "Bed length in that cartridge", Dimension::Length, NARROWEST_TUBE_INFO, l)?);
+            text.push_str(&format!(
+                " With these particles the narrowest lab cartridge that meets the target is {} mm ID × {} mm ({} bar).",
+                mm(d),
+                mm(l),
+                bar(p)
+            ));
+            if !fits {
+                advice.add(key, AdviceKind::Remedy, format!(
+                    "Use a cartridge of {} mm ID with a {} mm bed: {} s between the particles at {} bar, within the limit (lab range 2–50 mm ID, 10–300 mm; common practice, no source).",
+                    mm(d),
+                    mm(l),
+                    format_significant(target.residence_time.si(), 3),
+                    bar(p)
+                ));
+            }
         }
+        Err(why) => {
+            text.push_str(&format!(" No lab cartridge (2–50 mm ID, 10–300 mm of bed) meets the target with these particles: {why}."));
+            advice.add(key, AdviceKind::NoneExists, format!("No lab cartridge meets the target with these particles: {why}."));
+            advice.add(key, AdviceKind::Alternative, "Lower the flow, accept a shorter residence time, or use coarser particles; two cartridges in series share the length.");
+        }
+    }
+    match problem.smallest_particle_diameter() {
+        Ok(s) => match advice::finest_packing_note(s.particle_diameter.si()) {
+            Some(note) => {
+                text.push(' ');
+                text.push_str(&note);
+            }
+            None => {
+                let (_, sized_bed) = problem.bed(s.particle_diameter).ok_or(NumericalError::NotFinite { quantity: "sized bed" })?;
+                figures.push(Figure::single(
+                    "smallest_particle_diameter",
+                    "Smallest particles within the pressure-drop limit",
+                    Dimension::Length,
+                    RECOMMENDED.info(),
+                    s.particle_diameter.si(),
+                    RECOMMENDED.warnings(&sized_bed),
+                )?);
+                text.push_str(&format!(
+                    " Particles of {} µm or more keep this cartridge within the limit (bed {} mm, ε = {}; Ergun).",
+                    format_significant(s.particle_diameter.si() * 1e6, 3),
+                    mm(s.length.si()),
+                    format_significant(s.voidage.si(), 3)
+                ));
+                if s.particle_diameter.si() > input.particle_diameter.si() {
+                    advice.add(key, AdviceKind::Remedy, format!(
+                        "Use particles of {} µm or more in this cartridge (sieve off the fines): its {} mm bed then stays within the limit.",
+                        format_significant(s.particle_diameter.si() * 1e6, 3),
+                        mm(s.length.si())
+                    ));
+                }
+            }
+        },
         Err(RootError::NoBracket { f_low, .. }) if f_low < 0.0 => {
-            " With these particles even a 0.2 mm ID cartridge stays within the limit.".to_owned()
+            text.push(' ');
+            text.push_str(&advice::finest_packing_note(0.0).unwrap_or_default());
         }
-        Err(_) => " No cartridge from 0.2 to 200 mm ID keeps these particles within the limit.".to_owned(),
-    };
-    let head = head + &pair;
-    let (search_low, search_high) = problem.search_interval();
-    let tail = match problem.smallest_particle_diameter() {
-        Ok(sized) => {
-            let (_, sized_bed) = problem.bed(sized.particle_diameter).ok_or(NumericalError::NotFinite { quantity: "sized bed" })?;
-            figures.push(Figure::single(
-                "smallest_particle_diameter",
-                "Smallest particles within the pressure-drop limit",
-                Dimension::Length,
-                RECOMMENDED.info(),
-                sized.particle_diameter.si(),
-                RECOMMENDED.warnings(&sized_bed),
-            )?);
-            format!(
-                " The smallest particles that keep it within the limit are {} µm (bed {} mm, ε = {}; Ergun).",
-                format_significant(sized.particle_diameter.si() * 1e6, 3),
-                mm(sized.length),
-                format_significant(sized.voidage.si(), 3)
-            )
-        }
-        Err(RootError::NoBracket { f_low, .. }) if f_low < 0.0 => format!(
-            " Any particle size down to {} µm stays within the limit.",
-            format_significant(search_low.si() * 1e6, 3)
-        ),
-        Err(RootError::NoBracket { .. }) => format!(
-            " No particle size up to {} mm keeps the bed within the limit at this flow: use a wider cartridge, a lower flow or a shorter residence time.",
-            format_significant(search_high.mm(), 3)
-        ),
-        Err(e) => format!(" The smallest particle size could not be found ({e})."),
-    };
-    Ok(Check {
-        key: "sizing",
-        topic: "Sizing for the target residence time",
-        verdict: if fits { Verdict::Fine } else { Verdict::Caution },
-        reason: head + &tail,
-        caution: None,
-    })
+        Err(RootError::NoBracket { .. }) => text.push_str(" No particle size keeps this cartridge within the limit at this flow."),
+        Err(e) => text.push_str(&format!(" The smallest particle size could not be found ({e}).")),
+    }
+    Ok(Check { key, topic: "Sizing for the target residence time", verdict: if fits { Verdict::Fine } else { Verdict::Caution }, reason: text, caution: None })
 }
 
 /// Computes every figure and check for the packed cartridge.
@@ -820,9 +848,19 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
 
     figures.insert(0, input.solid.figure(false, input.density)?);
     figures.splice(0..0, input.liquid.figures()?);
+    let mut advice = AdviceList::default();
+    let pressure = pressure_check(inlet, &dp, input.back_pressure.si(), input.rating.si(), input.rating_part, &size_note(input));
+    if pressure.verdict != Verdict::Fine {
+        advice::pressure(input, &bed, input.rating.si(), &mut advice, pressure.key);
+    }
+    let lifting = lifting_check(input, u_s, umf.as_ref());
+    if lifting.verdict != Verdict::Fine {
+        advice::lifting(input, umf.as_ref().map(|f| f.spread().0), &mut advice, lifting.key);
+    }
     let mut checks = vec![
-        pressure_check(inlet, &dp, input.back_pressure.si(), input.rating.si(), input.rating_part, &size_note(input)),
-        lifting_check(input, u_s, umf.as_ref()),
+        pressure,
+        lifting,
+        crate::physics::practical::pump_flow_check(input.flow, input.pump_max_flow),
         wall_check(diameter_ratio, &bed),
         plug_flow_check(length_ratio),
         fill_check(input.solid_mass, full_mass, input.bed_length, eps),
@@ -831,10 +869,10 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
         checks.push(crate::physics::tubing::check(tubing, PressureDifference::from_si(inlet), &input.liquid.solvents()));
     }
     if let Some(target) = &input.sizing {
-        checks.push(sizing_figures_and_check(input, target, eps, &mut figures)?);
+        checks.push(sizing_figures_and_check(input, target, &bed, eps, &mut figures, &mut advice)?);
     }
     checks.extend(input.liquid.checks(crate::physics::units::Pressure::from_gauge(input.back_pressure, input.ambient)));
     let lifting_flow = umf.as_ref().map(|f| f.value.get() * crate::physics::pipe_flow::bore_area(input.tube_diameter));
     let plots = vec![plots::pressure_drop_vs_flow(input, &bed, lifting_flow)?];
-    Ok(Report { figures, checks, plots, advice: Vec::new() })
+    Ok(Report { figures, checks, plots, advice: advice.into_vec() })
 }
