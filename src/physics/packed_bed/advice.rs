@@ -95,13 +95,13 @@ pub fn pressure(input: &PackedBedInput, bed: &BedFlow, rating: f64, advice: &mut
     }
     // Wider cartridge within the lab range.
     let d_t = input.tube_diameter.si();
-    if d_t < CARTRIDGE_DIAMETER.1 {
-        if let Ok(ln_b) = brent(|x| log_residual(dp(variant(input, bed, None, None, Some(x.exp())))), d_t.ln(), CARTRIDGE_DIAMETER.1.ln(), Tolerance::TIGHT) {
-            advice.add(key, AdviceKind::Remedy, format!(
-                "Use a cartridge of {} mm ID or wider with the same bed length: the slower flow through it leaves a 20 % margin.",
-                mm(ln_b.exp())
-            ));
-        }
+    if d_t < CARTRIDGE_DIAMETER.1
+        && let Ok(ln_b) = brent(|x| log_residual(dp(variant(input, bed, None, None, Some(x.exp())))), d_t.ln(), CARTRIDGE_DIAMETER.1.ln(), Tolerance::TIGHT)
+    {
+        advice.add(key, AdviceKind::Remedy, format!(
+            "Use a cartridge of {} mm ID or wider with the same bed length: the slower flow through it leaves a 20 % margin.",
+            mm(ln_b.exp())
+        ));
     }
 }
 
