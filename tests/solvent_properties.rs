@@ -226,7 +226,7 @@ fn boiling_check_either_side_of_the_boiling_point() {
 
 #[test]
 fn back_pressure_keeps_hot_solvents_liquid() {
-    // p_sat values from thermo 0.6.1 (practice notes §2.2 table): methanol 1.81 bar at 80 °C,
+    // p_sat values from thermo 0.6.1: methanol 1.81 bar at 80 °C,
     // water 4.76 bar at 150 °C, DCM 3.47 bar at 80 °C.
     let cases =
         [(Solvent::Methanol, 80.0, 1.81), (Solvent::Water, 150.0, 4.76), (Solvent::Dichloromethane, 80.0, 3.47)];
