@@ -86,11 +86,17 @@ pub const fn oxygen(solvent: Solvent) -> Option<OxygenValue> {
         Solvent::Dichloromethane => PerBar { mm_per_bar: 10.0, source: "dichloromethane ≈ 10 mM/bar at 25 °C, from memory" },
         Solvent::Dmf => PerBar { mm_per_bar: 4.7, source: "DMF ≈ 4.8 mM under 1 atm O₂ at 25 °C (Sawyer's electrochemistry data), from memory" },
         Solvent::Nmp => PerBar { mm_per_bar: 4.7, source: "NMP: no value found; DMF's ≈ 4.7 mM/bar (from memory) taken for this amide" },
+        Solvent::Dmac => PerBar { mm_per_bar: 4.7, source: "DMAc: no value found; DMF's ≈ 4.7 mM/bar (from memory) taken for this amide" },
+        Solvent::Dioxane => PerBar { mm_per_bar: 8.0, source: "1,4-dioxane: no value found; the 8 mM/bar low end of the range for common organics (from memory) taken" },
+        Solvent::Mtbe => PerBar { mm_per_bar: 10.0, source: "MTBE: no value found; THF's ≈ 10 mM/bar (from memory) taken for this ether" },
+        Solvent::Cpme => PerBar { mm_per_bar: 10.0, source: "CPME: no value found; THF's ≈ 10 mM/bar (from memory) taken for this ether" },
+        Solvent::TertButanol => PerBar { mm_per_bar: 8.0, source: "tert-butanol: no value found; the 8 mM/bar low end of the range for common organics (from memory) taken" },
+        Solvent::AceticAcid => PerBar { mm_per_bar: 8.0, source: "acetic acid: no value found; the 8 mM/bar low end of the range for common organics (from memory) taken" },
     })
 }
 
 const fn is_analogy(solvent: Solvent) -> bool {
-    matches!(solvent, Solvent::MeThf | Solvent::Nmp)
+    matches!(solvent, Solvent::MeThf | Solvent::Nmp | Solvent::Dmac | Solvent::Dioxane | Solvent::Mtbe | Solvent::Cpme | Solvent::TertButanol | Solvent::AceticAcid)
 }
 
 /// The oxygen solubility of a built-in organic solvent at `t` (the 25 °C value, warned outside
