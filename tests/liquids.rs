@@ -142,3 +142,12 @@ fn the_atmospheric_pressure_sets_the_absolute_pressures() {
     let e = clearbore::case::CaseFile::from_json(&case.to_string()).unwrap().evaluate().unwrap_err().to_string();
     assert!(e.contains("ambient_pressure") && e.contains("1.2 bar"), "{e}");
 }
+
+#[test]
+fn a_frozen_solvent_is_a_problem_in_the_tubular_reactor() {
+    // tert-butanol melts at 25.2 °C (chemicals 1.5.2): at 20 °C the line freezes.
+    let r = common::demo_with(Calculator::TubularReactor, &[("liquid", json!("tert_butanol")), ("temperature", json!({"value": 20, "unit": "°C"}))]);
+    assert_eq!(r.check("freezing").unwrap().verdict, Verdict::Problem);
+    let warm = common::demo_with(Calculator::TubularReactor, &[("liquid", json!("tert_butanol")), ("temperature", json!({"value": 60, "unit": "°C"}))]);
+    assert!(warm.check("freezing").is_none());
+}

@@ -1,5 +1,5 @@
 //! Settling physics against reference values (`fluids`, via tests/reference/), the worked examples
-//! of the physics reference §4, force-balance and limit properties, and validity-edge warnings.
+//! of the `fluids` 1.3.1 docstrings, force-balance and limit properties, and validity-edge warnings.
 #![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
 
 use clearbore::physics::settling::drag::{SettlingModel, terminal_velocity_spread};
@@ -117,11 +117,11 @@ fn solved_terminal_velocities_match_fluids_over_the_lab_grid() {
     assert!(solved >= 100, "too few solved points compared: {solved}");
 }
 
-// ---------------------------------------------------------------- worked examples (physics.md §4)
+// ---------------------------------------------------------------- worked examples (fluids docstrings)
 
 #[test]
 fn example_5_seventy_micron_sand_in_water() {
-    // physics.md §4 #5 (fluids docstring of v_terminal, default method): 4.1425 mm/s, five digits
+    // fluids 1.3.1 docstring of v_terminal, default method: 4.1425 mm/s, five digits
     // printed, so ±5e-5 mm/s. fluids' default is Barati at this Re_t (≈ 0.29).
     let p = particle(70e-6, 2600.0, 1000.0, 1e-3, 1.0);
     let v = SettlingModel::Barati.terminal_velocity(&p).unwrap().si() * 1e3;
@@ -130,12 +130,12 @@ fn example_5_seventy_micron_sand_in_water() {
     let f = terminal_velocity_spread(&p, "v", "v").unwrap();
     let (lo, hi) = f.spread();
     assert!(lo * 1e3 <= v && v <= hi * 1e3);
-    assert!(rel(f.value.get() * 1e3, 4.1425) < 0.04, "Schiller–Naumann within the 3.6 % spread of physics.md §2.1");
+    assert!(rel(f.value.get() * 1e3, 4.1425) < 0.04, "Schiller–Naumann within its 3.6 % spread from Barati over the lab grid (derived)");
 }
 
 #[test]
 fn example_7_drag_at_re_200() {
-    // physics.md §4 #7: Barati 0.76822, Haider–Levenspiel 0.79596 (five digits printed: ±5e-6).
+    // fluids 1.3.1 drag docstrings: Barati 0.76822, Haider–Levenspiel 0.79596 (five digits printed: ±5e-6).
     assert!((barati::drag_coefficient(200.0) - 0.76822).abs() < 5e-6);
     assert!((haider_levenspiel_sphere::drag_coefficient(200.0) - 0.79596).abs() < 5e-6);
 }
@@ -207,11 +207,11 @@ fn non_spheres_settle_slower_and_the_two_haider_levenspiel_forms_agree() {
         let sphere = SettlingModel::HaiderLevenspiel.terminal_velocity(&Particle { sphericity: 1.0, ..p }).unwrap().si();
         assert!(general <= sphere * (1.0 + 1e-12), "{p:?}");
         let explicit = haider_levenspiel_explicit::terminal_velocity(&p).si();
-        // physics.md §2.2: within −12…+3 % at φ = 0.8 over a lab grid; φ = 0.6 is wider in the
+        // Derived: within −12…+3 % at φ = 0.8 over a lab grid; φ = 0.6 is wider in the
         // paper's own comparison, so ±20 % is the honest envelope for both here.
         assert!(rel(explicit, general) < 0.20, "{p:?}: explicit {explicit} vs general {general}");
     }
-    // At Re ≪ 1 and φ = 0.8 the two forms agree to 0.02 % (physics.md §2.2): checked to 0.1 %.
+    // At Re ≪ 1 and φ = 0.8 the two forms agree to 0.02 % (derived): checked to 0.1 %.
     let p = particle(5e-6, 2600.0, 1000.0, 1e-3, 0.8);
     let a = SettlingModel::HaiderLevenspiel.terminal_velocity(&p).unwrap().si();
     let b = haider_levenspiel_explicit::terminal_velocity(&p).si();

@@ -7,9 +7,14 @@
 //! density is the molar mass over that volume), checked value by value in tests/solids.rs against
 //! `tests/reference/solid_densities.json`, written by `tests/reference/solid_densities.py`.
 //! Porous supports take the skeletal density of the solid their walls are made of (vitreous
-//! silica for silica gel and diatomaceous earth, γ-alumina, graphite for activated carbon),
-//! which is the usual approximation (common practice, no source); a cross-linked polystyrene
-//! resin is 1 050 kg/m³ (from memory: polystyrene 1 040–1 065).
+//! silica for silica gel and diatomaceous earth, graphite for activated carbon), which is the
+//! usual approximation (common practice, no source). Alumina comes twice: at the CRC entry's
+//! density, which is corundum's (α-Al₂O₃, 3 970 kg/m³) though labelled γ, and at the γ form's own
+//! crystal density, derived from its defect-spinel cell: 32 O and 21⅓ Al per cubic cell of
+//! a = 7.90 Å (lattice constant from memory, powder-diffraction card JCPDS 10-0425), so
+//! ρ = (32/3) M(Al₂O₃) / (N_A a³) = 3 660 kg/m³; porous γ-alumina supports measure lower still,
+//! 3 000–3 600 (from memory). A cross-linked polystyrene resin is 1 050 kg/m³ (from memory:
+//! polystyrene 1 040–1 065).
 //!
 //! Porous particles. Their pores fill with liquid in the line, so what settles is a particle of
 //! envelope density ρ_env = ρ_s (1 − ε_p) carrying liquid of density ρ_l in its pores:
@@ -52,7 +57,8 @@ pub struct Solid {
 
 const CRC: &str = "CRC Handbook of Chemistry and Physics, inorganic solids, via chemicals 1.5.2";
 const CRC_SILICA: &str = "vitreous SiO₂, CRC Handbook via chemicals 1.5.2; silica gel walls taken as vitreous silica (common practice, no source)";
-const CRC_ALUMINA: &str = "CRC Handbook entry labelled γ-Al₂O₃, via chemicals 1.5.2; measured skeletal densities of porous γ-alumina run lower, 3 000–3 600 (from memory)";
+const CRC_ALUMINA: &str = "CRC Handbook entry labelled γ-Al₂O₃, via chemicals 1.5.2, equal to corundum's (α-Al₂O₃) density; the γ form is about 8 % lighter (see γ-alumina)";
+const GAMMA_ALUMINA: &str = "derived: crystal density of the γ-Al₂O₃ defect-spinel cell, (32/3) M(Al₂O₃)/(N_A a³) with a = 7.90 Å (lattice constant from memory, JCPDS 10-0425); porous supports measure 3 000–3 600 (from memory)";
 const CRC_CARBON: &str = "graphite, CRC Handbook via chemicals 1.5.2; activated-carbon walls taken as graphite (common practice, no source; measured 1 800–2 200, from memory)";
 const CRC_CELITE: &str = "vitreous SiO₂, CRC Handbook via chemicals 1.5.2; diatomite walls taken as amorphous silica (common practice, no source)";
 const MEMORY_RESIN: &str = "polystyrene 1 040–1 065 kg/m³ (from memory); cross-linking and functional groups raise it";
@@ -89,13 +95,14 @@ pub const SOLIDS: &[Solid] = &[
     Solid { key: "pd", name: "Palladium (black), Pd", cas: "7440-05-3", skeletal: 12000.0, texture: Texture::Dense, source: CRC },
     Solid { key: "silica_gel", name: "Silica gel (porous SiO₂)", cas: "60676-86-0", skeletal: 2196.0, texture: Texture::Porous, source: CRC_SILICA },
     Solid { key: "celite", name: "Diatomaceous earth (filter aid)", cas: "60676-86-0", skeletal: 2196.0, texture: Texture::Porous, source: CRC_CELITE },
-    Solid { key: "alumina", name: "γ-Alumina (porous Al₂O₃)", cas: "1344-28-1", skeletal: 3970.0, texture: Texture::Porous, source: CRC_ALUMINA },
+    Solid { key: "alumina", name: "Alumina at corundum's density (porous Al₂O₃, 3 970 kg/m³)", cas: "1344-28-1", skeletal: 3970.0, texture: Texture::Porous, source: CRC_ALUMINA },
+    Solid { key: "gamma_alumina", name: "γ-Alumina (porous, γ-form density 3 660 kg/m³)", cas: "1344-28-1", skeletal: 3660.0, texture: Texture::Porous, source: GAMMA_ALUMINA },
     Solid { key: "carbon", name: "Activated carbon, also Pd/C and Pt/C supports", cas: "7782-42-5", skeletal: 2200.0, texture: Texture::Porous, source: CRC_CARBON },
     Solid { key: "ps_resin", name: "Polystyrene resin (scavenger, supported reagent)", cas: "9003-53-6", skeletal: 1050.0, texture: Texture::Porous, source: MEMORY_RESIN },
 ];
 
 /// Number of options of [`SOLID`]: "entered" and one per table entry.
-const OPTION_COUNT: usize = 34;
+const OPTION_COUNT: usize = 35;
 
 const fn options() -> [(&'static str, &'static str); OPTION_COUNT] {
     let mut out = [("entered", "Other solid (enter its particle density)"); OPTION_COUNT];

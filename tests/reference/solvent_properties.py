@@ -2,14 +2,16 @@
 """Fits Clearbore's compact solvent-property models and writes the reference values the Rust
 tests check them against.
 
-Run by hand (not in CI):  pip install thermo chemicals scipy numpy
+Run by hand (not in CI):  pip install thermo==0.6.1 chemicals==1.5.2 fluids==1.3.1 scipy numpy
                           python tests/reference/solvent_properties.py > fit_report.txt
 It prints the package versions, the fit errors and the Rust table pasted into
 src/physics/fluids/solvent_data.rs, and writes tests/reference/solvent_properties.json.
 
 Reference values come from the general-purpose property library `thermo` (with `chemicals`),
 using the method thermo ranks highest for each property unless that method is only an
-estimate; then a named literature value is used instead and marked (NMP, 2-MeTHF).
+estimate; then a named literature value, a value from memory or an estimate checked on a
+measured analogue is used instead and marked (NMP, 2-MeTHF, DMAc, MTBE, CPME).
+Each fit starts at 20 °C or just above the melting point, whichever is higher (tert-butanol).
 """
 
 import json
@@ -44,6 +46,12 @@ SOLVENTS = [
     ("Dmf", "N,N-dimethylformamide (DMF)", "68-12-2"),
     ("Dmso", "dimethyl sulfoxide (DMSO)", "67-68-5"),
     ("Nmp", "N-methyl-2-pyrrolidone (NMP)", "872-50-4"),
+    ("Dioxane", "1,4-dioxane", "123-91-1"),
+    ("Dmac", "N,N-dimethylacetamide (DMAc)", "127-19-5"),
+    ("Mtbe", "methyl tert-butyl ether (MTBE)", "1634-04-4"),
+    ("Cpme", "cyclopentyl methyl ether (CPME)", "5614-37-9"),
+    ("TertButanol", "tert-butanol", "75-65-0"),
+    ("AceticAcid", "acetic acid", "64-19-7"),
 ]
 
 LIB = f"thermo {VERSIONS['thermo']} / chemicals {VERSIONS['chemicals']}"
@@ -60,6 +68,10 @@ METHOD_SOURCES = {
     "Fit 2023": "thermo author's 2023 fit to literature data (provenance weaker)",
     "BROCK_BIRD": "ESTIMATE: Brock & Bird corresponding-states method, AIChE J. 1 (1955) 174 (citation from memory)",
     "HTCOSTALD": "ESTIMATE: COSTALD, Hankinson & Thomson, AIChE J. 25 (1979) 653 (citation from memory)",
+    "VISWANATH_NATARAJAN_3": "Viswanath & Natarajan, Data Book on the Viscosity of Liquids (1989), three-term fit as collected in thermo",
+    "ANTOINE_WEBBOOK": "Antoine coefficients of the NIST Chemistry WebBook, as collected in chemicals",
+    "WAGNER_POLING": "Wagner equation, coefficients of Poling, Prausnitz & O'Connell, The Properties of Gases and Liquids, 5th ed. (2001)",
+    "AMBROSE_WALTON": "ESTIMATE: Ambrose & Walton corresponding-states vapour pressure, Pure Appl. Chem. 61 (1989) 1395 (citation from memory), from the critical constants and acentric factor in chemicals",
 }
 
 # Literature overrides where thermo has only estimation methods. Each names its source.
@@ -80,10 +92,27 @@ NMP_VISCOSITY_SOURCE = ("1.65 mPa·s at 25 °C: German Wikipedia 'N-Methyl-2-pyr
 METHF_DENSITY_ANCHOR = (293.15, 854.0)
 METHF_DENSITY_SOURCE = ("0.854 g/mL at 20 °C: English Wikipedia '2-Methyltetrahydrofuran'; relative "
                         "temperature slope from the COSTALD estimate (Hankinson & Thomson 1979) via thermo")
-METHF_VISCOSITY_ANCHOR = (298.15, 0.46e-3)  # FROM MEMORY
-METHF_VISCOSITY_SOURCE = ("0.46 mPa·s at 25 °C FROM MEMORY; temperature dependence ASSUMED equal to THF's "
-                          "fitted Andrade B (no source) - check against Giner et al., J. Chem. Eng. Data 48 "
-                          "(2003) 1296 (298.15 and 313.15 K)")
+# Ethers without a measured viscosity in thermo: the Letsou-Stiel corresponding-states estimate
+# (thermo), scaled at each temperature by the ratio THF measured (DIPPR) / THF Letsou-Stiel, THF
+# being the closest ether with measured data. Checked on MTBE, which has DIPPR data.
+def ether_viscosity(cas):
+    c, thf = props(cas), props("109-99-9")
+    return lambda T: (c.ViscosityLiquid.calculate(T, "LETSOU_STIEL") * thf.ViscosityLiquid.calculate(T, "DIPPR_PERRY_8E")
+                      / thf.ViscosityLiquid.calculate(T, "LETSOU_STIEL"))
+
+def ether_check():
+    f, mtbe = ether_viscosity("1634-04-4"), props("1634-04-4")
+    return max(abs(f(t) / mtbe.ViscosityLiquid.calculate(t, "DIPPR_PERRY_8E") - 1) for t in np.linspace(LOW, HIGH, 13))
+
+ETHER_VISCOSITY_SOURCE = ("ESTIMATE: Letsou & Stiel corresponding states, AIChE J. 19 (1973) 409 (citation from memory), "
+                          "via thermo 0.6.1, times THF's measured/estimated ratio at each temperature (THF: DIPPR, Perry's 8th ed.); "
+                          "the same estimate reproduces MTBE's DIPPR viscosity within {:.0f} %; no measured value could be read")
+DMAC_DENSITY_ANCHOR = (298.15, 937.2)  # FROM MEMORY (0.9372 g/mL at 25 °C)
+DMAC_DENSITY_SOURCE = ("0.9372 g/mL at 25 °C FROM MEMORY (handbook value, not checked); relative temperature slope from the "
+                       "COSTALD estimate (Hankinson & Thomson 1979) via thermo")
+CPME_DENSITY_ANCHOR = (293.15, 860.0)  # FROM MEMORY (0.86 g/mL at 20 °C, maker's data sheet)
+CPME_DENSITY_SOURCE = ("0.86 g/mL at 20 °C FROM MEMORY (maker's data sheet, not checked); relative temperature slope from the "
+                       "COSTALD estimate (Hankinson & Thomson 1979) via thermo")
 
 
 def props(cas):
@@ -135,8 +164,9 @@ def fit_viscosity(f, lo, hi):
         try:
             (va, vb, vc), _ = curve_fit(lambda t, A, B, C: A + B / (t - C), T, lnmu, p0=(a, b, 0.0), maxfev=20000)
             verr = float(np.max(np.abs(np.exp(va + vb / (T - vc) - lnmu) - 1.0)))
-            # Vogel only where its divergence temperature is physical and well below the range.
-            if 0.0 < vc < lo - 100.0 and verr < andrade_err:
+            # Vogel only where its divergence temperature is physical and well below the range
+            # (at least 50 K: tert-butanol's is 88 K below its 26 °C start).
+            if 0.0 < vc < lo - 50.0 and verr < andrade_err:
                 best = {"form": "vogel", "a": float(va), "b": float(vb), "c": float(vc), "max_rel_error": verr}
         except RuntimeError:
             pass
@@ -158,40 +188,56 @@ def ref_temps(lo, hi, wanted):
     return ts
 
 
+ANCHORED_DENSITY = {
+    "MeThf": (METHF_DENSITY_ANCHOR, METHF_DENSITY_SOURCE, "English Wikipedia, 20 °C"),
+    "Dmac": (DMAC_DENSITY_ANCHOR, DMAC_DENSITY_SOURCE, "FROM MEMORY, 25 °C"),
+    "Cpme": (CPME_DENSITY_ANCHOR, CPME_DENSITY_SOURCE, "FROM MEMORY, 20 °C"),
+}
+
+
+def fit_low(melting_point_k):
+    """20 °C, or the first whole degree Celsius at least 0.5 K above the melting point."""
+    return max(LOW, math.ceil(melting_point_k + 0.5 - 273.15) + 273.15)
+
+
 results = []
 for variant, label, cas in SOLVENTS:
     c = props(cas)
+    low_k = fit_low(c.Tm)
     entry = {"variant": variant, "name": label, "cas": cas, "molar_mass_g_per_mol": c.MW,
              "normal_boiling_point_k": c.Tb, "melting_point_k": c.Tm, "properties": {}}
     # density
     if variant == "Nmp":
-        f, lo, hi, method, src = nmp_density_wikipedia, LOW, HIGH, "literature", NMP_DENSITY_SOURCE
+        f, lo, hi, method, src = nmp_density_wikipedia, low_k, HIGH, "literature", NMP_DENSITY_SOURCE
         refs = [(t, f(t), "German Wikipedia quadratic") for t in (293.15, 313.15, 333.15, 353.15)]
         refs.append((293.15, 1034.0, "Danish EPA report (2003), 1.034 g/mL at 20 °C"))
-    elif variant == "MeThf":
+    elif variant in ANCHORED_DENSITY:
+        (t0, rho0), src, label = ANCHORED_DENSITY[variant]
         est = prop_fn(c, "VolumeLiquid", "HTCOSTALD")
-        scale = METHF_DENSITY_ANCHOR[1] / est(METHF_DENSITY_ANCHOR[0])
-        f, lo, hi, method, src = (lambda T: scale * est(T)), LOW, HIGH, "literature+HTCOSTALD slope", METHF_DENSITY_SOURCE
-        refs = [(METHF_DENSITY_ANCHOR[0], METHF_DENSITY_ANCHOR[1], "English Wikipedia, 20 °C")]
+        scale = rho0 / est(t0)
+        f, lo, hi, method = (lambda T, scale=scale, est=est: scale * est(T)), low_k, HIGH, "literature+HTCOSTALD slope"
+        refs = [(t0, rho0, label)]
     else:
         method = pick_method(c.VolumeLiquid)
         f = prop_fn(c, "VolumeLiquid", method)
-        lo, hi = clip_range(LOW, HIGH, c.VolumeLiquid.T_limits[method])
+        lo, hi = clip_range(low_k, HIGH, c.VolumeLiquid.T_limits[method])
         src = f"{LIB} method {method}: {METHOD_SOURCES.get(method, method)}"
         refs = None
     fit = fit_linear(f, lo, hi)
     if refs is None:
         refs = [(t, f(t), f"thermo {method}") for t in ref_temps(lo, hi, (293.15, 313.15, 333.15, 353.15))]
+    entry["fit_low_k"] = low_k
     entry["properties"]["density"] = {"unit": "kg/m3", "method": method, "source": src, "fit_low_k": lo,
                                       "fit_high_k": hi, "fit": fit,
                                       "reference": [{"t_k": t, "value": v, "from": s} for t, v, s in refs]}
     results.append(entry)
 
 # viscosity, surface tension, vapour pressure
-thf_b = None
+ETHER_CHECK = ether_check()
 for entry in results:
     variant, cas = entry["variant"], entry["cas"]
     c = props(cas)
+    low_k = entry["fit_low_k"]
     # viscosity
     if variant == "Nmp":
         T0, mu0 = NMP_VISCOSITY_ANCHOR
@@ -199,28 +245,28 @@ for entry in results:
                "max_rel_error": None}
         method, src, lo, hi = "literature+memory", NMP_VISCOSITY_SOURCE, LOW, HIGH
         refs = [(T0, mu0, "German Wikipedia, 25 °C")]
-    elif variant == "MeThf":
-        T0, mu0 = METHF_VISCOSITY_ANCHOR
-        b = THF_B
-        fit = {"form": "andrade", "a": math.log(mu0) - b / T0, "b": b, "c": 0.0, "max_rel_error": None}
-        method, src, lo, hi = "memory", METHF_VISCOSITY_SOURCE, LOW, HIGH
-        refs = [(T0, mu0, "FROM MEMORY, 25 °C")]
+    elif variant in ("MeThf", "Cpme"):
+        f, lo, hi = ether_viscosity(cas), low_k, HIGH
+        fit = fit_viscosity(f, lo, hi)
+        method, src = "LETSOU_STIEL x THF ratio", ETHER_VISCOSITY_SOURCE.format(100 * ETHER_CHECK)
+        refs = [(t, f(t), "Letsou-Stiel x THF ratio") for t in ref_temps(lo, hi, (293.15, 313.15, 333.15, 353.15))]
     else:
         method = pick_method(c.ViscosityLiquid)
         f = prop_fn(c, "ViscosityLiquid", method)
-        lo, hi = clip_range(LOW, HIGH, c.ViscosityLiquid.T_limits[method])
+        lo, hi = clip_range(low_k, HIGH, c.ViscosityLiquid.T_limits[method])
         fit = fit_viscosity(f, lo, hi)
         src = f"{LIB} method {method}: {METHOD_SOURCES.get(method, method)}"
         refs = [(t, f(t), f"thermo {method}") for t in ref_temps(lo, hi, (293.15, 313.15, 333.15, 353.15))]
-        if variant == "Thf":
-            THF_B = fit["b"]
     entry["properties"]["viscosity"] = {"unit": "Pa s", "method": method, "source": src, "fit_low_k": lo,
                                         "fit_high_k": hi, "fit": fit,
                                         "reference": [{"t_k": t, "value": v, "from": s} for t, v, s in refs]}
     # surface tension
-    method = "BROCK_BIRD" if variant == "MeThf" else pick_method(c.SurfaceTension)
+    method = "BROCK_BIRD" if variant in ("MeThf", "Mtbe") else pick_method(c.SurfaceTension)
     f = prop_fn(c, "SurfaceTension", method)
-    lo, hi = clip_range(LOW, HIGH, c.SurfaceTension.T_limits[method])
+    # tert-butanol: thermo's Fit 2023 stops falling above about 65 °C (it rises again by 80 °C,
+    # which no liquid does); only its falling part, to 60 °C, is used.
+    top = 333.15 if variant == "TertButanol" else HIGH
+    lo, hi = clip_range(low_k, top, c.SurfaceTension.T_limits[method])
     fit = fit_linear(f, lo, hi)
     src = f"{LIB} method {method}: {METHOD_SOURCES.get(method, method)}"
     if variant == "MeThf":
@@ -228,11 +274,36 @@ for entry in results:
         bb = [thf.SurfaceTension.calculate(t, "BROCK_BIRD") / thf.SurfaceTension.calculate(t, "Fit 2023") - 1
               for t in np.linspace(LOW, HIGH, 13)]
         src += f"; no measured value found - Brock-Bird checked on THF here: max deviation {100*max(map(abs, bb)):.1f} %"
+    if variant == "Mtbe":
+        bb = [c.SurfaceTension.calculate(t, "BROCK_BIRD") / c.SurfaceTension.calculate(t, "VDI_TABULAR") - 1
+              for t in np.linspace(332.15, HIGH, 7)]
+        src += (f"; thermo's VDI Heat Atlas table covers only 58-230 °C: Brock-Bird is within {100*max(map(abs, bb)):.1f} % "
+                "of it at 59-80 °C")
     refs = [(t, f(t), f"thermo {method}") for t in ref_temps(lo, hi, (293.15, 313.15, 333.15, 353.15))]
     entry["properties"]["surface_tension"] = {"unit": "N/m", "method": method, "source": src, "fit_low_k": lo,
                                               "fit_high_k": hi, "fit": fit,
                                               "reference": [{"t_k": t, "value": v, "from": s} for t, v, s in refs]}
     # vapour pressure
+    if variant == "Dmac":
+        # thermo's DMAc vapour pressures (NIST WebBook Antoine, 30-90 °C) extrapolate to 1.8 atm at
+        # the normal boiling point: an Antoine fit through both the WebBook values and (T_b, 1 atm).
+        wb = prop_fn(c, "VaporPressure", "ANTOINE_WEBBOOK")
+        T = list(np.linspace(303.15, 363.15, 31))
+        y = [math.log10(wb(t)) for t in T]
+        (A, B, C), _ = curve_fit(lambda t, A, B, C: A - B / (t + C), np.array(T + [c.Tb] * 10),
+                                 np.array(y + [math.log10(101325.0)] * 10), p0=(10.0, 1700.0, -40.0), maxfev=50000)
+        err = max(abs(10 ** (A - B / (t + C) - yy) - 1.0) for t, yy in zip(T, y))
+        tb_err = abs(10 ** (A - B / (c.Tb + C)) / 101325.0 - 1.0)
+        lo, hi = 303.15, round(c.Tb, 2)
+        src = (f"{LIB} method ANTOINE_WEBBOOK: {METHOD_SOURCES['ANTOINE_WEBBOOK']} (30-90 °C), refitted here together with "
+               f"the normal boiling point (chemicals); the two disagree: the fit is {100*err:.1f} % off the WebBook values "
+               f"and {100*tb_err:.1f} % off 1 atm at the boiling point")
+        refs = [(round(float(t), 2), wb(round(float(t), 2)), "thermo ANTOINE_WEBBOOK") for t in np.linspace(303.15, 363.15, 4)]
+        refs.append((c.Tb, 101325.0, "normal boiling point, chemicals"))
+        entry["properties"]["vapour_pressure"] = {"unit": "Pa", "method": "ANTOINE_WEBBOOK+Tb", "source": src, "fit_low_k": lo,
+                                                  "fit_high_k": hi, "fit": {"a": float(A), "b": float(B), "c": float(C), "max_rel_error": err},
+                                                  "reference": [{"t_k": t, "value": v, "from": s} for t, v, s in refs]}
+        continue
     method = c.VaporPressure.method
     f = prop_fn(c, "VaporPressure", method)
     # start 2 K above the melting point, on a whole degree Celsius
@@ -258,7 +329,7 @@ for e in results:
         shown = "  (no fit: literature/memory)" if err is None else f"{100*err:6.3f} %"
         print(f"{e['name']:38s} {p:16s} {d['method']:28s} {d['fit_low_k']-273.15:6.1f}..{d['fit_high_k']-273.15:6.1f} °C  "
               f"max fit err {shown}  form {d['fit'].get('form', '')}")
-        if err is not None:
+        if err is not None and d["method"] != "ANTOINE_WEBBOOK+Tb":
             worst[p] = max(worst.get(p, 0.0), err)
 print("# worst fit error per property (thermo-based fits):", {k: f"{100*v:.3f} %" for k, v in worst.items()})
 
@@ -294,6 +365,7 @@ for e in results:
         cas: "{e['cas']}",
         molar_mass_g_per_mol: {rs_f(round(e['molar_mass_g_per_mol'], 5))},
         normal_boiling_point_k: {rs_f(round(e['normal_boiling_point_k'], 3))},
+        melting_point_k: {rs_f(round(e['melting_point_k'], 3))},
         density: LinearFit {{
             at_293_k: {rs_f(d['fit']['at_293'])},
             slope_per_k: {rs_f(d['fit']['slope'])},

@@ -121,6 +121,9 @@ const PARTLY_MISCIBLE: &[(Solvent, Solvent)] = &[
     (Solvent::Heptane, Solvent::Dmf),
     (Solvent::Heptane, Solvent::Dmso),
     (Solvent::Heptane, Solvent::Nmp),
+    (Solvent::Water, Solvent::Mtbe),
+    (Solvent::Water, Solvent::Cpme),
+    (Solvent::Heptane, Solvent::Dmac),
 ];
 
 /// A binary mixture of two built-in solvents, by volume fraction.

@@ -27,6 +27,12 @@ pub const LIQUID_OPTIONS: &[(&str, &str)] = &[
     ("dmf", "DMF"),
     ("dmso", "DMSO"),
     ("nmp", "NMP"),
+    ("dioxane", "1,4-Dioxane"),
+    ("dmac", "DMAc (N,N-dimethylacetamide)"),
+    ("mtbe", "MTBE"),
+    ("cpme", "CPME (cyclopentyl methyl ether)"),
+    ("tert_butanol", "tert-Butanol (melts at 25 °C)"),
+    ("acetic_acid", "Acetic acid (melts at 17 °C)"),
     ("mixture", "Mixture of two of these solvents"),
     ("custom", "Other liquid (enter its properties)"),
 ];
@@ -149,6 +155,43 @@ pub fn read_with_properties(
     (liquid, properties.as_ref().map(|p| p.0.si()), properties.as_ref().map(|p| p.1.si()))
 }
 
+/// Within this many kelvin above the melting point a cold spot (an unheated fitting, a pump head,
+/// a winter lab) can freeze the line (common practice, no source).
+pub const FREEZING_MARGIN_K: f64 = 5.0;
+
+/// The freezing check of a built-in solvent at `t`: a problem at or below its melting point, a
+/// caution within [`FREEZING_MARGIN_K`] above it, `None` further above (most solvents, always).
+pub fn freezing_check(solvent: Solvent, t: Temperature) -> Option<Check> {
+    let melt = solvent.melting_point();
+    let above = t.kelvin() - melt.kelvin();
+    if above > FREEZING_MARGIN_K {
+        return None;
+    }
+    let frozen = solvent.freezes_at(t);
+    Some(Check {
+        key: "freezing",
+        topic: "Solvent freezing",
+        verdict: if frozen { Verdict::Problem } else { Verdict::Caution },
+        reason: format!(
+            "{} melts at {} °C (chemicals 1.5.2); at {} °C it is {}. Its property fits start above the melting point.",
+            capitalised(solvent.name()),
+            format_significant(melt.celsius(), 3),
+            format_significant(t.celsius(), 3),
+            if frozen {
+                "solid and blocks the line"
+            } else {
+                "liquid, but within 5 K of freezing: a cold fitting, pump head or tubing run can freeze it (margin: common practice, no source)"
+            }
+        ),
+        caution: Some(
+            "A solvent that freezes in a pressurised line blocks it: pressure builds behind the plug and can burst tubing or \
+             fittings. Keep the whole line, pump and reservoir above the melting point, or add a co-solvent, and fit a pump \
+             pressure limit."
+                .to_owned(),
+        ),
+    })
+}
+
 /// `name` with its first letter in upper case, to open a sentence.
 pub fn capitalised(name: &str) -> String {
     let mut chars = name.chars();
@@ -192,9 +235,14 @@ impl LiquidSelection {
     }
 
     /// The checks on the liquid itself at the outlet's absolute pressure: boiling (solvents and
-    /// mixtures) and, for a mixture, its mixing rules.
+    /// mixtures), freezing (a solvent near or below its melting point) and, for a mixture, its
+    /// mixing rules.
     pub fn checks(&self, outlet: Pressure) -> Vec<Check> {
-        self.boiling_check(outlet).into_iter().chain(self.mixture_check()).collect()
+        let freezing = match *self {
+            LiquidSelection::Solvent { solvent, temperature } => freezing_check(solvent, temperature),
+            _ => None,
+        };
+        self.boiling_check(outlet).into_iter().chain(freezing).chain(self.mixture_check()).collect()
     }
 
     /// For a mixture, the check that names its mixing rules and any reason they may be far off

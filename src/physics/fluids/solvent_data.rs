@@ -1,12 +1,12 @@
 //! Coefficient table of the built-in solvents, fitted by `tests/reference/solvent_properties.py`
 //! (thermo 0.6.1 / chemicals 1.5.2) and pasted here; each source string names where it came from.
 //! Where the range of density, viscosity or surface tension runs above the normal boiling point
-//! (DCM, acetone, methanol, THF, ethyl acetate, ethanol), the values there are for liquid kept
-//! under pressure.
+//! (DCM, acetone, methanol, THF, ethyl acetate, ethanol, MTBE, tert-butanol), the values there
+//! are for liquid kept under pressure. tert-butanol melts at 25.2 °C, so its fits start at 26 °C.
 
 use super::models::{
-    ANDRADE_FORMULA, ANTOINE_FORMULA, AntoineFit, DENSITY_FORMULA, LinearFit, SURFACE_TENSION_FORMULA, VOGEL_FORMULA,
-    ViscosityFit, ViscosityForm,
+    ANDRADE_FORMULA, ANTOINE_FORMULA, AntoineFit, DENSITY_FORMULA, LinearFit,
+    SURFACE_TENSION_FORMULA, VOGEL_FORMULA, ViscosityFit, ViscosityForm,
 };
 use crate::physics::report::{ModelInfo, ValidityBound};
 use crate::physics::units::Dimension;
@@ -22,6 +22,8 @@ pub struct SolventData {
     pub molar_mass_g_per_mol: f64,
     /// Normal boiling point at 101.325 kPa, K (chemicals 1.5.2).
     pub normal_boiling_point_k: f64,
+    /// Melting point, K (chemicals 1.5.2); the fits start at 20 °C or just above it.
+    pub melting_point_k: f64,
     /// Density, kg/m³.
     pub density: LinearFit,
     /// Dynamic viscosity, Pa·s.
@@ -33,13 +35,14 @@ pub struct SolventData {
 }
 
 /// The table, in the order of [`super::Solvent::ALL`].
-pub const SOLVENTS: [SolventData; 15] = [
+pub const SOLVENTS: [SolventData; 21] = [
     // water
     SolventData {
         name: "water",
         cas: "7732-18-5",
         molar_mass_g_per_mol: 18.01528,
         normal_boiling_point_k: 373.124,
+        melting_point_k: 273.15,
         density: LinearFit {
             at_293_k: 1000.3498164730788,
             slope_per_k: -0.4449504736646991,
@@ -56,7 +59,11 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         viscosity: ViscosityFit {
-            form: ViscosityForm::Vogel { a: -10.561897294578658, b: 552.7177221075439, c: 141.91364109659614 },
+            form: ViscosityForm::Vogel {
+                a: -10.561897294578658,
+                b: 552.7177221075439,
+                c: 141.91364109659614,
+            },
             info: ModelInfo {
                 name: "water viscosity, Vogel",
                 formula: VOGEL_FORMULA,
@@ -107,6 +114,7 @@ pub const SOLVENTS: [SolventData; 15] = [
         cas: "67-56-1",
         molar_mass_g_per_mol: 32.04186,
         normal_boiling_point_k: 337.632,
+        melting_point_k: 175.15,
         density: LinearFit {
             at_293_k: 791.4375272635662,
             slope_per_k: -0.971207212577999,
@@ -123,7 +131,10 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         viscosity: ViscosityFit {
-            form: ViscosityForm::Andrade { a: -11.900495244100712, b: 1307.2763938445244 },
+            form: ViscosityForm::Andrade {
+                a: -11.90049524410071,
+                b: 1307.2763938445237,
+            },
             info: ModelInfo {
                 name: "methanol viscosity, Andrade",
                 formula: ANDRADE_FORMULA,
@@ -174,6 +185,7 @@ pub const SOLVENTS: [SolventData; 15] = [
         cas: "64-17-5",
         molar_mass_g_per_mol: 46.06844,
         normal_boiling_point_k: 351.57,
+        melting_point_k: 159.05,
         density: LinearFit {
             at_293_k: 790.0156579269051,
             slope_per_k: -0.906307996911582,
@@ -190,7 +202,10 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         viscosity: ViscosityFit {
-            form: ViscosityForm::Andrade { a: -12.734544799719222, b: 1761.6677276600453 },
+            form: ViscosityForm::Andrade {
+                a: -12.734544799719222,
+                b: 1761.6677276600453,
+            },
             info: ModelInfo {
                 name: "ethanol viscosity, Andrade",
                 formula: ANDRADE_FORMULA,
@@ -241,6 +256,7 @@ pub const SOLVENTS: [SolventData; 15] = [
         cas: "67-63-0",
         molar_mass_g_per_mol: 60.09502,
         normal_boiling_point_k: 355.36,
+        melting_point_k: 183.65,
         density: LinearFit {
             at_293_k: 787.5062865389577,
             slope_per_k: -1.0470187406847553,
@@ -257,7 +273,10 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         viscosity: ViscosityFit {
-            form: ViscosityForm::Andrade { a: -15.082378406412511, b: 2651.4765858940646 },
+            form: ViscosityForm::Andrade {
+                a: -15.082378406412511,
+                b: 2651.4765858940646,
+            },
             info: ModelInfo {
                 name: "2-propanol viscosity, Andrade",
                 formula: ANDRADE_FORMULA,
@@ -308,6 +327,7 @@ pub const SOLVENTS: [SolventData; 15] = [
         cas: "75-05-8",
         molar_mass_g_per_mol: 41.05192,
         normal_boiling_point_k: 354.75,
+        melting_point_k: 226.65,
         density: LinearFit {
             at_293_k: 782.5126185052958,
             slope_per_k: -1.1127428338553953,
@@ -324,7 +344,10 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         viscosity: ViscosityFit {
-            form: ViscosityForm::Andrade { a: -10.905999999999999, b: 872.0199999999992 },
+            form: ViscosityForm::Andrade {
+                a: -10.905999999999997,
+                b: 872.0199999999988,
+            },
             info: ModelInfo {
                 name: "acetonitrile viscosity, Andrade",
                 formula: ANDRADE_FORMULA,
@@ -375,9 +398,10 @@ pub const SOLVENTS: [SolventData; 15] = [
         cas: "67-64-1",
         molar_mass_g_per_mol: 58.07914,
         normal_boiling_point_k: 329.225,
+        melting_point_k: 178.35,
         density: LinearFit {
-            at_293_k: 790.9412012247986,
-            slope_per_k: -1.1731945587399724,
+            at_293_k: 790.9412012247988,
+            slope_per_k: -1.173194558739974,
             info: ModelInfo {
                 name: "acetone density, linear in T",
                 formula: DENSITY_FORMULA,
@@ -391,7 +415,10 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         viscosity: ViscosityFit {
-            form: ViscosityForm::Andrade { a: -11.029447842045615, b: 886.0790342770106 },
+            form: ViscosityForm::Andrade {
+                a: -11.029447842045617,
+                b: 886.0790342770115,
+            },
             info: ModelInfo {
                 name: "acetone viscosity, Andrade",
                 formula: ANDRADE_FORMULA,
@@ -442,6 +469,7 @@ pub const SOLVENTS: [SolventData; 15] = [
         cas: "109-99-9",
         molar_mass_g_per_mol: 72.10572,
         normal_boiling_point_k: 339.15,
+        melting_point_k: 165.15,
         density: LinearFit {
             at_293_k: 885.884369452151,
             slope_per_k: -1.1158582345131902,
@@ -458,7 +486,10 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         viscosity: ViscosityFit {
-            form: ViscosityForm::Andrade { a: -10.789331185517513, b: 923.152424958069 },
+            form: ViscosityForm::Andrade {
+                a: -10.789331185517513,
+                b: 923.152424958069,
+            },
             info: ModelInfo {
                 name: "tetrahydrofuran (THF) viscosity, Andrade",
                 formula: ANDRADE_FORMULA,
@@ -509,6 +540,7 @@ pub const SOLVENTS: [SolventData; 15] = [
         cas: "96-47-9",
         molar_mass_g_per_mol: 86.1323,
         normal_boiling_point_k: 353.15,
+        melting_point_k: 137.15,
         density: LinearFit {
             at_293_k: 854.5511850727669,
             slope_per_k: -1.1141254862042036,
@@ -525,11 +557,14 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         viscosity: ViscosityFit {
-            form: ViscosityForm::Andrade { a: -10.780552473505683, b: 923.152424958069 },
+            form: ViscosityForm::Andrade {
+                a: -10.930075719908128,
+                b: 943.014239308731,
+            },
             info: ModelInfo {
                 name: "2-methyltetrahydrofuran (2-MeTHF) viscosity, Andrade",
                 formula: ANDRADE_FORMULA,
-                source: "0.46 mPa·s at 25 °C FROM MEMORY; temperature dependence ASSUMED equal to THF's fitted Andrade B (no source) - check against Giner et al., J. Chem. Eng. Data 48 (2003) 1296 (298.15 and 313.15 K)",
+                source: "ESTIMATE: Letsou & Stiel corresponding states, AIChE J. 19 (1973) 409 (citation from memory), via thermo 0.6.1, times THF's measured/estimated ratio at each temperature (THF: DIPPR, Perry's 8th ed.); the same estimate reproduces MTBE's DIPPR viscosity within 7 %; no measured value could be read",
                 validity: &[ValidityBound {
                     quantity: "temperature",
                     dimension: Dimension::Temperature,
@@ -576,6 +611,7 @@ pub const SOLVENTS: [SolventData; 15] = [
         cas: "141-78-6",
         molar_mass_g_per_mol: 88.10512,
         normal_boiling_point_k: 350.25,
+        melting_point_k: 189.15,
         density: LinearFit {
             at_293_k: 900.2558681830286,
             slope_per_k: -1.243763870061867,
@@ -592,7 +628,10 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         viscosity: ViscosityFit {
-            form: ViscosityForm::Andrade { a: -11.313838828986917, b: 1063.8930627044776 },
+            form: ViscosityForm::Andrade {
+                a: -11.313838828986917,
+                b: 1063.8930627044776,
+            },
             info: ModelInfo {
                 name: "ethyl acetate viscosity, Andrade",
                 formula: ANDRADE_FORMULA,
@@ -643,6 +682,7 @@ pub const SOLVENTS: [SolventData; 15] = [
         cas: "108-88-3",
         molar_mass_g_per_mol: 92.13842,
         normal_boiling_point_k: 383.746,
+        melting_point_k: 179.2,
         density: LinearFit {
             at_293_k: 867.113803869635,
             slope_per_k: -0.9495739232875924,
@@ -659,7 +699,10 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         viscosity: ViscosityFit {
-            form: ViscosityForm::Andrade { a: -11.063356974028329, b: 1061.8994220516722 },
+            form: ViscosityForm::Andrade {
+                a: -11.063356974028329,
+                b: 1061.8994220516722,
+            },
             info: ModelInfo {
                 name: "toluene viscosity, Andrade",
                 formula: ANDRADE_FORMULA,
@@ -673,8 +716,8 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         surface_tension: LinearFit {
-            at_293_k: 0.02848370260733593,
-            slope_per_k: -0.00011953912985600368,
+            at_293_k: 0.028483702607335935,
+            slope_per_k: -0.00011953912985600389,
             info: ModelInfo {
                 name: "toluene surface tension, linear in T",
                 formula: SURFACE_TENSION_FORMULA,
@@ -710,6 +753,7 @@ pub const SOLVENTS: [SolventData; 15] = [
         cas: "142-82-5",
         molar_mass_g_per_mol: 100.20194,
         normal_boiling_point_k: 371.55,
+        melting_point_k: 182.15,
         density: LinearFit {
             at_293_k: 684.2145645854654,
             slope_per_k: -0.8798342322787726,
@@ -726,7 +770,10 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         viscosity: ViscosityFit {
-            form: ViscosityForm::Andrade { a: -11.225666598938732, b: 1007.5660670117875 },
+            form: ViscosityForm::Andrade {
+                a: -11.225666598938732,
+                b: 1007.5660670117875,
+            },
             info: ModelInfo {
                 name: "n-heptane viscosity, Andrade",
                 formula: ANDRADE_FORMULA,
@@ -740,8 +787,8 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         surface_tension: LinearFit {
-            at_293_k: 0.02021079894155246,
-            slope_per_k: -9.716318282231473e-05,
+            at_293_k: 0.020210798941552456,
+            slope_per_k: -9.716318282231464e-05,
             info: ModelInfo {
                 name: "n-heptane surface tension, linear in T",
                 formula: SURFACE_TENSION_FORMULA,
@@ -777,6 +824,7 @@ pub const SOLVENTS: [SolventData; 15] = [
         cas: "75-09-2",
         molar_mass_g_per_mol: 84.93258,
         normal_boiling_point_k: 312.95,
+        melting_point_k: 178.1,
         density: LinearFit {
             at_293_k: 1328.9776309311878,
             slope_per_k: -2.0065664225893673,
@@ -793,7 +841,10 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         viscosity: ViscosityFit {
-            form: ViscosityForm::Andrade { a: -10.541951979607564, b: 819.9720750369307 },
+            form: ViscosityForm::Andrade {
+                a: -10.541951979607564,
+                b: 819.9720750369307,
+            },
             info: ModelInfo {
                 name: "dichloromethane (DCM) viscosity, Andrade",
                 formula: ANDRADE_FORMULA,
@@ -844,6 +895,7 @@ pub const SOLVENTS: [SolventData; 15] = [
         cas: "68-12-2",
         molar_mass_g_per_mol: 73.09378,
         normal_boiling_point_k: 425.95,
+        melting_point_k: 212.15,
         density: LinearFit {
             at_293_k: 949.3922392651108,
             slope_per_k: -0.9472681857527581,
@@ -860,7 +912,10 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         viscosity: ViscosityFit {
-            form: ViscosityForm::Andrade { a: -10.6394201429016, b: 1050.9629873649667 },
+            form: ViscosityForm::Andrade {
+                a: -10.6394201429016,
+                b: 1050.9629873649667,
+            },
             info: ModelInfo {
                 name: "N,N-dimethylformamide (DMF) viscosity, Andrade",
                 formula: ANDRADE_FORMULA,
@@ -911,6 +966,7 @@ pub const SOLVENTS: [SolventData; 15] = [
         cas: "67-68-5",
         molar_mass_g_per_mol: 78.13344,
         normal_boiling_point_k: 465.05,
+        melting_point_k: 291.55,
         density: LinearFit {
             at_293_k: 1101.2724921047907,
             slope_per_k: -0.9931521257670528,
@@ -927,7 +983,11 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         viscosity: ViscosityFit {
-            form: ViscosityForm::Vogel { a: -10.271670485426279, b: 851.3655035308968, c: 87.84913266031649 },
+            form: ViscosityForm::Vogel {
+                a: -10.271670469187107,
+                b: 851.3654959433676,
+                c: 87.84913369862686,
+            },
             info: ModelInfo {
                 name: "dimethyl sulfoxide (DMSO) viscosity, Vogel",
                 formula: VOGEL_FORMULA,
@@ -978,6 +1038,7 @@ pub const SOLVENTS: [SolventData; 15] = [
         cas: "872-50-4",
         molar_mass_g_per_mol: 99.13106,
         normal_boiling_point_k: 477.35,
+        melting_point_k: 249.15,
         density: LinearFit {
             at_293_k: 1032.183617927525,
             slope_per_k: -0.8862069729999982,
@@ -994,7 +1055,10 @@ pub const SOLVENTS: [SolventData; 15] = [
             },
         },
         viscosity: ViscosityFit {
-            form: ViscosityForm::Andrade { a: -10.700121027460726, b: 1280.0 },
+            form: ViscosityForm::Andrade {
+                a: -10.700121027460726,
+                b: 1280.0,
+            },
             info: ModelInfo {
                 name: "N-methyl-2-pyrrolidone (NMP) viscosity, Andrade",
                 formula: ANDRADE_FORMULA,
@@ -1034,6 +1098,434 @@ pub const SOLVENTS: [SolventData; 15] = [
                     quantity: "temperature",
                     dimension: Dimension::Temperature,
                     low: Some(336.0),
+                    high: Some(473.15),
+                }],
+            },
+        },
+    },
+    // 1,4-dioxane
+    SolventData {
+        name: "1,4-dioxane",
+        cas: "123-91-1",
+        molar_mass_g_per_mol: 88.10512,
+        normal_boiling_point_k: 374.35,
+        melting_point_k: 284.95,
+        density: LinearFit {
+            at_293_k: 1034.5159813716493,
+            slope_per_k: -1.1493055412904511,
+            info: ModelInfo {
+                name: "1,4-dioxane density, linear in T",
+                formula: DENSITY_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method DIPPR_PERRY_8E: Perry's Chemical Engineers' Handbook, 8th ed. (2008), DIPPR equations",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(293.15),
+                    high: Some(353.15),
+                }],
+            },
+        },
+        viscosity: ViscosityFit {
+            form: ViscosityForm::Vogel {
+                a: -9.964752133465568,
+                b: 588.6405507590324,
+                c: 115.93692631095173,
+            },
+            info: ModelInfo {
+                name: "1,4-dioxane viscosity, Vogel",
+                formula: VOGEL_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method DIPPR_PERRY_8E: Perry's Chemical Engineers' Handbook, 8th ed. (2008), DIPPR equations",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(293.15),
+                    high: Some(353.15),
+                }],
+            },
+        },
+        surface_tension: LinearFit {
+            at_293_k: 0.033549839713662065,
+            slope_per_k: -0.00014074995209524608,
+            info: ModelInfo {
+                name: "1,4-dioxane surface tension, linear in T",
+                formula: SURFACE_TENSION_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method Fit 2023: thermo author's 2023 fit to literature data (provenance weaker)",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(293.15),
+                    high: Some(353.15),
+                }],
+            },
+        },
+        vapour_pressure: AntoineFit {
+            a: 9.420036172790153,
+            b: 1483.3766638146844,
+            c: -38.51550118077603,
+            info: ModelInfo {
+                name: "1,4-dioxane vapour pressure, Antoine",
+                formula: ANTOINE_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method DIPPR_PERRY_8E: Perry's Chemical Engineers' Handbook, 8th ed. (2008), DIPPR equations",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(287.15),
+                    high: Some(473.15),
+                }],
+            },
+        },
+    },
+    // N,N-dimethylacetamide (DMAc)
+    SolventData {
+        name: "N,N-dimethylacetamide (DMAc)",
+        cas: "127-19-5",
+        molar_mass_g_per_mol: 87.12036,
+        normal_boiling_point_k: 439.05,
+        melting_point_k: 253.15,
+        density: LinearFit {
+            at_293_k: 941.9451388047601,
+            slope_per_k: -0.9211827358838889,
+            info: ModelInfo {
+                name: "N,N-dimethylacetamide (DMAc) density, linear in T",
+                formula: DENSITY_FORMULA,
+                source: "0.9372 g/mL at 25 °C FROM MEMORY (handbook value, not checked); relative temperature slope from the COSTALD estimate (Hankinson & Thomson 1979) via thermo",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(293.15),
+                    high: Some(353.15),
+                }],
+            },
+        },
+        viscosity: ViscosityFit {
+            form: ViscosityForm::Andrade {
+                a: -11.6787922142546,
+                b: 1621.9161258966717,
+            },
+            info: ModelInfo {
+                name: "N,N-dimethylacetamide (DMAc) viscosity, Andrade",
+                formula: ANDRADE_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method VISWANATH_NATARAJAN_3: Viswanath & Natarajan, Data Book on the Viscosity of Liquids (1989), three-term fit as collected in thermo",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(293.15),
+                    high: Some(353.15),
+                }],
+            },
+        },
+        surface_tension: LinearFit {
+            at_293_k: 0.03505450913016062,
+            slope_per_k: -0.00016031224899603388,
+            info: ModelInfo {
+                name: "N,N-dimethylacetamide (DMAc) surface tension, linear in T",
+                formula: SURFACE_TENSION_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method Fit 2023: thermo author's 2023 fit to literature data (provenance weaker)",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(298.15),
+                    high: Some(353.15),
+                }],
+            },
+        },
+        vapour_pressure: AntoineFit {
+            a: 7.884548324858215,
+            b: 911.2170911704663,
+            c: -122.2896827566225,
+            info: ModelInfo {
+                name: "N,N-dimethylacetamide (DMAc) vapour pressure, Antoine",
+                formula: ANTOINE_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method ANTOINE_WEBBOOK: Antoine coefficients of the NIST Chemistry WebBook, as collected in chemicals (30-90 °C), refitted here together with the normal boiling point (chemicals); the two disagree: the fit is 6.2 % off the WebBook values and 0.5 % off 1 atm at the boiling point",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(303.15),
+                    high: Some(439.05),
+                }],
+            },
+        },
+    },
+    // methyl tert-butyl ether (MTBE)
+    SolventData {
+        name: "methyl tert-butyl ether (MTBE)",
+        cas: "1634-04-4",
+        molar_mass_g_per_mol: 88.14818,
+        normal_boiling_point_k: 328.25,
+        melting_point_k: 164.15,
+        density: LinearFit {
+            at_293_k: 741.5934527341377,
+            slope_per_k: -1.0752450237090252,
+            info: ModelInfo {
+                name: "methyl tert-butyl ether (MTBE) density, linear in T",
+                formula: DENSITY_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method DIPPR_PERRY_8E: Perry's Chemical Engineers' Handbook, 8th ed. (2008), DIPPR equations",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(293.15),
+                    high: Some(353.15),
+                }],
+            },
+        },
+        viscosity: ViscosityFit {
+            form: ViscosityForm::Andrade {
+                a: -11.351745795169174,
+                b: 1001.1075377065303,
+            },
+            info: ModelInfo {
+                name: "methyl tert-butyl ether (MTBE) viscosity, Andrade",
+                formula: ANDRADE_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method DIPPR_PERRY_8E: Perry's Chemical Engineers' Handbook, 8th ed. (2008), DIPPR equations",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(293.15),
+                    high: Some(353.15),
+                }],
+            },
+        },
+        surface_tension: LinearFit {
+            at_293_k: 0.018523312723337043,
+            slope_per_k: -0.00010732098595639798,
+            info: ModelInfo {
+                name: "methyl tert-butyl ether (MTBE) surface tension, linear in T",
+                formula: SURFACE_TENSION_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method BROCK_BIRD: ESTIMATE: Brock & Bird corresponding-states method, AIChE J. 1 (1955) 174 (citation from memory); thermo's VDI Heat Atlas table covers only 58-230 °C: Brock-Bird is within 2.3 % of it at 59-80 °C",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(293.15),
+                    high: Some(353.15),
+                }],
+            },
+        },
+        vapour_pressure: AntoineFit {
+            a: 8.961982533706834,
+            b: 1094.4716792545066,
+            c: -51.58102921894798,
+            info: ModelInfo {
+                name: "methyl tert-butyl ether (MTBE) vapour pressure, Antoine",
+                formula: ANTOINE_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method DIPPR_PERRY_8E: Perry's Chemical Engineers' Handbook, 8th ed. (2008), DIPPR equations",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(273.15),
+                    high: Some(473.15),
+                }],
+            },
+        },
+    },
+    // cyclopentyl methyl ether (CPME)
+    SolventData {
+        name: "cyclopentyl methyl ether (CPME)",
+        cas: "5614-37-9",
+        molar_mass_g_per_mol: 100.15888,
+        normal_boiling_point_k: 378.59,
+        melting_point_k: 133.15,
+        density: LinearFit {
+            at_293_k: 860.4061997613765,
+            slope_per_k: -1.0197848991261782,
+            info: ModelInfo {
+                name: "cyclopentyl methyl ether (CPME) density, linear in T",
+                formula: DENSITY_FORMULA,
+                source: "0.86 g/mL at 20 °C FROM MEMORY (maker's data sheet, not checked); relative temperature slope from the COSTALD estimate (Hankinson & Thomson 1979) via thermo",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(293.15),
+                    high: Some(353.15),
+                }],
+            },
+        },
+        viscosity: ViscosityFit {
+            form: ViscosityForm::Andrade {
+                a: -10.544057725982329,
+                b: 897.7597171490863,
+            },
+            info: ModelInfo {
+                name: "cyclopentyl methyl ether (CPME) viscosity, Andrade",
+                formula: ANDRADE_FORMULA,
+                source: "ESTIMATE: Letsou & Stiel corresponding states, AIChE J. 19 (1973) 409 (citation from memory), via thermo 0.6.1, times THF's measured/estimated ratio at each temperature (THF: DIPPR, Perry's 8th ed.); the same estimate reproduces MTBE's DIPPR viscosity within 7 %; no measured value could be read",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(293.15),
+                    high: Some(353.15),
+                }],
+            },
+        },
+        surface_tension: LinearFit {
+            at_293_k: 0.02643086217375155,
+            slope_per_k: -0.00011345662690465666,
+            info: ModelInfo {
+                name: "cyclopentyl methyl ether (CPME) surface tension, linear in T",
+                formula: SURFACE_TENSION_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method Fit 2023: thermo author's 2023 fit to literature data (provenance weaker)",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(293.15),
+                    high: Some(333.25),
+                }],
+            },
+        },
+        vapour_pressure: AntoineFit {
+            a: 9.177258413256911,
+            b: 1352.0147055372431,
+            c: -55.196656446627564,
+            info: ModelInfo {
+                name: "cyclopentyl methyl ether (CPME) vapour pressure, Antoine",
+                formula: ANTOINE_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method AMBROSE_WALTON: ESTIMATE: Ambrose & Walton corresponding-states vapour pressure, Pure Appl. Chem. 61 (1989) 1395 (citation from memory), from the critical constants and acentric factor in chemicals",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(273.15),
+                    high: Some(473.15),
+                }],
+            },
+        },
+    },
+    // tert-butanol
+    SolventData {
+        name: "tert-butanol",
+        cas: "75-65-0",
+        molar_mass_g_per_mol: 74.1216,
+        normal_boiling_point_k: 355.45,
+        melting_point_k: 298.35,
+        density: LinearFit {
+            at_293_k: 789.977645465828,
+            slope_per_k: -1.186471758084013,
+            info: ModelInfo {
+                name: "tert-butanol density, linear in T",
+                formula: DENSITY_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method DIPPR_PERRY_8E: Perry's Chemical Engineers' Handbook, 8th ed. (2008), DIPPR equations",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(299.15),
+                    high: Some(353.15),
+                }],
+            },
+        },
+        viscosity: ViscosityFit {
+            form: ViscosityForm::Vogel {
+                a: -10.632369964182768,
+                b: 456.7010132922555,
+                c: 211.04995048087144,
+            },
+            info: ModelInfo {
+                name: "tert-butanol viscosity, Vogel",
+                formula: VOGEL_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method DIPPR_PERRY_8E: Perry's Chemical Engineers' Handbook, 8th ed. (2008), DIPPR equations",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(299.15),
+                    high: Some(353.15),
+                }],
+            },
+        },
+        surface_tension: LinearFit {
+            at_293_k: 0.020572956713690017,
+            slope_per_k: -9.741045891400045e-05,
+            info: ModelInfo {
+                name: "tert-butanol surface tension, linear in T",
+                formula: SURFACE_TENSION_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method Fit 2023: thermo author's 2023 fit to literature data (provenance weaker)",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(299.15),
+                    high: Some(333.15),
+                }],
+            },
+        },
+        vapour_pressure: AntoineFit {
+            a: 9.25746132407349,
+            b: 1063.9804239117068,
+            c: -105.2478604004299,
+            info: ModelInfo {
+                name: "tert-butanol vapour pressure, Antoine",
+                formula: ANTOINE_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method WAGNER_POLING: Wagner equation, coefficients of Poling, Prausnitz & O'Connell, The Properties of Gases and Liquids, 5th ed. (2001)",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(301.15),
+                    high: Some(433.15),
+                }],
+            },
+        },
+    },
+    // acetic acid
+    SolventData {
+        name: "acetic acid",
+        cas: "64-19-7",
+        molar_mass_g_per_mol: 60.05196,
+        normal_boiling_point_k: 391.05,
+        melting_point_k: 289.85,
+        density: LinearFit {
+            at_293_k: 1047.584016008239,
+            slope_per_k: -1.0590172342704365,
+            info: ModelInfo {
+                name: "acetic acid density, linear in T",
+                formula: DENSITY_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method DIPPR_PERRY_8E: Perry's Chemical Engineers' Handbook, 8th ed. (2008), DIPPR equations",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(293.15),
+                    high: Some(353.15),
+                }],
+            },
+        },
+        viscosity: ViscosityFit {
+            form: ViscosityForm::Andrade {
+                a: -11.2114986942576,
+                b: 1315.8592066383821,
+            },
+            info: ModelInfo {
+                name: "acetic acid viscosity, Andrade",
+                formula: ANDRADE_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method DIPPR_PERRY_8E: Perry's Chemical Engineers' Handbook, 8th ed. (2008), DIPPR equations",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(293.15),
+                    high: Some(353.15),
+                }],
+            },
+        },
+        surface_tension: LinearFit {
+            at_293_k: 0.027498252448341202,
+            slope_per_k: -9.733774658317661e-05,
+            info: ModelInfo {
+                name: "acetic acid surface tension, linear in T",
+                formula: SURFACE_TENSION_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method Fit 2023: thermo author's 2023 fit to literature data (provenance weaker)",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(293.15),
+                    high: Some(353.15),
+                }],
+            },
+        },
+        vapour_pressure: AntoineFit {
+            a: 9.780306499473987,
+            b: 1700.5963795720927,
+            c: -34.773473885435045,
+            info: ModelInfo {
+                name: "acetic acid vapour pressure, Antoine",
+                formula: ANTOINE_FORMULA,
+                source: "thermo 0.6.1 / chemicals 1.5.2 method WAGNER_MCGARRY: Wagner equation, coefficients of McGarry, Ind. Eng. Chem. Process Des. Dev. 22 (1983) 313",
+                validity: &[ValidityBound {
+                    quantity: "temperature",
+                    dimension: Dimension::Temperature,
+                    low: Some(304.0),
                     high: Some(473.15),
                 }],
             },

@@ -4,13 +4,16 @@
 //! Coefficients are this project's own fits (table in `solvent_data.rs`, made by
 //! `tests/reference/solvent_properties.py`) to the values of the general-purpose property library
 //! thermo 0.6.1 / chemicals 1.5.2, each naming the method thermo used; where thermo has only
-//! estimation methods (NMP density and viscosity; 2-MeTHF density, viscosity, surface tension) a
-//! named literature value, an estimate or a value from memory is used and marked so in the source.
+//! estimation methods (NMP density and viscosity; 2-MeTHF density, viscosity, surface tension;
+//! DMAc and CPME density; CPME viscosity and vapour pressure; MTBE surface tension) a named
+//! literature value, an estimate checked on a measured analogue or a value from memory is used and
+//! marked so in the source. Fits start at 20 °C or, for a solvent melting above about 19 °C
+//! (tert-butanol, 25.2 °C), at the first whole degree 0.5 K above its melting point.
 //! Forms: linear density and surface tension over 20–80 °C; Andrade, ln μ = A + B/T
 //! (E. N. da C. Andrade, Nature 125 (1930) 309, citation from memory), or Vogel,
 //! ln μ = A + B/(T − C) (H. Vogel, Phys. Z. 22 (1921) 645, citation from memory), over 20–80 °C;
 //! Antoine, log₁₀ p = A − B/(T + C), over up to 0–200 °C. Fit errors (max over the range, over
-//! the solvents fitted to thermo): density 0.22 %, viscosity 1.1 %, surface tension 0.40 %,
+//! the solvents fitted to thermo): density 0.22 %, viscosity 1.1 %, surface tension 0.57 %,
 //! vapour pressure 0.98 %.
 //!
 //! ```
@@ -64,6 +67,18 @@ pub enum Solvent {
     Dmso,
     /// N-Methyl-2-pyrrolidone.
     Nmp,
+    /// 1,4-Dioxane.
+    Dioxane,
+    /// N,N-Dimethylacetamide.
+    Dmac,
+    /// Methyl tert-butyl ether.
+    Mtbe,
+    /// Cyclopentyl methyl ether.
+    Cpme,
+    /// tert-Butanol (2-methyl-2-propanol); solid below 25 °C.
+    TertButanol,
+    /// Acetic acid; solid below 17 °C.
+    AceticAcid,
 }
 
 /// A temperature-dependent property of a solvent.
@@ -98,7 +113,7 @@ impl Property {
 
 impl Solvent {
     /// Every built-in solvent, in table order.
-    pub const ALL: [Solvent; 15] = [
+    pub const ALL: [Solvent; 21] = [
         Solvent::Water,
         Solvent::Methanol,
         Solvent::Ethanol,
@@ -114,6 +129,12 @@ impl Solvent {
         Solvent::Dmf,
         Solvent::Dmso,
         Solvent::Nmp,
+        Solvent::Dioxane,
+        Solvent::Dmac,
+        Solvent::Mtbe,
+        Solvent::Cpme,
+        Solvent::TertButanol,
+        Solvent::AceticAcid,
     ];
 
     /// The stored data: coefficients, ranges, sources.
@@ -140,6 +161,17 @@ impl Solvent {
     /// Normal boiling point (at 101.325 kPa).
     pub fn normal_boiling_point(self) -> Temperature {
         Temperature::from_kelvin(self.data().normal_boiling_point_k)
+    }
+
+    /// Melting point (chemicals 1.5.2).
+    pub fn melting_point(self) -> Temperature {
+        Temperature::from_kelvin(self.data().melting_point_k)
+    }
+
+    /// Whether the solvent is solid at `t` (at or below its melting point): a line of it freezes
+    /// and blocks. The property models are not evaluated there (their ranges start above it).
+    pub fn freezes_at(self, t: Temperature) -> bool {
+        t.kelvin() <= self.data().melting_point_k
     }
 
     /// Name, formula, source and fitted range of the model for `property`.
@@ -254,6 +286,12 @@ mod tests {
             "68-12-2",
             "67-68-5",
             "872-50-4",
+            "123-91-1",
+            "127-19-5",
+            "1634-04-4",
+            "5614-37-9",
+            "75-65-0",
+            "64-19-7",
         ];
         for (s, c) in Solvent::ALL.iter().zip(cas) {
             assert_eq!(s.cas(), c, "{}", s.name());

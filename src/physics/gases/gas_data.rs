@@ -1,9 +1,10 @@
 //! Data of the built-in gases: identity, molar mass, critical constants, Sutherland viscosity
 //! coefficients (fitted by `tests/reference/segmented_flow_reference.py` to thermo 0.6.1), Henry's
-//! constants in water (Sander 2023), order-of-magnitude solubilities in organic solvents, and the
+//! constants in water (IAPWS G7-04), order-of-magnitude solubilities in organic solvents, and the
 //! molar volume at the boiling point used by Wilke–Chang. Each value names its source.
 
-use super::henry::{OrganicRange, VantHoff};
+use super::henry::OrganicRange;
+use super::iapws_henry::GuidelineGas;
 use super::sutherland::SutherlandFit;
 use super::tsonopoulos::Critical;
 
@@ -22,12 +23,12 @@ pub struct GasData {
     pub critical: Critical,
     /// Sutherland coefficients (own fit to thermo 0.6.1, 0–200 °C).
     pub viscosity: SutherlandFit,
-    /// Henry's constant in water (Sander 2023), if the gas is one species.
-    pub henry_water: Option<VantHoff>,
+    /// The IAPWS G7-04 constants (Table 2) for the Henry's constant in water, if the gas is one species.
+    pub henry_water: Option<GuidelineGas>,
     /// Solubility range in common organic solvents (order of magnitude), if known.
     pub henry_organic: Option<OrganicRange>,
     /// Molar volume at the normal boiling point, cm³/mol, for Wilke–Chang (from memory:
-    /// Poling, Prausnitz & O'Connell 2001, as listed in `practice.md` §3.4).
+    /// Poling, Prausnitz & O'Connell, The Properties of Gases and Liquids, 5th ed. (2001)).
     pub boiling_volume_cm3_per_mol: f64,
 }
 
@@ -46,12 +47,11 @@ pub const GASES: [GasData; 6] = [
         molar_mass_g_per_mol: 31.9988,
         critical: Critical { tc: 154.581, pc: 5_043_000.0, omega: 0.0222 },
         viscosity: SutherlandFit { mu_ref: 1.912092423078853e-05, s: 134.92822302445106, max_relative_error: 0.00118 },
-        // Sander (2023): Battino et al. (1983) recommended system.
-        henry_water: Some(VantHoff { h298: 1.3e-5, c: 1500.0 }),
+        henry_water: Some(GuidelineGas { a: -9.44833, b: 4.43822, c: 11.42005, t_min: 274.15, t_max: 616.52 }),
         henry_organic: Some(OrganicRange {
             low: 8.0 * MM_PER_BAR,
             high: 15.0 * MM_PER_BAR,
-            note: "≈ 8–15 mM/bar in common organics (6–12× water; DMSO much lower, ~1.5–2 mM/bar); anchors: Franco & Olmsted (1990) Talanta 37, 905, air-saturated values × 4.8",
+            note: "≈ 8–15 mM/bar in common organics (6–12× water; DMSO much lower, ~1.6 mM/bar); per-solvent values in oxygen_solvents.rs",
         }),
         boiling_volume_cm3_per_mol: 25.6,
     },
@@ -62,7 +62,7 @@ pub const GASES: [GasData; 6] = [
         molar_mass_g_per_mol: 2.01588,
         critical: Critical { tc: 33.145, pc: 1_296_400.0, omega: -0.219 },
         viscosity: SutherlandFit { mu_ref: 8.34254422575269e-06, s: 85.77546249492626, max_relative_error: 0.00414 },
-        henry_water: Some(VantHoff { h298: 7.8e-6, c: 530.0 }),
+        henry_water: Some(GuidelineGas { a: -4.73284, b: 6.08954, c: 6.06066, t_min: 273.15, t_max: 636.09 }),
         henry_organic: Some(OrganicRange {
             low: 3.0 * MM_PER_BAR,
             high: 5.0 * MM_PER_BAR,
@@ -77,7 +77,7 @@ pub const GASES: [GasData; 6] = [
         molar_mass_g_per_mol: 28.0134,
         critical: Critical { tc: 126.192, pc: 3_395_800.0, omega: 0.0372 },
         viscosity: SutherlandFit { mu_ref: 1.6609687710287957e-05, s: 117.32091279839699, max_relative_error: 0.00115 },
-        henry_water: Some(VantHoff { h298: 6.4e-6, c: 1300.0 }),
+        henry_water: Some(GuidelineGas { a: -9.67578, b: 4.72162, c: 11.70585, t_min: 278.12, t_max: 636.46 }),
         henry_organic: Some(OrganicRange {
             low: 3.0 * MM_PER_BAR,
             high: 8.0 * MM_PER_BAR,
@@ -92,8 +92,7 @@ pub const GASES: [GasData; 6] = [
         molar_mass_g_per_mol: 28.0101,
         critical: Critical { tc: 132.86, pc: 3_494_000.0, omega: 0.0497 },
         viscosity: SutherlandFit { mu_ref: 1.658195966461059e-05, s: 114.95808699198271, max_relative_error: 0.00084 },
-        // Sander (2023): IUPAC Solubility Data Series vol. 43 (Cargill 1990).
-        henry_water: Some(VantHoff { h298: 9.7e-6, c: 1300.0 }),
+        henry_water: Some(GuidelineGas { a: -10.52862, b: 5.13259, c: 12.01421, t_min: 278.15, t_max: 588.67 }),
         henry_organic: Some(OrganicRange {
             low: 6.0 * MM_PER_BAR,
             high: 12.0 * MM_PER_BAR,
@@ -109,7 +108,7 @@ pub const GASES: [GasData; 6] = [
         critical: Critical { tc: 304.1282, pc: 7_377_300.0, omega: 0.22394 },
         viscosity: SutherlandFit { mu_ref: 1.3679448528745345e-05, s: 268.7524926752453, max_relative_error: 0.00218 },
         // Physical solubility only (no HCO₃⁻).
-        henry_water: Some(VantHoff { h298: 3.3e-4, c: 2400.0 }),
+        henry_water: Some(GuidelineGas { a: -8.55445, b: 4.01195, c: 9.52345, t_min: 274.19, t_max: 642.66 }),
         henry_organic: Some(OrganicRange {
             low: 100.0 * MM_PER_BAR,
             high: 300.0 * MM_PER_BAR,

@@ -4,6 +4,9 @@
 
 pub mod gas_data;
 pub mod henry;
+pub mod iapws_henry;
+pub mod measured_diffusivity;
+pub mod oxygen_solvents;
 pub mod quantities;
 pub mod reference_state;
 pub mod sutherland;
@@ -38,6 +41,17 @@ pub enum Gas {
 }
 
 use crate::physics::fluids::models::range_warnings;
+
+/// A diffusivity with the model it comes from and the label that says how sure it is.
+#[derive(Debug, Clone, PartialEq)]
+pub struct DiffusivityEstimate {
+    /// The value and any range warnings.
+    pub value: Evaluated<Diffusivity>,
+    /// Measured table or correlation.
+    pub model: crate::physics::report::ModelInfo,
+    /// Label for the figure, with the uncertainty.
+    pub label: &'static str,
+}
 
 impl Gas {
     /// Every built-in gas, in table order.
@@ -89,11 +103,14 @@ impl Gas {
     }
 
     /// A sentence when the ideal-gas law used for flows and densities is off by more than 2 %
-    /// (common practice, no source) at `t` and `p`; CO₂ reaches this near 4 bar at 25 °C.
+    /// (common practice, no source) at `t` and `p`, or when `p` is above the 20 bar the
+    /// compressibility estimate is used for (then Z itself is uncertain); CO₂ reaches the 2 %
+    /// near 4 bar at 25 °C.
     pub fn compressibility_caveat(self, t: Temperature, p: Pressure) -> Option<String> {
         let z = self.compressibility(t, p);
-        ((z - 1.0).abs() > tsonopoulos::IDEAL_GAS_TOLERANCE).then(|| {
-            format!(
+        let beyond = !tsonopoulos::range_warnings(p).is_empty();
+        ((z - 1.0).abs() > tsonopoulos::IDEAL_GAS_TOLERANCE || beyond).then(|| {
+            let mut s = format!(
                 "{} at {} bar(a) and {} °C has Z ≈ {} (Tsonopoulos second virial coefficient): the ideal-gas flows and densities here are {:.0} % off; the real gas occupies {} the volume shown.",
                 self.name(),
                 format_significant(p.bar(), 3),
@@ -101,14 +118,22 @@ impl Gas {
                 format_significant(z, 3),
                 (z - 1.0).abs() * 100.0,
                 if z < 1.0 { "less than" } else { "more than" }
-            )
+            );
+            if beyond {
+                s.push_str(" Above 20 bar the truncated virial form is outside the range it is used for here (Tsonopoulos 1974; CO₂ at 50 bar and 25 °C comes out about 11 % high), so Z itself is uncertain: use a real-gas equation of state for this pressure.");
+            }
+            s
         })
     }
 
-    /// Henry's-law solubility in water at `t` (Sander 2023, van't Hoff), with a warning outside
-    /// 0–40 °C; `None` for air (use its oxygen through [`Gas::reactive_component`]).
+    /// Henry's-law solubility in water at `t` (IAPWS G7-04), with a warning outside the
+    /// guideline's fitted range for this gas; `None` for air (use its oxygen through
+    /// [`Gas::reactive_component`]).
     pub fn henry_water(self, t: Temperature) -> Option<Evaluated<HenrySolubility>> {
-        self.data().henry_water.map(|v| Evaluated { value: v.at(t), warnings: range_warnings(&henry::WATER_INFO, t) })
+        self.data().henry_water.map(|g| {
+            let (value, warnings) = g.solubility(t);
+            Evaluated { value, warnings }
+        })
     }
 
     /// Order-of-magnitude solubility range in common organic solvents at 25 °C, if known.
@@ -116,8 +141,25 @@ impl Gas {
         self.data().henry_organic
     }
 
-    /// Liquid-phase diffusivity of this gas in `solvent` at `t` by Wilke–Chang, with the
-    /// solvent-viscosity range warnings; an estimate, ±30 %.
+    /// Every value known for this gas's solubility in `solvent` at `t`, recommended first: water by
+    /// the IAPWS guideline; O₂ in an organic solvent by that solvent's own value (measured or from
+    /// memory, as marked); other gases in organic solvents by an order-of-magnitude range. `None`
+    /// for air (use its oxygen through [`Gas::reactive_component`]).
+    pub fn solubility_in(self, solvent: Solvent, t: Temperature) -> Option<henry::Solubility> {
+        if solvent == Solvent::Water {
+            let h = self.henry_water(t)?;
+            let estimate = henry::SolubilityEstimate { value: h.value, model: henry::WATER_INFO, recommended: true, warnings: h.warnings };
+            return Some(henry::Solubility { estimates: vec![estimate], recommendation: "" });
+        }
+        match self {
+            Gas::Oxygen => oxygen_solvents::solubility(solvent, t),
+            _ => self.henry_organic().map(|r| henry::range_solubility(&r, t)),
+        }
+    }
+
+    /// Liquid-phase diffusivity of this gas in `solvent` at `t`: by Wilke–Chang, with the
+    /// solvent-viscosity range warnings (an estimate; see [`Gas::diffusivity`] for measured
+    /// values where tabulated).
     pub fn diffusivity_in(self, solvent: Solvent, t: Temperature) -> Result<Evaluated<Diffusivity>, crate::physics::fluids::PropertyError> {
         let mu = solvent.viscosity(t)?;
         Ok(Evaluated {
@@ -132,12 +174,34 @@ impl Gas {
         })
     }
 
+    /// Liquid-phase diffusivity of this gas in `solvent` at `t`, with its model: the measured value
+    /// where tabulated (H₂ and CO₂ in water), the Wilke–Chang estimate otherwise.
+    pub fn diffusivity(self, solvent: Solvent, t: Temperature) -> Result<DiffusivityEstimate, crate::physics::fluids::PropertyError> {
+        if solvent == Solvent::Water {
+            let mobility = |tk: f64| {
+                let t = Temperature::from_kelvin(tk);
+                solvent.viscosity(t).ok().map(|mu| tk / mu.value.si())
+            };
+            if let Some((d, mut warnings)) = measured_diffusivity::in_water(self, t, mobility) {
+                if !warnings.is_empty() {
+                    warnings.extend(solvent.viscosity(t)?.warnings);
+                }
+                return Ok(DiffusivityEstimate {
+                    value: Evaluated { value: Diffusivity::from_si(d), warnings },
+                    model: measured_diffusivity::INFO,
+                    label: "Gas diffusivity in the liquid (measured)",
+                });
+            }
+        }
+        Ok(DiffusivityEstimate { value: self.diffusivity_in(solvent, t)?, model: wilke_chang::INFO, label: wilke_chang::LABEL })
+    }
+
     /// Whether the gas feeds oxygen (an oxidiser with flammable solvents).
     pub fn is_oxidising(self) -> bool {
         matches!(self, Gas::Oxygen | Gas::Air)
     }
 
-    /// Flammable limits in air, volume fractions (from memory: `practice.md` §4.2).
+    /// Flammable limits in air, volume fractions (from memory).
     pub fn flammable_limits(self) -> Option<(f64, f64)> {
         match self {
             Gas::Hydrogen => Some((0.04, 0.75)),

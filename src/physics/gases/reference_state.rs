@@ -8,12 +8,12 @@
 //! T in K, Q in m³/s, ṅ in mol/s, M in kg/mol, R = 8.314 462 618 153 24 J mol⁻¹ K⁻¹ (N_A k, exact
 //! since the 2019 SI redefinition; CODATA 2018).
 //!
-//! Reference states differ between instruments and regions (`practice.md` §2.3, seen in
-//! mass-flow-controller makers' notes): "normal" (mLn/min, DIN 1343) is 0 °C and 101.325 kPa;
+//! Reference states differ between instruments and regions (mass-flow-controller makers'
+//! application notes): "normal" (mLn/min, DIN 1343) is 0 °C and 101.325 kPa;
 //! European "standard" (mLs/min) is 20 °C and 101.325 kPa; 25 °C and 100 kPa is SATP. Between
 //! them the same reading means up to 9.6 % different moles, so the state is always explicit.
 //!
-//! Example (hand arithmetic, `physics.md` §3.1): 10 mLn/min of N₂ is
+//! Example (hand arithmetic, derived): 10 mLn/min of N₂ is
 //! 10e-6/60 × 101325 / (8.314462618 × 273.15) = 7.436e-6 mol/s, and at 25 °C and 1 atm it
 //! occupies 10.915 mL/min.
 //!
@@ -170,7 +170,7 @@ mod tests {
 
     #[test]
     fn reference_states_differ_as_tabulated() {
-        // practice.md §2.3 [C]: µmol per cm³ 44.615 (0 °C, 1 atm), 41.571 (20 °C, 1 atm),
+        // Derived (ideal gas, by hand): µmol per cm³ 44.615 (0 °C, 1 atm), 41.571 (20 °C, 1 atm),
         // 40.340 (25 °C, 100 kPa), printed to 5 digits.
         let per_cm3 = |s: ReferenceState| s.molar_density() * 1e-6 * 1e6;
         assert!((per_cm3(ReferenceState::Normal) - 44.615).abs() < 0.0005);

@@ -7,7 +7,8 @@
 //! acentric factor. Truncated virial equation: Z = 1 + B P / (R T).
 //!
 //! Validity: gases below about half their critical density (the truncated virial form); here
-//! used up to ~20 bar near ambient. Checked against chemicals 1.5.2 `BVirial_Tsonopoulos` (same
+//! stated for up to 20 bar near ambient and warned above it (beyond it the truncated form drifts:
+//! CO₂ at 50 bar and 25 °C comes out about 11 % above the real-gas Z). Checked against chemicals 1.5.2 `BVirial_Tsonopoulos` (same
 //! formula) and, for Z, against the Peng–Robinson equation in thermo 0.6.1 and, for air, the
 //! Lemmon et al. (2000) equation of state in chemicals 1.5.2: at 10 bar and 25 °C CO₂ has
 //! Z = 0.950 (virial) vs 0.944 (Peng–Robinson); every other gas here is within 1 % of ideal.
@@ -25,8 +26,8 @@
 //! 20 (1974) 263–272 (citation from memory; formula as coded in chemicals 1.5.2).
 
 use super::reference_state::GAS_CONSTANT;
-use crate::physics::report::ModelInfo;
-use crate::physics::units::{Pressure, Temperature};
+use crate::physics::report::{ModelInfo, RangeWarning, ValidityBound};
+use crate::physics::units::{Dimension, Pressure, Temperature};
 
 /// Critical constants and acentric factor of a gas (chemicals 1.5.2).
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -47,9 +48,14 @@ pub const IDEAL_GAS_TOLERANCE: f64 = 0.02;
 pub const INFO: ModelInfo = ModelInfo {
     name: "Tsonopoulos second virial coefficient",
     formula: "Z = 1 + B P/(R T); B P_c/(R T_c) = f⁰(T_r) + ω f¹(T_r)",
-    source: "Tsonopoulos (1974) AIChE J. 20, 263–272, as coded in chemicals 1.5.2",
-    validity: &[],
+    source: "Tsonopoulos (1974) AIChE J. 20, 263–272, as coded in chemicals 1.5.2; truncated virial form used here to 20 bar",
+    validity: &[ValidityBound { quantity: "gas pressure (absolute)", dimension: Dimension::Pressure, low: None, high: Some(20e5) }],
 };
+
+/// A warning when `p` is above the pressure the truncated virial form is used for here.
+pub fn range_warnings(p: Pressure) -> Vec<RangeWarning> {
+    INFO.validity.iter().filter_map(|b| b.check(p.pascals(), &INFO)).collect()
+}
 
 /// Second virial coefficient B, m³/mol.
 pub fn second_virial(c: &Critical, t: Temperature) -> f64 {

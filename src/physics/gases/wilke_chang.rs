@@ -5,14 +5,17 @@
 //! unassociated solvents), T in K, μ_B the solvent viscosity (cP = mPa·s) and V_A the solute's
 //! molar volume at its normal boiling point (cm³/mol). Converted to SI here (× 10⁻⁴ m²/s).
 //!
-//! Validity and error: dilute solutes in low-viscosity solvents; typical error ±10–20 %, larger
-//! for small solutes. For H₂ in water it gives about 3.4×10⁻⁹ m²/s at 25 °C against a measured
-//! ~4.5–5×10⁻⁹, i.e. ~30 % low (from memory: Himmelblau, Chem. Rev. 64 (1964) 527). φ values and
-//! the V_A of the gases are from memory (Poling, Prausnitz & O'Connell, The Properties of Gases
-//! and Liquids, 5th ed. (2001), ch. 11); treat every result as "estimate, ±30 %".
+//! Validity and error: dilute solutes in low-viscosity solvents; typical error ±10–20 % (from
+//! memory: Poling et al. 2001), larger for small solutes, which it under-predicts: for H₂ in
+//! water it gives 3.44×10⁻⁹ m²/s at 25 °C against 5.11×10⁻⁹ measured (CRC Handbook, "Diffusion of
+//! gases in water"), 33 % low. φ values and the V_A of the gases are from memory (Poling, Prausnitz
+//! & O'Connell, The Properties of Gases and Liquids, 5th ed. (2001), ch. 11). Where a measured value
+//! is tabulated it is used instead (`measured_diffusivity`); otherwise treat the result as an
+//! estimate, −40 % to +30 %.
 //!
-//! Example (computed in `practice.md` §3.4 from the same formula, printed to 3 digits): O₂
-//! (V_A = 25.6) in water (φ = 2.6, M = 18.015, μ = 0.890 mPa·s) at 25 °C: 2.42×10⁻⁹ m²/s.
+//! Example (derived: the formula evaluated by hand, printed to 3 digits): O₂ (V_A = 25.6) in water
+//! (φ = 2.6, M = 18.015, μ = 0.890 mPa·s) at 25 °C: 2.42×10⁻⁹ m²/s, as the CRC Handbook's
+//! measured 2.42×10⁻⁹.
 //!
 //! ```
 //! use clearbore::physics::gases::wilke_chang::diffusivity;
@@ -33,9 +36,12 @@ use crate::physics::units::{Diffusivity, DynamicViscosity, MolarMass, Temperatur
 pub const INFO: ModelInfo = ModelInfo {
     name: "Wilke–Chang",
     formula: "D = 7.4e-8 (φ M_B)^0.5 T / (μ_B V_A^0.6) cm²/s (M_B g/mol, μ_B cP, V_A cm³/mol)",
-    source: "Wilke & Chang (1955) AIChE J. 1, 264–270 (from memory); ±10–30 %, H₂ in water ~30 % low (Himmelblau 1964, from memory)",
+    source: "Wilke & Chang (1955) AIChE J. 1, 264–270 (citation from memory); typically ±10–20 %, small solutes under-predicted: H₂ in water 33 % below the CRC Handbook's measured 5.11e-9 m²/s at 25 °C; take −40 % to +30 %",
     validity: &[],
 };
+
+/// Figure label of a Wilke–Chang diffusivity, with its stated uncertainty.
+pub const LABEL: &str = "Gas diffusivity in the liquid (estimate, −40 % to +30 %)";
 
 /// Association factor φ of a solvent (from memory: Wilke & Chang 1955 via Poling et al. 2001):
 /// 2.6 water, 1.9 methanol, 1.5 ethanol, 1.0 otherwise (also assumed for 2-propanol).

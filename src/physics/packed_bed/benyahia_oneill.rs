@@ -15,8 +15,7 @@
 //! measured voidage is better where there is one. Near the edges of the any-shape fit the formula
 //! can exceed 1 (φ = 0.42, D_t/d_v = 1.5 gives 1.04); callers must reject such values.
 //!
-//! Example (`fluids` 1.3.1 docstring of `voidage_Benyahia_Oneil_spherical`, physics reference §4
-//! #4): d_p = 1 mm, D_t = 50 mm gives ε = 0.3906653157443224 (checked to 1e-12 relative).
+//! Example (`fluids` 1.3.1 docstring of `voidage_Benyahia_Oneil_spherical`): d_p = 1 mm, D_t = 50 mm gives ε = 0.3906653157443224 (checked to 1e-12 relative).
 //!
 //! ```
 //! use clearbore::physics::packed_bed::benyahia_oneill;

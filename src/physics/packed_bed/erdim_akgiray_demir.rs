@@ -8,7 +8,7 @@
 //! Validity (fitted data, as stated in the paper and `fluids` 1.3.1): 2 < Re_m < 3582,
 //! 4 < D_t/d_p < 34.1, 0.377 < ε < 0.470.
 //!
-//! Example (`fluids` 1.3.1 docstring of `Erdim_Akgiray_Demir`, physics reference §4 #3):
+//! Example (`fluids` 1.3.1 docstring of `Erdim_Akgiray_Demir`):
 //! d_p = 0.8 mm, ε = 0.4, u_s = 1 mm/s, ρ = 1000 kg/m³, μ = 1 mPa·s, L = 1 m gives
 //! 1438.2826958844414 Pa (checked to 1e-9 relative).
 //!

@@ -13,7 +13,7 @@
 //! data from other sources only. Note the viscous constant 119.8 A: about 20 % below Ergun at
 //! low Re when D_t/d_p is large, which is why it is not the recommended estimate.
 //!
-//! Example (`fluids` 1.3.1 docstring of `Harrison_Brunner_Hecker`, physics reference §4 #2):
+//! Example (`fluids` 1.3.1 docstring of `Harrison_Brunner_Hecker`):
 //! d_p = 0.8 mm, ε = 0.4, u_s = 1 mm/s, ρ = 1000 kg/m³, μ = 1 mPa·s, L = 1 m, D_t = 10 mm gives
 //! 1255.1625662 Pa (11 digits printed: checked to 1e-9 relative).
 //!

@@ -11,8 +11,8 @@
 //! Validity: that of Ergun; the result is only as good as ε_mf, to which it is very sensitive
 //! (u_mf ∝ ε_mf³/(1 − ε_mf) at small Ar). No separate fitted range.
 //!
-//! Example (physics reference §1.4): 100 µm spheres, ρ_p = 2500 kg/m³, in water (1000 kg/m³,
-//! 1 mPa·s), ε_mf = 0.4: u_mf ≈ 1.0e-4 m/s. Hand calculation of the viscous limit,
+//! Example (hand calculation): 100 µm spheres, ρ_p = 2500 kg/m³, in water (1000 kg/m³,
+//! 1 mPa·s), ε_mf = 0.4: u_mf ≈ 1.0e-4 m/s (the value usually quoted, from memory). Hand calculation of the viscous limit,
 //! u = d² (ρ_p − ρ) g ε³ φ² / (150 μ (1 − ε)) = 1.0460e-4 m/s; the inertial term lowers it by
 //! about 0.02 % here (1.04583e-4 m/s).
 //!

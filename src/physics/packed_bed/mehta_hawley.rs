@@ -9,7 +9,7 @@
 //! D_t/d_p = 20, ε = 0.4; +63 % at D_t/d_p = 4.
 //!
 //! Validity: the fitted range of the original was not checked (formula and citation are from
-//! memory, per the physics reference); the range of Ergun (1 < Re_m < 2300) is used. The
+//! memory); the range of Ergun (1 < Re_m < 2300) is used. The
 //! Eisfeld & Schnitzlein (2001) refit is not included: its inertial term is printed as A_w/B_w in
 //! one reading and A_w·B_w in a public implementation, and the paper could not be checked.
 //!

@@ -13,10 +13,10 @@
 //! data include liquid-fluidised beds. Evaluated as Re_mf = C₂ Ar / (√(C₁² + C₂ Ar) + C₁), the same
 //! value without the cancellation at small Ar.
 //!
-//! Example (physics reference §1.4, Wen–Yu): 100 µm particles, ρ_p = 2500 kg/m³, in water
+//! Example (hand calculation, Wen–Yu): 100 µm particles, ρ_p = 2500 kg/m³, in water
 //! (ρ = 1000 kg/m³, μ = 1 mPa·s): Ar = 14.709975, Re_mf = √(33.7² + 0.0408 × 14.709975) − 33.7
-//! = 0.0089033, u_mf = Re_mf μ / (ρ d_v) = 8.9033e-5 m/s (hand calculation; the reference's
-//! "≈ 1.0e-4 m/s" is the Ergun-based value at ε_mf = 0.4, see [`super::kunii_levenspiel`]).
+//! = 0.0089033, u_mf = Re_mf μ / (ρ d_v) = 8.9033e-5 m/s (hand calculation; the often-quoted
+//! "≈ 1.0e-4 m/s" (from memory) is the Ergun-based value at ε_mf = 0.4, see [`super::kunii_levenspiel`]).
 //!
 //! ```
 //! use clearbore::physics::packed_bed::{minimum_fluidisation::FluidisationInput, wen_yu};

@@ -38,7 +38,7 @@ use super::fluids::{self, Liquid, Solvent};
 use super::form::{ChoiceSpec, Collector, FieldSource};
 use super::gases::reference_state::{self, GAS_CONSTANT};
 use super::hazards;
-use super::gases::{Gas, HenrySolubility, MolarFlow, ReferenceFlow, ReferenceState, henry, sutherland, wilke_chang};
+use super::gases::{Gas, HenrySolubility, MolarFlow, ReferenceFlow, ReferenceState, henry, sutherland};
 use super::input::{Allowed, FieldSpec, InputError};
 use super::report::{Check, Estimate, Figure, Finite, ModelInfo, RangeWarning, Report, Verdict, budget_verdict};
 use super::units::{
@@ -110,7 +110,7 @@ pub const JUNCTION_WIDTH: FieldSpec = field("junction_width", "Junction main-cha
 pub const SOLUBILITY_SOURCE: ChoiceSpec = ChoiceSpec {
     key: "solubility_source",
     label: "Gas solubility",
-    options: &[("built_in", "Built-in (water: Sander 2023; organics: order of magnitude)"), ("entered", "Enter a measured value")],
+    options: &[("built_in", "Built-in (water: IAPWS G7-04; O₂: each solvent's own value; other gases in organics: order of magnitude)"), ("entered", "Enter a measured value")],
 };
 /// Entered solubility: concentration at 1 bar partial pressure of the gas.
 pub const SOLUBILITY: FieldSpec = field("solubility", "Gas solubility at 1 bar of the gas", Dimension::Concentration, lab::CONCENTRATION, "Dissolved concentration at saturation under 1 bar partial pressure of the gas, at the working temperature.");
@@ -544,8 +544,8 @@ fn liquid_state(input: &SegmentedFlowInput) -> Result<(Liquid, Vec<RangeWarning>
     match input.liquid {
         LiquidSpec::Solvent { solvent, .. } => {
             let l = solvent.liquid(t)?;
-            let dm = reactive.diffusivity_in(solvent, t)?;
-            let fig = Figure::single("diffusivity", "Gas diffusivity in the liquid (estimate, ±30 %)", Dimension::Diffusivity, wilke_chang::INFO, dm.value.si(), dm.warnings)?;
+            let dm = reactive.diffusivity(solvent, t)?;
+            let fig = Figure::single("diffusivity", dm.label, Dimension::Diffusivity, dm.model, dm.value.value.si(), dm.value.warnings)?;
             Ok((l.value, l.warnings, fig))
         }
         LiquidSpec::Custom { liquid, diffusivity, .. } => {
@@ -560,27 +560,17 @@ fn solubility_figure(input: &SegmentedFlowInput, reactive: Gas, t: Temperature, 
     let label = "Saturation concentration at the outlet partial pressure";
     let c = |h: HenrySolubility| henry::saturation_concentration(h, partial).si();
     let entered = |s: Concentration| HenrySolubility::from_si(s.si() / 1e5);
-    let t_warn = |info: &ModelInfo| info.validity.iter().filter_map(|b| b.check(t.kelvin(), info)).collect::<Vec<_>>();
-    let estimates = match input.liquid {
+    let (estimates, recommendation) = match input.liquid {
         LiquidSpec::Custom { solubility, .. } | LiquidSpec::Solvent { solubility: Some(solubility), .. } => {
-            vec![estimate("saturation concentration", henry::ENTERED_INFO, c(entered(solubility)), true, Vec::new())?]
+            (vec![estimate("saturation concentration", henry::ENTERED_INFO, c(entered(solubility)), true, Vec::new())?], "")
         }
-        LiquidSpec::Solvent { solvent: Solvent::Water, solubility: None } => match reactive.henry_water(t) {
-            Some(h) => vec![estimate("saturation concentration", henry::WATER_INFO, c(h.value), true, h.warnings)?],
+        LiquidSpec::Solvent { solvent, solubility: None } => match reactive.solubility_in(solvent, t) {
+            Some(s) => (
+                s.estimates.into_iter().map(|e| estimate("saturation concentration", e.model, c(e.value), e.recommended, e.warnings)).collect::<Result<Vec<_>, _>>()?,
+                s.recommendation,
+            ),
             None => return Err(SegmentedFlowError::Numerical(super::report::NumericalError::NotFinite { quantity: "solubility" })),
         },
-        LiquidSpec::Solvent { solubility: None, .. } => match reactive.henry_organic() {
-            Some(r) => vec![
-                estimate("saturation concentration", henry::ORGANIC_INFO, c(HenrySolubility::from_si(r.low)), true, t_warn(&henry::ORGANIC_INFO))?,
-                estimate("saturation concentration", henry::ORGANIC_INFO, c(HenrySolubility::from_si(r.high)), false, t_warn(&henry::ORGANIC_INFO))?,
-            ],
-            None => return Err(SegmentedFlowError::Numerical(super::report::NumericalError::NotFinite { quantity: "solubility" })),
-        },
-    };
-    let recommendation = if estimates.len() > 1 {
-        "Low end of an order-of-magnitude range for common organic solvents (not this solvent's own value): conservative when the gas supply limits the reaction. Enter a measured solubility if you have one."
-    } else {
-        ""
     };
     spread(key, label, Dimension::Concentration, recommendation, estimates)
 }

@@ -8,7 +8,7 @@
 //! Kunii & Levenspiel print them rounded to 2.335 and 1.744. At d* → 0 it tends to Stokes.
 //!
 //! Validity: 0.5 ≤ φ ≤ 1. At φ = 0.8 it is within −12…+3 % of the iterated general form over a
-//! lab-scale grid, the largest gap at Re_t ≈ 140–200 (physics reference §2.2).
+//! lab-scale grid, the largest gap at Re_t ≈ 140–200 (derived: compared over that grid).
 //!
 //! Example (hand calculation): d = 100 µm, ρ_p = 2500 kg/m³ in water (ρ = 1000 kg/m³,
 //! μ = 1 mPa·s), φ = 0.8: d* = 2.45021, u* = 0.277890, v_t = 6.8089 mm/s (five digits).

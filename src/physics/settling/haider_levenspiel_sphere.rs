@@ -7,7 +7,7 @@
 //! B = 0.653, C = 0.437, D = 7185): the two are separate fits.
 //!
 //! Validity: Re ≤ 2×10⁵ (`fluids` 1.3.1). Over a lab-scale grid it lies −5.7…+0.9 % from the
-//! `fluids` default curve (physics reference §2.1).
+//! `fluids` default curve (derived: compared over that grid).
 //!
 //! Example (`fluids` 1.3.1 docstring of `Haider_Levenspiel`): Re = 200 gives 0.7959551680251666
 //! (the check is to 1e-12 relative).

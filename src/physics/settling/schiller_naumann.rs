@@ -5,8 +5,8 @@
 //! speed m/s, d sphere diameter m, μ liquid viscosity Pa·s). It reduces to Stokes as Re → 0.
 //!
 //! Validity: Re < 800 (some codes quote up to 1000; above, C_D ≈ 0.44, Newton). Over a lab-scale
-//! grid (Re_t up to 200) it lies within ±3.6 % of the `fluids` default (Barati) curve (physics
-//! reference §2.1). Not in `fluids` 1.3.1; the formula is confirmed from several public CFD and
+//! grid (Re_t up to 200) it lies within ±3.6 % of the `fluids` default (Barati) curve (derived:
+//! compared over that grid). Not in `fluids` 1.3.1; the formula is confirmed from several public CFD and
 //! DEM codes; the journal details are from memory.
 //!
 //! Example (hand calculation): Re = 1 gives 24 × (1 + 0.15) = 27.6; Re = 200 gives

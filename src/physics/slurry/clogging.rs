@@ -7,7 +7,7 @@
 //! Lhuissier, Rossi & Kähler 2018, single constriction, low-friction charge-stabilised particles,
 //! from about φ = 0.2 down; frictional or irregular solids need larger ratios). r < 10: margin too
 //! small for continuous slurry flow (common practice, no source). Above a solids volume fraction
-//! of 0.1 clogging risk grows quickly (practice reference §4.4, common practice, no source).
+//! of 0.1 clogging risk grows quickly (common practice, no source).
 //! Agglomerates and the top of the distribution (d₉₉) are larger than d₉₀: read r as an upper value.
 //!
 //! Example: a 0.25 mm valve opening with d₉₀ = 100 µm gives r = 2.5: bridging likely.

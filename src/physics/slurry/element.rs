@@ -21,7 +21,7 @@ use crate::physics::units::{Dimension, DynamicViscosity, Length, VolumetricFlow,
 /// threshold: common practice, no source).
 pub const DEPOSIT_CAUTION: f64 = 0.01;
 /// Mass fraction reaching the wall from which a horizontal element is a problem unless the layer
-/// is moved along (physics reference §6 rule 4: Z ≈ 0.1, about 12 %; common practice, no source).
+/// is moved along (Z ≈ 0.1, about 12 %; common practice, no source).
 pub const DEPOSIT_PROBLEM: f64 = 0.1;
 /// Up-flow margin: U ≥ 5 v_h keeps the wall zone slower than the particles below 10 % of the bore
 /// area (this tool's margin: common practice, no source).

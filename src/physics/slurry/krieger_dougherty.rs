@@ -7,12 +7,11 @@
 //!
 //! Constants used: [η] = 2.5 (Einstein, spheres) and φ_max = 0.58 (recommended, the low end of the
 //! 0.58–0.64 range quoted for hard spheres, which gives the higher, safer viscosity) with 0.64
-//! (random close packing) shown beside it. Both φ_max values are from memory, as quoted in the
-//! practice reference §2.7. Irregular particles have higher [η] and lower φ_max: read the result
+//! (random close packing) shown beside it. Both φ_max values are from memory. Irregular particles have higher [η] and lower φ_max: read the result
 //! as a lower bound for them.
 //!
 //! Validity: Newtonian suspensions of non-colloidal, non-aggregating particles, φ < φ_max; from
-//! about φ = 0.1–0.2 shear thinning, migration and clogging change the flow (practice reference).
+//! about φ = 0.1–0.2 shear thinning, migration and clogging change the flow (common practice, no source).
 //!
 //! Example (hand calculation): φ = 0.2, φ_max = 0.58: (1 − 0.344828)^(−1.45) = 1.84622 (six digits).
 //!

@@ -6,7 +6,11 @@
 //! ambient tensile strengths S_u of a supplier burst chart (PTFE 2 500, FEP 3 000, PFA 4 000,
 //! PEEK 13 300 psi), working pressure = P_b / 4 (the 4:1 factor customary for tubing; both from
 //! a supplier technical page). 316 stainless: allowable working pressures of seamless ASTM A269
-//! tube at −28…37 °C per ASME B31.3, from a fitting maker's table reproduced on a supplier page.
+//! tube at −28…37 °C per ASME B31.3, from a fitting maker's table reproduced on a supplier page;
+//! a wall between the tabulated ones is rated as the next thinner tabulated wall (conservative:
+//! the allowable pressure rises with the wall). Temperature factors per material: [`derating`].
+
+pub mod derating;
 
 use serde::Serialize;
 
@@ -124,36 +128,53 @@ impl Material {
         }
     }
 
-    /// Working-pressure factor against temperature, `(°C, factor)`, interpolated linearly.
-    /// Fluoropolymers: a commonly quoted set to be confirmed against a supplier table (from
-    /// memory). PEEK: kept to 100 °C, the common practical limit for solvent service (from
-    /// memory). 316: from a fitting maker's catalogue table (ASME B31.3 allowable stress).
-    fn derating(self) -> &'static [(f64, f64)] {
-        match self {
-            Material::Pfa | Material::Fep | Material::Ptfe => &[(20.0, 1.0), (50.0, 0.8), (100.0, 0.55), (150.0, 0.4), (200.0, 0.3)],
-            Material::Peek => &[(20.0, 1.0), (100.0, 1.0)],
-            Material::Ss316 => &[(20.0, 1.0), (100.0, 1.0), (150.0, 0.95), (200.0, 0.87)],
-        }
+    /// Working-pressure factor at `t` against room temperature (see [`derating`]); `None`
+    /// above the hottest temperature with a rating.
+    pub fn temperature_factor(self, t: Temperature) -> Option<f64> {
+        derating::factor(self, t)
     }
 
-    /// Model information: formula, sources and the temperature range of the derating data.
+    /// Model information: formula, the sources of the room-temperature rating and of the
+    /// temperature factor, and the temperature range covered.
     pub fn info(self) -> ModelInfo {
-        const TO_200_C: &[ValidityBound] =
-            &[ValidityBound { quantity: "temperature", dimension: Dimension::Temperature, low: Some(293.15), high: Some(473.15) }];
-        const TO_100_C: &[ValidityBound] =
-            &[ValidityBound { quantity: "temperature", dimension: Dimension::Temperature, low: Some(293.15), high: Some(373.15) }];
+        const fn to(high_c: f64) -> ValidityBound {
+            ValidityBound { quantity: "temperature", dimension: Dimension::Temperature, low: Some(293.15), high: Some(high_c + 273.15) }
+        }
+        const TO_250_C: &[ValidityBound] = &[to(250.0)];
+        const TO_205_C: &[ValidityBound] = &[to(205.0)];
+        const TO_100_C: &[ValidityBound] = &[to(100.0)];
+        const TO_316_C: &[ValidityBound] = &[to(316.0)];
+        const LAME: &str = "P = S_u (D_o² − D_i²)/(D_o² + D_i²) / 4 × temperature factor";
         match self {
             Material::Ss316 => ModelInfo {
                 name: "ASME B31.3 allowable working pressure",
-                formula: "tabulated by OD and wall; × temperature factor",
-                source: "fitting maker's table (seamless ASTM A269, ASME B31.3) on a supplier technical page; temperature factors from the same catalogue",
-                validity: TO_200_C,
+                formula: "tabulated by OD and wall (a wall between entries: the next thinner one) × temperature factor",
+                source: "fitting maker's table (seamless ASTM A269, ASME B31.3) on a supplier technical page; temperature factors 1.00 to 149 °C, 0.97 at 204 °C, 0.90 at 260 °C, 0.85 at 316 °C from fitting makers' tubing data (DK-Lok TS-04-S (2011) Table 2; Wading-Lok tubing table)",
+                validity: TO_316_C,
             },
-            _ => ModelInfo {
+            Material::Ptfe => ModelInfo {
                 name: "Lamé burst ÷ 4",
-                formula: "P = S_u (D_o² − D_i²)/(D_o² + D_i²) / 4 × temperature factor",
-                source: "tensile strengths of a supplier burst chart; 4:1 factor customary (supplier technical page); polymer temperature factors from memory, to be confirmed",
-                validity: if matches!(self, Material::Peek) { TO_100_C } else { TO_200_C },
+                formula: LAME,
+                source: "tensile strengths of a supplier burst chart, 4:1 factor customary (supplier technical page); temperature factor = published tensile strength hot / at 23 °C: 0.41 at 150 °C (finemech.com/ft005.html), 0.33 at 250 °C (Valqua gasket handbook Table 1.1.13), exponential between",
+                validity: TO_250_C,
+            },
+            Material::Pfa => ModelInfo {
+                name: "Lamé burst ÷ 4",
+                formula: LAME,
+                source: "tensile strengths of a supplier burst chart, 4:1 factor customary (supplier technical page); temperature factor = published tensile strength hot / at 23 °C: 0.51 at 150 °C (finemech.com/ft005.html), 0.41 at 250 °C (Valqua gasket handbook Table 1.1.13), exponential between",
+                validity: TO_250_C,
+            },
+            Material::Fep => ModelInfo {
+                name: "Lamé burst ÷ 4",
+                formula: LAME,
+                source: "tensile strengths of a supplier burst chart, 4:1 factor customary (supplier technical page); temperature factor = published tensile strength hot / at 23 °C: 0.18 at 150 °C (finemech.com/ft005.html), 0.065 at 250 °C (Valqua gasket handbook Table 1.1.13), exponential between; no rating above the 205 °C service temperature",
+                validity: TO_205_C,
+            },
+            Material::Peek => ModelInfo {
+                name: "Lamé burst ÷ 4",
+                formula: LAME,
+                source: "tensile strength of a supplier burst chart, 4:1 factor customary (supplier technical page); temperature factor 0.70 at 100 °C from memory (no published table read), exponential between; no rating above 100 °C",
+                validity: TO_100_C,
             },
         }
     }
@@ -189,65 +210,89 @@ const SS316_TABLE: &[(f64, f64, f64)] = &[
 /// Why no rating can be given.
 #[derive(Debug, Clone, PartialEq, Serialize)]
 pub enum TubingError {
-    /// 316 tube of this wall is not in the table.
+    /// 316 tube of this OD is thinner than every tabulated wall.
     NotTabulated {
         /// The size asked for.
         size: &'static str,
     },
-    /// Above the material's service temperature.
+    /// Above the hottest temperature with a rating.
     TooHot {
         /// The material.
         material: &'static str,
         /// Highest temperature with a rating, °C.
         limit_c: f64,
+        /// Why the rating stops there.
+        why: &'static str,
     },
 }
 
 impl std::fmt::Display for TubingError {
     fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
         match self {
-            TubingError::NotTabulated { size } => write!(f, "no tabulated 316 rating for {size}; enter the rating of your tube"),
-            TubingError::TooHot { material, limit_c } => {
-                write!(f, "{material} tubing has no rating above {limit_c} °C here; use another material or enter a supplier rating")
+            TubingError::NotTabulated { size } => {
+                write!(f, "no rating: the wall of {size} is thinner than every tabulated 316 wall of its OD; enter the rating of your tube")
             }
+            TubingError::TooHot { material, limit_c, why } => write!(
+                f,
+                "no rating: {material} tubing is not rated above {limit_c} °C here ({why}); use another material or enter a supplier rating for this temperature"
+            ),
         }
     }
 }
 
-/// Working pressure (gauge) of `material` tubing of `size` at `t`, with a warning below the
-/// lowest tabulated temperature.
-pub fn working_pressure(material: Material, size: &Size, t: Temperature) -> Result<(PressureDifference, Vec<RangeWarning>), TubingError> {
-    let room = match tensile_psi(material) {
-        Some(s_u) => {
-            let (o2, i2) = (size.od_in.powi(2), size.id_in.powi(2));
-            s_u * (o2 - i2) / (o2 + i2) / 4.0
-        }
-        None => {
-            let wall = (size.od_in - size.id_in) / 2.0;
-            SS316_TABLE
-                .iter()
-                .find(|(od, w, _)| (od - size.od_in).abs() < 1e-6 && (w - wall).abs() < 1e-4)
-                .map(|row| row.2)
-                .ok_or(TubingError::NotTabulated { size: size.key })?
-        }
-    };
-    let table = material.derating();
-    let c = t.celsius();
-    let limit_c = table.last().map_or(20.0, |p| p.0);
-    if c > limit_c {
-        return Err(TubingError::TooHot { material: material.name(), limit_c });
+/// A working pressure and how it was reached.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Rating {
+    /// Working pressure at the temperature (gauge).
+    pub working_pressure: PressureDifference,
+    /// Working pressure at room temperature (gauge).
+    pub room_temperature: PressureDifference,
+    /// Temperature factor applied.
+    pub temperature_factor: f64,
+    /// For 316 between tabulated walls: the thinner tabulated wall used, in.
+    pub rated_wall_in: Option<f64>,
+    /// The temperature below the lowest one covered, if it is.
+    pub warnings: Vec<RangeWarning>,
+}
+
+/// Room-temperature working pressure (psi) and, for 316 between tabulated walls, the wall used.
+fn room_rating(material: Material, size: &Size) -> Result<(f64, Option<f64>), TubingError> {
+    if let Some(s_u) = tensile_psi(material) {
+        let (o2, i2) = (size.od_in.powi(2), size.id_in.powi(2));
+        return Ok((s_u * (o2 - i2) / (o2 + i2) / 4.0, None));
     }
-    let factor = if c <= table[0].0 {
-        1.0
-    } else {
-        table
-            .windows(2)
-            .find(|w| c <= w[1].0)
-            .map_or(table[table.len() - 1].1, |w| w[0].1 + (w[1].1 - w[0].1) * (c - w[0].0) / (w[1].0 - w[0].0))
-    };
+    let wall = (size.od_in - size.id_in) / 2.0;
+    // The thickest tabulated wall not thicker than this one (same OD); 1e-4 in absorbs rounding.
+    SS316_TABLE
+        .iter()
+        .filter(|(od, w, _)| (od - size.od_in).abs() < 1e-6 && *w <= wall + 1e-4)
+        .max_by(|a, b| a.1.total_cmp(&b.1))
+        .map(|&(_, w, psi)| (psi, ((w - wall).abs() > 1e-4).then_some(w)))
+        .ok_or(TubingError::NotTabulated { size: size.key })
+}
+
+/// The rating of `material` tubing of `size` at `t`, with how it was reached.
+pub fn rating(material: Material, size: &Size, t: Temperature) -> Result<Rating, TubingError> {
+    let (room_psi, rated_wall_in) = room_rating(material, size)?;
+    let factor = material.temperature_factor(t).ok_or_else(|| {
+        let (limit_c, why) = derating::limit(material);
+        TubingError::TooHot { material: material.name(), limit_c, why }
+    })?;
     let info = material.info();
     let warnings = info.validity.iter().filter_map(|b| b.check(t.kelvin(), &info)).collect();
-    Ok((PressureDifference::from_si(room * factor * PSI), warnings))
+    Ok(Rating {
+        working_pressure: PressureDifference::from_si(room_psi * factor * PSI),
+        room_temperature: PressureDifference::from_si(room_psi * PSI),
+        temperature_factor: factor,
+        rated_wall_in,
+        warnings,
+    })
+}
+
+/// Working pressure (gauge) of `material` tubing of `size` at `t`, with a warning below the
+/// lowest temperature covered.
+pub fn working_pressure(material: Material, size: &Size, t: Temperature) -> Result<(PressureDifference, Vec<RangeWarning>), TubingError> {
+    rating(material, size, t).map(|r| (r.working_pressure, r.warnings))
 }
 
 /// Chemical-compatibility flag for a material with a named solvent, if one is known (PEEK
@@ -302,16 +347,26 @@ pub fn check(choice: &TubingChoice, inlet: PressureDifference, solvents: &[super
     let size = SIZE.options.iter().find(|o| o.0 == choice.size.key).map_or(choice.size.key, |o| o.1);
     let what = format!("{} {size}", choice.material.name());
     let t = format_significant(choice.temperature.celsius(), 3);
-    let (verdict, mut reason, mut caution) = match working_pressure(choice.material, &choice.size, choice.temperature) {
-        Ok((rating, _)) => {
-            let ratio = inlet.si() / rating.si();
+    let (verdict, mut reason, mut caution) = match rating(choice.material, &choice.size, choice.temperature) {
+        Ok(r) => {
+            let ratio = inlet.si() / r.working_pressure.si();
             let verdict = super::report::budget_verdict(ratio, ratio);
+            let wall = r.rated_wall_in.map_or(String::new(), |w| {
+                format!(
+                    "; rated as the next thinner tabulated wall, {}″ (conservative: this wall is not in the ASME B31.3 table)",
+                    format_significant(w, 2)
+                )
+            });
+            let info = choice.material.info();
             (
                 verdict,
                 format!(
-                    "{what} at {t} °C: working pressure {} bar(g) ({}); the inlet pressure {} bar(g) is {:.0} % of it{}.",
-                    format_significant(rating.bar(), 3),
-                    choice.material.info().name,
+                    "{what} at {t} °C: working pressure {} bar(g) = {} bar(g) at room temperature ({}{wall}) × temperature factor {} (source: {}); the inlet pressure {} bar(g) is {:.0} % of it{}.",
+                    format_significant(r.working_pressure.bar(), 3),
+                    format_significant(r.room_temperature.bar(), 3),
+                    info.name,
+                    format_significant(r.temperature_factor, 2),
+                    info.source,
                     format_significant(inlet.bar(), 3),
                     ratio * 100.0,
                     if verdict == Verdict::Caution { " (less than 20 % margin: common practice, no source)" } else { "" }
