@@ -199,6 +199,8 @@ const SEGMENTED_FLOW_LAYOUT: &[FormItem] = &[
     Field(gas::BACK_PRESSURE),
     Field(crate::physics::ambient::AMBIENT_PRESSURE),
     Field(gas::RATING),
+    Choice(crate::physics::tubing::MATERIAL),
+    Choice(crate::physics::tubing::SIZE),
     Choice(gas::CONSUMPTION),
     Field(gas::CONSUMED_FRACTION),
     Choice(gas::LOC_SOURCE),
@@ -287,6 +289,16 @@ impl Calculator {
             Calculator::PackedBed => "packed-bed-demo.json",
             Calculator::SlurryLine => "slurry-demo.json",
             Calculator::SegmentedFlow => "segmented-flow-demo.json",
+        }
+    }
+
+    /// Choices added to this calculator after case files of format version 1 were first written,
+    /// with the option a file that lacks them is read with (the page reads any missing choice as
+    /// its first option; the command line reads these the same way).
+    pub const fn added_choices(self) -> &'static [(&'static str, &'static str)] {
+        match self {
+            Calculator::SegmentedFlow => &[("tubing_material", "none")],
+            Calculator::TubularReactor | Calculator::PackedBed | Calculator::SlurryLine => &[],
         }
     }
 
@@ -407,7 +419,7 @@ impl std::error::Error for CaseError {}
 impl CaseFile {
     /// Parses case JSON and checks the version and the field keys.
     pub fn from_json(text: &str) -> Result<Self, CaseError> {
-        let case: CaseFile = serde_json::from_str(text).map_err(|e| CaseError::Format(e.to_string()))?;
+        let mut case: CaseFile = serde_json::from_str(text).map_err(|e| CaseError::Format(e.to_string()))?;
         if case.clearbore_case != FORMAT_VERSION {
             return Err(CaseError::Format(format!(
                 "format version {} is not supported (this build reads version {FORMAT_VERSION})",
@@ -432,6 +444,9 @@ impl CaseFile {
                 }
             }
             None => {}
+        }
+        for (key, option) in case.calculator.added_choices() {
+            case.inputs.entry((*key).to_owned()).or_insert_with(|| Entry::Choice((*option).to_owned()));
         }
         Ok(case)
     }
