@@ -1,6 +1,8 @@
-//! Segmented-flow physics against published values (film pairs, Kreutzer multiplier), reference
-//! values from fluids 1.3.1 (dimensionless groups), closed forms and a fine fixed-step integration
-//! of the pressure profile, validity-edge warnings, invariants, and the calculator end to end.
+//! Segmented-flow physics against published values (film pairs, Kreutzer's f·Re, Liu et al.'s
+//! explicit form, van Baten & Krishna's typical run and film lengths, Aussillous & Quéré's
+//! inertial threshold), reference values from fluids 1.3.1 (dimensionless groups), closed forms
+//! and a fine fixed-step integration of the pressure profile, validity-edge warnings, invariants,
+//! and the calculator end to end (residence time, slug pattern, vapour, wording, tubing).
 #![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
 
 mod common;
