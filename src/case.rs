@@ -201,6 +201,8 @@ const SEGMENTED_FLOW_LAYOUT: &[FormItem] = &[
     Field(gas::BACK_PRESSURE),
     Field(crate::physics::ambient::AMBIENT_PRESSURE),
     Field(gas::RATING),
+    Choice(crate::physics::tubing::MATERIAL),
+    Choice(crate::physics::tubing::SIZE),
     Choice(gas::CONSUMPTION),
     Field(gas::CONSUMED_FRACTION),
     Choice(gas::LOC_SOURCE),
@@ -292,6 +294,18 @@ impl Calculator {
         }
     }
 
+    /// Entries added to this calculator after case files of format version 1 were first written,
+    /// with the value a file that lacks them is read with, so that older files open unchanged on
+    /// the page and the command line alike.
+    pub const fn added_entries(self) -> &'static [(&'static str, Added)] {
+        const PUMP: (&str, Added) = ("pump_max_flow", Added::Quantity(10.0, "mL/min"));
+        match self {
+            Calculator::SegmentedFlow => &[("tubing_material", Added::Choice("none"))],
+            Calculator::PackedBed | Calculator::SlurryLine => &[PUMP],
+            Calculator::TubularReactor => &[],
+        }
+    }
+
     /// Whether `key` names one of this calculator's fields or choices.
     pub fn knows(self, key: &str) -> bool {
         layout_has(self.layout(), key)
@@ -317,6 +331,25 @@ impl Calculator {
                 let input = PackedBedInput::from_source(src).map_err(CaseError::Inputs)?;
                 bed::evaluate(&input).map_err(CaseError::Numerical)
             }
+        }
+    }
+}
+
+/// The value an entry added after version 1 takes in a file that lacks it.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum Added {
+    /// A quantity: number and unit symbol (the stated default, e.g. the pump's 10 mL/min).
+    Quantity(f64, &'static str),
+    /// An option key.
+    Choice(&'static str),
+}
+
+impl Added {
+    /// The entry it stands for.
+    pub fn entry(self) -> Entry {
+        match self {
+            Added::Quantity(value, unit) => Entry::Quantity { value, unit: unit.to_owned() },
+            Added::Choice(key) => Entry::Choice(key.to_owned()),
         }
     }
 }
@@ -409,7 +442,7 @@ impl std::error::Error for CaseError {}
 impl CaseFile {
     /// Parses case JSON and checks the version and the field keys.
     pub fn from_json(text: &str) -> Result<Self, CaseError> {
-        let case: CaseFile = serde_json::from_str(text).map_err(|e| CaseError::Format(e.to_string()))?;
+        let mut case: CaseFile = serde_json::from_str(text).map_err(|e| CaseError::Format(e.to_string()))?;
         if case.clearbore_case != FORMAT_VERSION {
             return Err(CaseError::Format(format!(
                 "format version {} is not supported (this build reads version {FORMAT_VERSION})",
@@ -434,6 +467,9 @@ impl CaseFile {
                 }
             }
             None => {}
+        }
+        for (key, added) in case.calculator.added_entries() {
+            case.inputs.entry((*key).to_owned()).or_insert_with(|| added.entry());
         }
         Ok(case)
     }

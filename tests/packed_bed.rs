@@ -473,6 +473,7 @@ fn case() -> Case {
             ("voidage", (40.0, "%")),
             ("particle_density", (2.5, "g/mL")),
             ("flow", (1.0, "mL/min")),
+            ("pump_max_flow", (10.0, "mL/min")),
             ("density", (1.0, "g/mL")),
             ("viscosity", (1.0, "mPa·s")),
             ("back_pressure", (5.0, "bar")),

@@ -492,6 +492,7 @@ fn line_case() -> Case {
             ("back_pressure", (5.0, "bar")),
             ("ambient_pressure", (1.01325, "bar")),
             ("pressure_rating", (40.0, "bar")),
+            ("pump_max_flow", (10.0, "mL/min")),
         ]),
         choices: HashMap::from([("size_mode", "distribution"), ("loading_basis", "mass"), ("operation", "single_pass"), ("liquid", "custom"), ("tubing_material", "none"), ("solid", "entered")]),
     }

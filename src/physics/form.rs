@@ -40,24 +40,6 @@ pub trait FieldSource {
     fn quantity(&self, spec: &FieldSpec) -> Result<f64, InputError>;
     /// The index of the chosen option of a choice field.
     fn choice(&self, spec: &ChoiceSpec) -> Result<usize, InputError>;
-
-    /// The value of a quantity field added after case files were first written: a source that
-    /// does not hold the entry at all gives `default` (SI); a present entry is validated as usual.
-    fn quantity_or(&self, spec: &FieldSpec, default: f64) -> Result<f64, InputError> {
-        match self.quantity(spec) {
-            Err(e) if e.given == MISSING => Ok(default),
-            other => other,
-        }
-    }
-
-    /// The option of a choice field added after case files were first written: a source that
-    /// does not hold the entry gives option `default`.
-    fn choice_or(&self, spec: &ChoiceSpec, default: usize) -> Result<usize, InputError> {
-        match self.choice(spec) {
-            Err(e) if e.given == MISSING => Ok(default),
-            other => other,
-        }
-    }
 }
 
 /// Collects field errors so that every bad field is reported at once, not just the first.

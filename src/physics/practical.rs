@@ -8,9 +8,6 @@ use super::input::{FieldSpec, field, lab};
 use super::report::{Check, Verdict};
 use super::units::{Dimension, VolumetricFlow, format_significant};
 
-/// Default of the pump's largest flow, 10 mL/min: the top of a typical HPLC-type lab pump's
-/// range (common practice, no source). Used when a case file leaves the entry out.
-pub const DEFAULT_PUMP_MAX_FLOW: f64 = 10e-6 / 60.0;
 
 /// The pump's largest flow: the ceiling of every flow a remedy may ask for.
 pub const PUMP_MAX_FLOW: FieldSpec = field(
@@ -44,10 +41,10 @@ pub const CARTRIDGE_LENGTH: (f64, f64) = (10e-3, 0.3);
 /// laminar–transitional boundary in round pipes; common practice, no source).
 pub const LAMINAR_REYNOLDS: f64 = 2000.0;
 
-/// Reads the pump's largest flow; a case file written before the entry existed takes the
-/// default (an entry that is present but wrong is still an error).
+/// Reads the pump's largest flow (a case file written before the entry existed is given the
+/// stated default of 10 mL/min when it is opened: `Calculator::added_entries`).
 pub fn read_pump_max_flow(src: &dyn FieldSource, c: &mut Collector) -> Option<f64> {
-    c.take(src.quantity_or(&PUMP_MAX_FLOW, DEFAULT_PUMP_MAX_FLOW))
+    c.take(src.quantity(&PUMP_MAX_FLOW))
 }
 
 /// Whether the pump can deliver the entered flow: key `pump_flow`, a problem above its largest flow.

@@ -93,6 +93,14 @@ pub struct ModelInfo {
     pub validity: &'static [ValidityBound],
 }
 
+impl ModelInfo {
+    /// Whether any of its numbers rest on recall rather than a source read: true when the source
+    /// says "from memory" (in any letter case).
+    pub fn from_memory(&self) -> bool {
+        self.source.to_lowercase().contains("from memory")
+    }
+}
+
 /// A value outside a correlation's range: computed anyway, and said so.
 #[derive(Debug, Clone, PartialEq, Serialize)]
 pub struct RangeWarning {
@@ -333,5 +341,20 @@ impl Report {
     /// Every range warning of every estimate, recommended estimates first.
     pub fn warnings(&self) -> impl Iterator<Item = &RangeWarning> {
         self.figures.iter().flat_map(|f| f.estimates.iter().flat_map(|e| e.warnings.iter()))
+    }
+}
+
+#[cfg(test)]
+#[allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn from_memory_reads_the_mark_in_any_case() {
+        let info = |source| ModelInfo { name: "x", formula: "y", source, validity: &[] };
+        assert!(info("Smith (1990) J. X 1, 2–3 (constants from memory)").from_memory());
+        assert!(info("From memory").from_memory());
+        assert!(!info("Smith (1990) J. X 1, 2–3, doi:10.1/x").from_memory());
+        assert!(!info("derived").from_memory());
     }
 }

@@ -1,11 +1,12 @@
 //! Result views: `ResultTable` (each figure with its unit picker, model and source on demand),
-//! `ModelSpread` (every correlation's value when several apply) and `CheckList` (verdicts with
-//! their reasons and safety cautions side by side).
+//! `ModelSpread` (every correlation's value when several apply, with a "from memory" tag on models
+//! whose numbers rest on recall) and `CheckList` (verdicts with their reasons and safety cautions
+//! side by side).
 
 use leptos::prelude::*;
 
 use super::display::use_display;
-use crate::physics::report::{Check, Figure, RangeWarning, Report, Verdict};
+use crate::physics::report::{Check, Figure, ModelInfo, RangeWarning, Report, Verdict};
 use crate::physics::units::{Dimension, Unit, format_significant, unit_by_symbol};
 
 /// Formats an SI value in `unit` with the page's significant figures.
@@ -84,15 +85,24 @@ fn ResultRow(key: &'static str, report: Signal<Option<Report>>) -> impl IntoView
     }
 }
 
+/// A visible "from memory" tag for a model whose numbers rest on recall; `testid` is its
+/// `data-testid`.
+fn recalled_tag(model: &ModelInfo, testid: String) -> Option<impl IntoView + use<>> {
+    model.from_memory().then(|| {
+        view! { <span class="recalled" data-testid=testid title="Numbers recalled from memory, not read in a source">"from memory"</span> }
+    })
+}
+
 /// The model, formula, source and range warnings of a figure, folded away until asked for.
 #[component]
 fn ModelDetails(figure: Figure, unit: Signal<Unit>) -> impl IntoView {
     let recommended = figure.estimates.iter().find(|e| e.recommended).or(figure.estimates.first()).cloned();
     let warnings: Vec<String> = figure.estimates.iter().flat_map(|e| e.warnings.iter().map(warning_text)).collect();
     let several = figure.estimates.len() > 1;
+    let tag = recommended.as_ref().and_then(|e| recalled_tag(&e.model, format!("recalled-{}", figure.key)));
     view! {
         <details>
-            <summary>{recommended.as_ref().map(|e| e.model.name).unwrap_or("")}{(!warnings.is_empty()).then_some(" ⚠")}</summary>
+            <summary>{recommended.as_ref().map(|e| e.model.name).unwrap_or("")}{tag}{(!warnings.is_empty()).then_some(" ⚠")}</summary>
             {recommended.map(|e| view! {
                 <p class="formula">{e.model.formula}</p>
                 <p class="source">"Source: " {e.model.source}</p>
@@ -111,14 +121,17 @@ pub fn ModelSpread(figure: Figure, unit: Signal<Unit>) -> impl IntoView {
     let mid = figure.value.get();
     let rel = if mid != 0.0 { 100.0 * (hi - lo) / mid.abs() } else { 0.0 };
     let rows = figure.estimates.clone();
+    let key = figure.key;
     view! {
         <table class="spread" data-testid=format!("spread-{}", figure.key)>
             {rows
                 .into_iter()
-                .map(|e| {
+                .enumerate()
+                .map(|(i, e)| {
+                    let tag = recalled_tag(&e.model, format!("recalled-{key}-{i}"));
                     view! {
                         <tr class:recommended=e.recommended>
-                            <td>{e.model.name}{e.recommended.then_some(" (recommended)")}</td>
+                            <td>{e.model.name}{tag}{e.recommended.then_some(" (recommended)")}</td>
                             <td>{move || shown(e.value.get(), unit.get(), sig.get())}</td>
                         </tr>
                     }

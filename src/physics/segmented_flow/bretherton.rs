@@ -20,15 +20,22 @@
 //! assert!((bubble_pressure_drop(1e-3, 1.0, 1.0) - 0.094020).abs() < 5e-7);
 //! ```
 //!
+//! Provenance: the film coefficient 1.34 (0.643 × 3^(2/3) = 1.3375) is Bretherton's, as
+//! Aussillous & Quéré (2000, Phys. Fluids 12, 2367–2371) state and Akbar & Ghiaasiaan (2006,
+//! Ind. Eng. Chem. Res. 45, 5396–5403, doi:10.1021/ie0601551) write it (2δ/D = 1.34 Ca^(2/3) as
+//! Ca → 0); the velocity and pressure coefficients 1.29 and 4.52 are as given in a public
+//! validation document of a volume-of-fluid code, not read in the paper.
+//!
 //! References: F. P. Bretherton, The motion of long bubbles in tubes, J. Fluid Mech. 10 (1961)
-//! 166–188 (coefficients as given in a public validation document of a volume-of-fluid code);
+//! 166–188, doi:10.1017/S0022112061000160 (not read);
 //! M. J. F. Warnier et al., Microfluid. Nanofluid. 8 (2010) 33–45 (from memory).
 
 use super::flow::CAPILLARY_BUBBLE;
 use crate::physics::report::{ModelInfo, ValidityBound};
 use crate::physics::units::Dimension;
 
-/// Upper Ca of the asymptotic film and pressure results (`physics.md` §3.5).
+/// Upper Ca of the asymptotic film and pressure results: there Bretherton's film is already 7 %
+/// thicker than Aussillous–Quéré's, which holds up to Ca ≈ 1 (derived).
 pub const CA_LIMIT: f64 = 3e-3;
 
 const VALIDITY: &[ValidityBound] =
@@ -38,7 +45,7 @@ const VALIDITY: &[ValidityBound] =
 pub const FILM_INFO: ModelInfo = ModelInfo {
     name: "Bretherton film",
     formula: "δ/R = 0.643 (3 Ca_B)^(2/3)",
-    source: "Bretherton (1961) J. Fluid Mech. 10, 166–188",
+    source: "Bretherton (1961) J. Fluid Mech. 10, 166–188; coefficient 1.34 as confirmed by Aussillous & Quéré (2000)",
     validity: VALIDITY,
 };
 

@@ -5,14 +5,14 @@
 //! Formula: U_TP / U_B = (1 − h)², h = δ/R from [`super::aussillous_quere`] at Ca_B = μ_L U_B / σ.
 //! Because h depends on U_B, it is solved by fixed-point iteration U_B ← U_TP / (1 − h(Ca_B))²,
 //! starting from U_B = U_TP; the map contracts for Ca up to order one and settles to 1e-13 in
-//! well under 50 steps at lab conditions (`physics.md` §3.6: < 20 steps). The gas holdup follows
+//! well under 50 steps at lab conditions (tested). The gas holdup follows
 //! as ε_G = j_G / U_B.
 //!
 //! Validity: as the film correlation (wetting liquid, low inertia); a stationary film is the
 //! long-bubble limit. Ca_B up to ~1 in principle; the other Taylor-flow correlations stop near
 //! 0.01–0.05.
 //!
-//! Example (inverse of the published A–Q pair, `physics.md` §3.5): at Ca_B = 0.0112414 the film
+//! Example (inverse of one printed (Ca_B, h) pair of the Aussillous–Quéré film): at Ca_B = 0.0112414 the film
 //! is h = 0.0575664, so a bubble moving at U_B = Ca_B σ/μ (σ = 0.07 N/m, μ = 1 mPa·s:
 //! 0.786898 m/s) must carry U_TP = U_B (1 − h)² = 0.698022 m/s; solving from that U_TP gives U_B
 //! back to 1e-9.
@@ -26,9 +26,10 @@
 //! assert!((s.film - 0.0575664).abs() < 5e-7);
 //! ```
 //!
-//! Reference: the continuity identity as written in a public validation document of a
-//! volume-of-fluid code (`physics.md` §3.6); film: Aussillous & Quéré (2000), Phys. Fluids 12,
-//! 2367–2371.
+//! Reference: derived — the volume balance across a bubble, A_b U_B = A U_LS + Q_film (van Baten
+//! & Krishna 2004, Chem. Eng. Sci. 59, 2535–2545, eq. 17, after Thulasidas et al. 1995), with the
+//! film at rest (Q_film = 0) and the slug moving at U_TP; film: Aussillous & Quéré (2000), Phys.
+//! Fluids 12, 2367–2371.
 
 use super::aussillous_quere;
 use super::error::SegmentedFlowError;
@@ -38,7 +39,7 @@ use crate::physics::report::ModelInfo;
 pub const INFO: ModelInfo = ModelInfo {
     name: "Continuity with a stationary film (Aussillous–Quéré film)",
     formula: "U_TP/U_B = (1 − δ/R)², δ/R by Aussillous–Quéré at Ca_B; fixed-point iteration",
-    source: "mass balance; film: Aussillous & Quéré (2000) Phys. Fluids 12, 2367–2371",
+    source: "mass balance with the film at rest (derived); film: Aussillous & Quéré (2000) Phys. Fluids 12, 2367–2371",
     validity: aussillous_quere::INFO.validity,
 };
 

@@ -7,7 +7,7 @@
 //! δ = h D/2; ε_G = j_G / U_B; with a stationary film the gas and liquid fluxes are carried in
 //! the bubble and slug sections, so L_B / L_S = Q_G / Q_L and L_B = β L_UC; the bubble frequency
 //! is f_b = U_B / L_UC; the specific area (per unit-cell volume, cylindrical bubble body, caps
-//! ignored) is a = 4 ε_G / (D − 2δ) (derived, `physics.md` §3.8).
+//! ignored) is a = 4 ε_G / (D − 2δ) (derived).
 
 use super::bubble_velocity::{self, BubbleMotion};
 use super::error::SegmentedFlowError;
@@ -19,7 +19,7 @@ use crate::physics::report::ModelInfo;
 pub const INFO: ModelInfo = ModelInfo {
     name: "Unit-cell bookkeeping",
     formula: "ε_G = j_G/U_B; L_UC = L_B + L_S; L_B = β L_UC; f_b = U_B/L_UC; a = 4 ε_G/(D − 2δ)",
-    source: "mass balance with a stationary film (derived; physics.md §3.2, §3.8)",
+    source: "mass balance with a stationary film (derived)",
     validity: &[],
 };
 
@@ -27,7 +27,7 @@ pub const INFO: ModelInfo = ModelInfo {
 pub const AREA_INFO: ModelInfo = ModelInfo {
     name: "Specific interfacial area",
     formula: "a = 4 ε_G / (D − 2δ) (bubble body only, caps ignored)",
-    source: "geometry (derived; physics.md §3.8)",
+    source: "geometry (derived)",
     validity: &[],
 };
 

@@ -7,12 +7,12 @@
 //! largest confined bore is D_max = √(3.37 σ / (g (ρ_L − ρ_G))).
 //!
 //! Provenance: the criterion is Bretherton's; the number 3.37 (0.842 on the radius) is from
-//! memory as transcribed in `physics.md` §3.4, not checked against the paper. The confinement
+//! memory, not checked against the paper (no readable text gave it). The confinement
 //! number Co = √(σ/(gΔρ))/D > 0.5 (Kew & Cornwell 1997, from memory) is the same criterion
 //! within a factor.
 //!
-//! Example (`physics.md` §3.4, from reference-fluid data): water at 25 °C (ρ = 997.05 kg/m³,
-//! σ = 71.97 mN/m; from memory) gives D_max = 4.98 mm.
+//! Example (hand calculation): water at 25 °C (ρ = 997.05 kg/m³, σ = 71.97 mN/m; from memory)
+//! gives D_max = 4.98 mm.
 //!
 //! ```
 //! use clearbore::physics::segmented_flow::confinement::largest_confined_diameter;

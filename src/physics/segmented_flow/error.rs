@@ -28,6 +28,8 @@ pub enum SegmentedFlowError {
     Property(PropertyError),
     /// The gas is used up before the outlet: the consumption exceeds the feed.
     GasExhausted,
+    /// The liquid's vapour pressure reaches the outlet pressure: it boils.
+    Boils,
 }
 
 impl std::fmt::Display for SegmentedFlowError {
@@ -41,6 +43,7 @@ impl std::fmt::Display for SegmentedFlowError {
             SegmentedFlowError::Numerical(e) => e.fmt(f),
             SegmentedFlowError::Property(e) => e.fmt(f),
             SegmentedFlowError::GasExhausted => f.write_str("all gas is consumed before the outlet: segmented flow ends inside the coil"),
+            SegmentedFlowError::Boils => f.write_str("the liquid boils at the outlet pressure: raise the back-pressure or lower the temperature"),
         }
     }
 }

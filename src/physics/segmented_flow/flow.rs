@@ -22,6 +22,18 @@ pub const REYNOLDS_TP: &str = "two-phase Reynolds number Re = ρ_L U_TP D / μ_L
 pub const GAS_FRACTION: &str = "feed gas fraction β = Q_G / (Q_G + Q_L)";
 /// Name of the tube bore in validity bounds.
 pub const DIAMETER: &str = "tube inner diameter D";
+/// Name of the unit-cell length (one bubble and one slug) in validity bounds.
+pub const UNIT_CELL: &str = "unit-cell length L_UC";
+/// Name of the bubble velocity in validity bounds.
+pub const BUBBLE_VELOCITY: &str = "bubble velocity U_B";
+/// Name of the two-phase velocity in validity bounds.
+pub const TWO_PHASE_VELOCITY: &str = "two-phase velocity U_TP";
+/// Name of the gas holdup (bubble volume over unit-cell volume) in validity bounds.
+pub const GAS_HOLDUP: &str = "gas holdup ε_G";
+/// Name of the bubble length over the bore in validity bounds.
+pub const BUBBLE_LENGTH_RATIO: &str = "bubble length over bore L_B/D";
+/// Name of the slug length over the bore in validity bounds.
+pub const SLUG_LENGTH_RATIO: &str = "slug length over bore L_S/D";
 
 /// Gas–liquid flow at one place in the tube.
 #[derive(Debug, Clone, Copy, PartialEq)]

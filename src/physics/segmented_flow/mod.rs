@@ -9,6 +9,7 @@ pub mod bercic_pintar;
 pub mod bretherton;
 pub mod bubble_velocity;
 pub mod cell;
+pub mod checks;
 pub mod confinement;
 pub mod error;
 pub mod flow;
@@ -26,9 +27,10 @@ pub mod van_baten_krishna;
 pub mod van_steijn;
 pub mod vandu;
 pub mod yue;
+pub mod yue_2009;
 
 pub use error::SegmentedFlowError;
-pub use pressure_profile::{Coil, GasExpansion, PressureDropModel, Profile};
+pub use pressure_profile::{Coil, GasExpansion, PressureDropModel, Profile, Vapour};
 
 use serde::Serialize;
 
@@ -36,11 +38,12 @@ use self::cell::UnitCell;
 use self::flow::{CAPILLARY_BUBBLE, range_warnings};
 use super::fluids::{self, Liquid, Solvent};
 use super::form::{ChoiceSpec, Collector, FieldSource};
-use super::gases::reference_state::{self, GAS_CONSTANT};
-use super::hazards;
+use super::gases::reference_state;
 use super::gases::{Gas, HenrySolubility, MolarFlow, ReferenceFlow, ReferenceState, henry, sutherland};
+use super::hazards;
 use super::input::{Allowed, FieldSpec, InputError};
 use super::report::{Check, Estimate, Figure, Finite, ModelInfo, RangeWarning, Report, Verdict, budget_verdict};
+use super::tubing::{self, TubingChoice};
 use super::units::{
     Concentration, Diffusivity, Dimension, DynamicViscosity, Length, MolarMass, Pressure, PressureDifference,
     Temperature, VolumetricFlow, format_significant,
@@ -195,6 +198,8 @@ pub struct SegmentedFlowInput {
     /// The limiting oxygen concentration entered for the liquid, if any (oxidising gases only);
     /// `None` takes the estimate of [`crate::physics::hazards::oxygen::limit_for`].
     pub limiting_oxygen: Option<f64>,
+    /// The coil's tubing from the table, for its rating at temperature.
+    pub tubing: Option<TubingChoice>,
 }
 
 fn gas_of(index: usize) -> Gas {
@@ -271,9 +276,10 @@ impl SegmentedFlowInput {
             Some(_) => c.take(src.quantity(&CONSUMED_FRACTION)),
             None => None,
         };
-        let (Some(gas), Some(y), Some(flow), Some(state), Some(ql), Some(cn), Some(d), Some(l), Some(t), Some(bp), Some(rating), Some(liquid), Some(consumed), Some(cross), Some(w), Some(ambient), Some(limiting_oxygen)) = (
+        let tubing = tubing::read(src, &mut c, &TEMPERATURE);
+        let (Some(gas), Some(y), Some(flow), Some(state), Some(ql), Some(cn), Some(d), Some(l), Some(t), Some(bp), Some(rating), Some(liquid), Some(consumed), Some(cross), Some(w), Some(ambient), Some(limiting_oxygen), Some(tubing)) = (
             gas, gas_mole_fraction, flow, state, liquid_flow, concentration, inner_diameter, length, temperature, back_pressure, rating,
-            liquid, consumed_fraction, cross_junction, junction_width, ambient, limiting_oxygen,
+            liquid, consumed_fraction, cross_junction, junction_width, ambient, limiting_oxygen, tubing,
         ) else {
             return Err(c.into_errors());
         };
@@ -294,6 +300,7 @@ impl SegmentedFlowInput {
             liquid,
             consumed_fraction: consumed,
             limiting_oxygen,
+            tubing,
         })
     }
 
@@ -327,7 +334,7 @@ impl SegmentedFlowInput {
 pub const RESIDENCE_TIME_INFO: ModelInfo = ModelInfo {
     name: "Residence time in segmented flow",
     formula: "τ = ∫ dz / U_B (liquid rides in the slugs at the bubble velocity)",
-    source: "derived (physics.md §3.6), integrated along the pressure profile",
+    source: "derived, integrated along the pressure profile",
     validity: &[],
 };
 
@@ -343,7 +350,7 @@ pub const NOMINAL_RESIDENCE_INFO: ModelInfo = ModelInfo {
 pub const INLET_PRESSURE_INFO: ModelInfo = ModelInfo {
     name: "Pressure profile",
     formula: "P_in = P_out + ∫ (dP/dz) dz, integrated upstream with the gas expanding (isothermal ideal gas)",
-    source: "derived (physics.md §3.10); gradient by Kreutzer et al. (2005), a = 0.17",
+    source: "derived; gradient by Kreutzer et al. (2005), a = 0.17",
     validity: &[],
 };
 
@@ -396,6 +403,15 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
     let consumed = MolarFlow::from_si(reactive_feed.si() * input.consumed_fraction);
     let (molar_mass, gas_viscosity, gas_warnings) = input.feed_properties();
     let p_out = Pressure::from_gauge(input.back_pressure, input.ambient);
+    // The gas slugs carry the solvent's vapour, unless the liquid boils at the outlet (reported by
+    // the boiling check) or its vapour pressure is unknown (an entered liquid).
+    let vapour = match input.liquid {
+        LiquidSpec::Solvent { solvent, .. } => liquid
+            .vapour_pressure
+            .filter(|p_sat| p_sat.pascals() < p_out.pascals())
+            .map(|pressure| Vapour { pressure, molar_mass: solvent.molar_mass() }),
+        LiquidSpec::Custom { .. } => None,
+    };
     let coil = Coil {
         diameter: input.inner_diameter,
         junction_width: input.junction_width,
@@ -408,6 +424,7 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
         gas_viscosity,
         consumption: consumed,
         outlet_pressure: p_out,
+        vapour,
         length_model: lengths::RECOMMENDED,
         pressure_model: pressure_profile::RECOMMENDED,
         expansion: GasExpansion::Isothermal,
@@ -437,12 +454,22 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
     let u_tp = f.two_phase_velocity();
     let bond = f.bond();
 
+    let (flow_info, density_info) = match vapour {
+        Some(_) => (pressure_profile::SATURATED_FLOW_INFO, pressure_profile::SATURATED_DENSITY_INFO),
+        None => (pressure_profile::DRY_FLOW_INFO, reference_state::DENSITY_INFO),
+    };
     let mut figures = vec![
         Figure::definition("gas_molar_flow_mmol_per_min", "Gas fed (mmol/min, all species)", Dimension::Number, reference_state::MOLAR_FLOW_INFO, feed.mmol_per_min())?,
         Figure::definition("gas_equivalents", "Reactive gas per mole of substrate (equivalents)", Dimension::Number, reference_state::EQUIVALENTS_INFO, reactive_feed.equivalents(input.concentration, input.liquid_flow))?,
-        Figure::definition("gas_flow_inlet", "Actual gas flow at the inlet", Dimension::VolumetricFlow, reference_state::ACTUAL_FLOW_INFO, feed.si() * GAS_CONSTANT * t.kelvin() / profile.inlet_pressure)?,
-        Figure::definition("gas_flow_outlet", "Actual gas flow at the outlet", Dimension::VolumetricFlow, reference_state::ACTUAL_FLOW_INFO, f.gas_flow.si())?,
-        Figure::definition("gas_density_outlet", "Gas density at the outlet", Dimension::Density, reference_state::DENSITY_INFO, f.gas_density.si())?,
+        Figure::definition("gas_flow_inlet", "Actual gas flow at the inlet", Dimension::VolumetricFlow, flow_info, junction.flow.gas_flow.si())?,
+        Figure::definition("gas_flow_outlet", "Actual gas flow at the outlet", Dimension::VolumetricFlow, flow_info, f.gas_flow.si())?,
+    ];
+    if let Some(v) = vapour {
+        let p_sat = v.pressure.pascals();
+        figures.push(Figure::definition("vapour_volume_added", "Gas volume added by the solvent's vapour (outlet)", Dimension::Fraction, pressure_profile::VAPOUR_SHARE_INFO, p_sat / (p_out.pascals() - p_sat))?);
+    }
+    figures.extend([
+        Figure::definition("gas_density_outlet", "Gas density at the outlet", Dimension::Density, density_info, f.gas_density.si())?,
         Figure::single("gas_viscosity", "Gas viscosity", Dimension::DynamicViscosity, sutherland::INFO, gas_viscosity.si(), gas_warnings)?,
         Figure::definition("gas_fraction_outlet", "Gas fraction β at the outlet", Dimension::Fraction, flow::BOOKKEEPING_INFO, f.gas_fraction())?,
         Figure::definition("two_phase_velocity_outlet", "Two-phase velocity U_TP at the outlet", Dimension::Velocity, flow::BOOKKEEPING_INFO, u_tp.si())?,
@@ -450,9 +477,12 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
         Figure::definition("capillary_outlet", "Capillary number Ca (U_TP, outlet)", Dimension::Number, flow::GROUPS_INFO, f.capillary(u_tp))?,
         Figure::definition("reynolds_outlet", "Reynolds number Re (U_TP, outlet)", Dimension::Number, flow::GROUPS_INFO, f.reynolds(u_tp))?,
         Figure::definition("weber_outlet", "Weber number We (U_TP, outlet)", Dimension::Number, flow::GROUPS_INFO, f.weber(u_tp))?,
-    ];
+    ]);
     let ca_b = outlet.bubble.capillary;
-    let ca_warn = |info: &ModelInfo| range_warnings(info, &[(CAPILLARY_BUBBLE, ca_b), (flow::DIAMETER, d)]);
+    let ca_star = aussillous_quere::inertial_threshold(f.liquid.viscosity.si(), f.liquid.surface_tension.si(), f.liquid.density.si(), d / 2.0);
+    let ca_warn = |info: &ModelInfo| {
+        range_warnings(info, &[(CAPILLARY_BUBBLE, ca_b), (flow::DIAMETER, d), (aussillous_quere::INERTIAL_RATIO, ca_b / ca_star)])
+    };
     figures.push(spread(
         "film_thickness",
         "Wall film thickness at the outlet",
@@ -464,8 +494,8 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
         ],
     )?);
     let mut ub = vec![estimate("bubble velocity", bubble_velocity::INFO, outlet.bubble.velocity, true, ca_warn(&bubble_velocity::INFO))?];
-    if let Ok(u) = liu::bubble_velocity(u_tp.si(), f.liquid.viscosity.si(), f.liquid.surface_tension.si()) {
-        ub.push(estimate("bubble velocity", liu::INFO, u, false, range_warnings(&liu::INFO, &[(CAPILLARY_BUBBLE, f.capillary(super::units::Velocity::from_si(u))), (flow::DIAMETER, d)]))?);
+    if let Some(u) = liu::bubble_velocity(u_tp.si(), f.liquid.viscosity.si(), f.liquid.surface_tension.si()) {
+        ub.push(estimate("bubble velocity", liu::INFO, u, false, range_warnings(&liu::INFO, &[(flow::DIAMETER, d)]))?);
     }
     figures.push(spread("bubble_velocity", "Bubble velocity at the outlet", Dimension::Velocity, "Continuity with a stationary film: a mass balance, with the best-tested film correlation; Liu et al. is an empirical fit shown for the spread.", ub)?);
     figures.push(Figure::definition("gas_holdup_outlet", "Gas holdup ε_G at the outlet", Dimension::Fraction, cell::INFO, outlet.holdup)?);
@@ -480,6 +510,7 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
     figures.push(diffusivity_figure);
     let kla = mass_transfer::kla_spread(&outlet, dm)?;
     let t95 = mass_transfer::saturation_time(kla.value.get());
+    let supply_kla = kla.clone();
     figures.push(kla);
     figures.push(Figure::definition("saturation_time", "Time to 95 % saturation of the liquid", Dimension::Duration, mass_transfer::SATURATION_INFO, t95)?);
     let tau = profile.residence_time;
@@ -514,7 +545,9 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
     let mut checks = vec![
         regime_check(&outlet, &junction),
         pressure_check(inlet_gauge, dp, &figures, input.rating.si()),
-        expansion_check(&profile),
+        checks::residence_check(tau, tau0, input.length.si(), reactive_feed.equivalents(input.concentration, input.liquid_flow)),
+        checks::pattern_check(&profile, &junction, &outlet),
+        checks::expansion_check(&profile),
     ];
     if let LiquidSpec::Solvent { solvent, .. } = input.liquid {
         checks.push(boiling_check(solvent, t, p_out)?);
@@ -532,7 +565,16 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
     if let Some(note) = input.gas.compressibility_caveat(t, Pressure::from_si(profile.inlet_pressure)) {
         checks.push(Check { key: "compressibility", topic: "Ideal-gas assumption", verdict: Verdict::Caution, reason: note, caution: None });
     }
-    checks.push(mass_transfer_check(t95, tau, share, reactive_feed.equivalents(input.concentration, input.liquid_flow)));
+    checks.push(checks::mass_transfer_check(&supply_kla, tau, share, reactive_feed.equivalents(input.concentration, input.liquid_flow)));
+    if let Some(choice) = &input.tubing {
+        let solvents: &[Solvent] = match &input.liquid {
+            LiquidSpec::Solvent { solvent, .. } => std::slice::from_ref(solvent),
+            LiquidSpec::Custom { .. } => &[],
+        };
+        let mut check = tubing::check(choice, PressureDifference::from_si(inlet_gauge), solvents);
+        tubing::note_bore_mismatch(choice, input.inner_diameter, &mut check);
+        checks.push(check);
+    }
     let mut plots = plots::profiles(&profile, input.rating, input.ambient);
     plots.extend(plots::lengths_vs_gas_fraction(&junction.flow));
     Ok(SegmentedFlowResult { report: Report { figures, checks, plots, advice: Vec::new() }, profile })
@@ -601,7 +643,7 @@ fn regime_check(outlet: &UnitCell, junction: &UnitCell) -> Check {
     let ca = f.capillary(f.two_phase_velocity());
     if ca > 0.01 {
         problems.push(format!(
-            "Ca = {} at the outlet is above 0.01, where the length correlations stop and films thicken (physics.md §3.4)",
+            "Ca = {} at the outlet is above 0.01, the upper end of the Qian–Lawal length fit and about where the squeezing regime behind Garstecki's scaling ends (both from memory)",
             format_significant(ca, 3)
         ));
     }
@@ -644,24 +686,6 @@ fn pressure_check(inlet_gauge: f64, dp: f64, figures: &[Figure], rating: f64) ->
     }
 }
 
-fn expansion_check(profile: &Profile) -> Check {
-    let ratio = profile.pressure_drop() / profile.outlet_pressure;
-    let growth = profile.bubble_length.last().zip(profile.bubble_length.first()).map_or(1.0, |(o, i)| o / i);
-    let big = ratio > 0.1;
-    Check {
-        key: "gas_expansion",
-        topic: "Gas expansion along the coil",
-        verdict: if big { Verdict::Caution } else { Verdict::Fine },
-        reason: format!(
-            "The coil drop is {:.1} % of the outlet pressure; bubbles grow by a factor {} from inlet to outlet (integrated, isothermal ideal gas).{}",
-            ratio * 100.0,
-            format_significant(growth, 3),
-            if big { " Above about 10 % the gas flow, velocity and residence time change markedly along the coil (common practice, no source): read the profile, not single values." } else { "" }
-        ),
-        caution: None,
-    }
-}
-
 fn boiling_check(solvent: Solvent, t: Temperature, p_out: Pressure) -> Result<Check, SegmentedFlowError> {
     let b = solvent.boiling_check(t, p_out)?;
     let mut check = hazards::boiling_check(
@@ -687,31 +711,4 @@ fn gas_hazard_check(input: &SegmentedFlowInput) -> Check {
         temperature: input.temperature,
         entered_loc: input.limiting_oxygen,
     })
-}
-
-fn mass_transfer_check(t95: f64, tau: f64, share: f64, equivalents: f64) -> Check {
-    let mut notes = Vec::new();
-    let mut verdict = Verdict::Fine;
-    let s = |v: f64| format_significant(v, 3);
-    if t95 > tau {
-        verdict = Verdict::Caution;
-        notes.push(format!("the liquid needs ~{} s to reach 95 % saturation (van Baten–Krishna k_L a) but stays only {} s: it leaves unsaturated, and a gas-consuming reaction may be limited by mass transfer", s(t95), s(tau)));
-    } else {
-        notes.push(format!("95 % saturation in ~{} s of a {} s residence time", s(t95), s(tau)));
-    }
-    if share >= 1.0 {
-        verdict = Verdict::Caution;
-        notes.push(format!("the liquid could dissolve {} times the gas fed: bubbles may shrink or vanish, and the segmented-flow figures assume they persist", s(share)));
-    } else {
-        notes.push(format!("the liquid can hold {} % of the gas fed at saturation", s(share * 100.0)));
-    }
-    if equivalents < 1.0 {
-        verdict = Verdict::Caution;
-        notes.push(format!("only {} mol of gas per mol of substrate is fed: a reaction taking one gas molecule per substrate cannot go to completion", s(equivalents)));
-    }
-    let mut reason = notes.join("; ");
-    if let Some(first) = reason.get(..1) {
-        reason = first.to_uppercase() + reason.get(1..).unwrap_or("") + ".";
-    }
-    Check { key: "gas_supply", topic: "Gas supply and mass transfer", verdict, reason, caution: None }
 }

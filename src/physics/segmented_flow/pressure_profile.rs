@@ -2,7 +2,9 @@
 //! gas expanding as the pressure falls, and the profiles (pressure, bubble and slug length, gas
 //! fraction, holdup, bubble velocity) as series for plotting.
 //!
-//! Model (`physics.md` §3.10): isothermal ideal gas, so Q_G(z) = ṅ_G(z) R T / P(z); bubbles are
+//! Model (derived): isothermal ideal gas saturated with the solvent's vapour, so
+//! Q_G(z) = ṅ_G(z) R T / (P(z) − p_sat) with p_sat the vapour pressure at the working temperature
+//! (Dalton's law; the vapour adds p_sat/(P − p_sat) to the dry gas volume); bubbles are
 //! neither made nor lost after the junction, so the bubble frequency f_b is constant; the unit
 //! cell follows as L_UC = U_B / f_b with L_B = β L_UC (stationary film), which keeps the slug
 //! length constant up to the small change of the film with velocity. The local gradient
@@ -32,7 +34,7 @@ use crate::physics::gases::MolarFlow;
 use crate::physics::gases::reference_state::{GAS_CONSTANT, ideal_gas_density};
 use crate::physics::ode::{OdeTolerance, dormand_prince};
 use crate::physics::report::{ModelInfo, RangeWarning, ValidityBound};
-use crate::physics::units::{Dimension, DynamicViscosity, Length, MolarMass, Pressure, Temperature, VolumetricFlow};
+use crate::physics::units::{Density, Dimension, DynamicViscosity, Length, MolarMass, Pressure, Temperature, VolumetricFlow};
 
 /// A pressure-gradient model for Taylor flow.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize)]
@@ -156,6 +158,47 @@ impl PressureDropModel {
     }
 }
 
+/// The solvent's vapour that saturates the gas slugs.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Vapour {
+    /// Vapour pressure at the working temperature (below the outlet pressure).
+    pub pressure: Pressure,
+    /// Molar mass of the solvent.
+    pub molar_mass: MolarMass,
+}
+
+/// Metadata of the actual gas flow with the solvent's vapour in it.
+pub const SATURATED_FLOW_INFO: ModelInfo = ModelInfo {
+    name: "Gas saturated with the solvent's vapour",
+    formula: "Q_G = ṅ_gas R T / (P − p_sat) (P absolute; p_sat the vapour pressure at the working temperature)",
+    source: "ideal gas and Dalton's law, the gas slugs saturated with vapour (derived); p_sat from the solvent's vapour-pressure fit",
+    validity: &[],
+};
+
+/// Metadata of the actual gas flow without vapour (entered liquid, or a liquid that boils).
+pub const DRY_FLOW_INFO: ModelInfo = ModelInfo {
+    name: "Ideal gas in the line, dry",
+    formula: "Q_G = ṅ_gas R T / P (P absolute); the liquid's vapour not included",
+    source: "ideal gas (definition); no vapour pressure is known for an entered liquid, and a liquid that boils at the outlet pressure is reported by the boiling check instead",
+    validity: &[],
+};
+
+/// Metadata of the gas density with the vapour.
+pub const SATURATED_DENSITY_INFO: ModelInfo = ModelInfo {
+    name: "Density of the gas and its vapour",
+    formula: "ρ_G = ((P − p_sat) M_gas + p_sat M_solvent) / (R T)",
+    source: "ideal gas and Dalton's law (derived)",
+    validity: &[],
+};
+
+/// Metadata of the gas volume the vapour adds.
+pub const VAPOUR_SHARE_INFO: ModelInfo = ModelInfo {
+    name: "Vapour in the gas slugs",
+    formula: "added volume = p_sat / (P − p_sat), at the outlet pressure",
+    source: "Dalton's law, the gas saturated with the solvent's vapour (derived)",
+    validity: &[],
+};
+
 /// How the gas volume responds to pressure along the coil.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
 #[serde(rename_all = "snake_case")]
@@ -192,6 +235,8 @@ pub struct Coil {
     pub consumption: MolarFlow,
     /// Absolute pressure at the outlet (the back-pressure regulator).
     pub outlet_pressure: Pressure,
+    /// The solvent's vapour in the gas, if counted (its pressure below the outlet pressure).
+    pub vapour: Option<Vapour>,
     /// Bubble/slug-length correlation at the junction.
     pub length_model: LengthModel,
     /// Pressure-gradient model.
@@ -248,20 +293,30 @@ impl Coil {
         outlet + self.consumption.si() * x / self.length.si()
     }
 
-    /// The local two-phase flow at absolute pressure `p` (Pa) with gas flow `n` (mol/s).
+    /// Vapour pressure counted in the gas, Pa (0 without vapour).
+    fn vapour_pressure(&self) -> f64 {
+        self.vapour.map_or(0.0, |v| v.pressure.pascals())
+    }
+
+    /// The local two-phase flow at absolute pressure `p` (Pa) with dry gas flow `n` (mol/s): the
+    /// gas volume and density include the solvent's vapour when it is counted.
     pub fn flow_at(&self, p: f64, n: f64) -> TwoPhaseFlow {
         let t = self.temperature.kelvin();
+        let p_sat = self.vapour_pressure();
         let p_volume = match self.expansion {
             GasExpansion::Isothermal => p,
             GasExpansion::Frozen => self.outlet_pressure.pascals(),
         };
+        let vapour_density = self.vapour.map_or(0.0, |v| ideal_gas_density(v.molar_mass, self.temperature, v.pressure).si());
         TwoPhaseFlow {
             diameter: self.diameter,
             junction_width: self.junction_width,
             liquid_flow: self.liquid_flow,
-            gas_flow: VolumetricFlow::from_si(n * GAS_CONSTANT * t / p_volume),
+            gas_flow: VolumetricFlow::from_si(n * GAS_CONSTANT * t / (p_volume - p_sat)),
             liquid: self.liquid,
-            gas_density: ideal_gas_density(self.gas_molar_mass, self.temperature, Pressure::from_si(p)),
+            gas_density: Density::from_si(
+                ideal_gas_density(self.gas_molar_mass, self.temperature, Pressure::from_si(p - p_sat)).si() + vapour_density,
+            ),
             gas_viscosity: self.gas_viscosity,
         }
     }
@@ -277,7 +332,7 @@ impl Coil {
         let rhs = |x: f64, y: &[f64; 3]| -> Option<[f64; 3]> {
             let p = y[0];
             let n = self.gas_at(x);
-            if !(p > 0.0 && n > 0.0) {
+            if !(p > self.vapour_pressure() && n > 0.0) {
                 return None;
             }
             let cell = UnitCell::with_frequency(self.flow_at(p, n), frequency).ok()?;
@@ -303,6 +358,9 @@ impl Coil {
     pub fn profile(&self) -> Result<Profile, SegmentedFlowError> {
         if self.gas_at(0.0) <= 0.0 {
             return Err(SegmentedFlowError::GasExhausted);
+        }
+        if self.vapour_pressure() >= self.outlet_pressure.pascals() {
+            return Err(SegmentedFlowError::Boils);
         }
         let mut p_in = self.outlet_pressure.pascals();
         let mut frequency = self.junction_cell(p_in)?.frequency();

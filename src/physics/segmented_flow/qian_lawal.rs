@@ -9,7 +9,7 @@
 //! Validity (stated with the fit): 0.09 < ε < 0.91, 15 < Re < 1500, 2.78×10⁻⁴ < Ca < 0.01;
 //! W = 0.25–3 mm. Sobieszuk, Cygański & Pohorecki (2010, Chem. Eng. Res. Des. 88, 263–269) found
 //! it agrees with their measurements and refitted the constants. Its bubbles are 19–250 % longer
-//! than Garstecki's with α = 1 over a lab-scale grid (`physics.md` §3.7).
+//! than Garstecki's with α = 1 over a lab-scale grid (computed; see tests/segmented_flow.rs).
 //!
 //! Example (hand calculation from the formula): ε = 0.5, Re = 100, Ca = 0.001, W = 1 mm give
 //! L_G = 1.637 × 0.5^0.107 × 0.5^−1.05 × 100^−0.075 × 0.001^−0.0687 mm = 3.5811 mm.

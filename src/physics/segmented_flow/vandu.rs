@@ -4,8 +4,10 @@
 //! Formula: k_L a = 4.5 √(D_m j_G / L_UC) / D, with D_m the diffusivity (m²/s), j_G the gas
 //! superficial velocity (m/s), L_UC the unit-cell length (m) and D the bore (m).
 //!
-//! Validity: circular and square capillaries of 1–3 mm, air–water (from memory). Over a lab-scale
-//! grid it is 12–41 % below van Baten–Krishna (`physics.md` §3.8).
+//! Validity: circular and square capillaries of 1–3 mm, air–water (from memory). Its constant
+//! could not be read in any source: it stays marked from memory. Vandu et al. also proposed
+//! L_film ≈ ε_G L_UC and a criterion for when the film saturates (see
+//! [`super::van_baten_krishna`]); their numbers were not read either.
 //!
 //! Example (hand calculation): D_m = 2e-9, j_G = 0.05 m/s, L_UC = 4 mm, D = 1 mm:
 //! 4.5 × √(2.5e-8) / 1e-3 = 0.7115 s⁻¹.
@@ -16,7 +18,8 @@
 //! ```
 //!
 //! Reference: C. O. Vandu, H. Liu, R. Krishna, Mass transfer from Taylor bubbles rising in single
-//! capillaries, Chem. Eng. Sci. 60 (2005) 6430–6437 (formula and citation from memory).
+//! capillaries, Chem. Eng. Sci. 60 (2005) 6430–6437 (formula from memory; citation as given by
+//! Onea, Wörner & Cacuci, Chem. Eng. Sci. 64 (2009) 1416–1435).
 
 use super::flow::DIAMETER;
 use crate::physics::report::{ModelInfo, ValidityBound};

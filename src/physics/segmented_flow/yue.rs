@@ -5,8 +5,9 @@
 //! m), D_m the diffusivity (m²/s), densities kg/m³, viscosities Pa·s, superficial velocities m/s.
 //!
 //! Validity: one rectangular channel, 0.5 × 1 mm (d_h = 0.667 mm), CO₂–water (from memory); the
-//! bound on D below (0.5–1 mm) is set around that single size. Over a lab-scale grid it ranges
-//! from −97 % to +87 % of van Baten–Krishna (`physics.md` §3.8).
+//! bound on D below (0.5–1 mm) is set around that single size. Its constants could not be read in
+//! any source: it stays marked from memory, and the same group's 2009 fit on square channels
+//! ([`super::yue_2009`], read in a transcription) is shown beside it.
 //!
 //! Example (hand calculation): Re_G = 10, Re_L = 100, Sc = 500, D_m = 2e-9, d_h = 1 mm:
 //! 0.084 × 10^0.213 × 100^0.937 × 500^0.5 × 2e-9 / 1e-6 = 0.4590 s⁻¹.
@@ -26,7 +27,7 @@ use crate::physics::units::Dimension;
 
 /// Metadata shown with the result.
 pub const INFO: ModelInfo = ModelInfo {
-    name: "Yue et al.",
+    name: "Yue et al. (2007)",
     formula: "k_L a D²/D_m = 0.084 Re_G^0.213 Re_L^0.937 Sc_L^0.5",
     source: "Yue, Chen, Yuan, Luo & Gonthier (2007) Chem. Eng. Sci. 62, 2096–2108 (from memory; rectangular 0.5 × 1 mm channel)",
     validity: &[ValidityBound { quantity: DIAMETER, dimension: Dimension::Length, low: Some(0.5e-3), high: Some(1e-3) }],

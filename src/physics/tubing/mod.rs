@@ -389,3 +389,21 @@ pub fn check(choice: &TubingChoice, inlet: PressureDifference, solvents: &[super
     reason.push_str(choice.material.light_note());
     Check { key: "tubing_rating", topic: "Tubing at temperature", verdict, reason, caution }
 }
+
+/// Says so in the tubing check when the entered bore is not the chosen tubing's bore (more than
+/// 2 % apart, a tolerance of this tool, no source): the calculation follows the entered bore, the
+/// rating the chosen tubing.
+pub fn note_bore_mismatch(choice: &TubingChoice, bore: super::units::Length, check: &mut super::report::Check) {
+    use super::units::format_significant;
+    let table = choice.size.id_in * 0.0254;
+    if (bore.si() / table - 1.0).abs() > 0.02 {
+        check.reason.push_str(&format!(
+            " The entered bore ({} mm) is not this tubing's bore ({} mm): volume and pressure drop use the entered one.",
+            format_significant(bore.si() * 1e3, 3),
+            format_significant(table * 1e3, 3)
+        ));
+        if check.verdict == super::report::Verdict::Fine {
+            check.verdict = super::report::Verdict::Caution;
+        }
+    }
+}

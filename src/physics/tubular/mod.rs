@@ -208,23 +208,6 @@ fn regime_check(re: f64) -> Check {
     }
 }
 
-/// Says so in the tubing check when the entered bore is not the chosen tubing's bore (more than
-/// 2 % apart, a tolerance of this tool, no source): the volume and pressure drop follow the
-/// entered bore, the rating follows the chosen tubing.
-fn bore_mismatch(tubing: &TubingChoice, bore: Length, check: &mut Check) {
-    let table = tubing.size.id_in * 0.0254;
-    if (bore.si() / table - 1.0).abs() > 0.02 {
-        check.reason.push_str(&format!(
-            " The entered bore ({} mm) is not this tubing's bore ({} mm): volume and pressure drop use the entered one.",
-            format_significant(bore.si() * 1e3, 3),
-            format_significant(table * 1e3, 3)
-        ));
-        if check.verdict == Verdict::Fine {
-            check.verdict = Verdict::Caution;
-        }
-    }
-}
-
 /// Computes every figure and check for the tubular reactor.
 pub fn evaluate(input: &TubularInput) -> Result<Report, NumericalError> {
     let volume = reactor::internal_volume(input.inner_diameter, input.length);
@@ -264,7 +247,7 @@ pub fn evaluate(input: &TubularInput) -> Result<Report, NumericalError> {
     let mut checks = vec![pressure_check(inlet, dp, input.rating), regime_check(re)];
     if let Some(tubing) = &input.tubing {
         let mut check = tubing::check(tubing, inlet, &input.liquid.solvents());
-        bore_mismatch(tubing, input.inner_diameter, &mut check);
+        tubing::note_bore_mismatch(tubing, input.inner_diameter, &mut check);
         checks.push(check);
     }
     checks.extend(input.liquid.checks(Pressure::from_gauge(input.back_pressure, input.ambient)));
