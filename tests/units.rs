@@ -88,3 +88,21 @@ fn gauge_and_absolute_pressure() {
     assert!((p.gauge(STANDARD_ATMOSPHERE).bar() - 5.0).abs() < 1e-12);
     assert!((Temperature::from_celsius(80.0).kelvin() - 353.15).abs() < 1e-12);
 }
+
+#[test]
+fn display_units_follow_the_size_of_the_value() {
+    use clearbore::physics::units::Dimension;
+    // The examples of the page's worst readings: 1.694e-4 mm, 0.002798 min, 5.13e-4 bar.
+    assert_eq!(Dimension::Length.show(1.694e-7, 4), "0.1694 µm");
+    assert_eq!(Dimension::Duration.show(0.002798 * 60.0, 4), "0.1679 s");
+    assert_eq!(Dimension::PressureDifference.show(51.3, 3), "0.513 mbar");
+    // Values that read well in the lab default keep it.
+    assert_eq!(Dimension::Length.show(0.76e-3, 3), "0.760 mm");
+    assert_eq!(Dimension::Duration.show(544.4, 4), "9.073 min");
+    assert_eq!(Dimension::PressureDifference.show(5.03e5, 3), "5.03 bar");
+    assert_eq!(Dimension::VolumetricFlow.show(0.05e-6 / 60.0, 3), "50.0 µL/min");
+    assert_eq!(Dimension::Fraction.show(0.25, 3), "25.0 %");
+    // Far outside every unit's band: the closest one.
+    assert_eq!(Dimension::Length.display_unit(1e-12).symbol, "µm");
+    assert_eq!(Dimension::Number.show(41.0, 3), "41.0");
+}

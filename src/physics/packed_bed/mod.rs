@@ -495,8 +495,8 @@ fn pressure_check(inlet: f64, dp: &Figure, back: f64, rating: f64, rating_part: 
         Verdict::Problem => ": over the rating".to_owned(),
         Verdict::Caution if ratio > PRESSURE_MARGIN => ": less than 20 % margin (common practice, no source)".to_owned(),
         Verdict::Caution => format!(
-            "; the highest correlation ({} bar bed drop) leaves less than 20 % margin (common practice, no source)",
-            bar(worst_dp)
+            "; the highest correlation ({} bed drop) leaves less than 20 % margin (common practice, no source)",
+            Dimension::PressureDifference.show(worst_dp, 3)
         ),
         Verdict::Fine => String::new(),
     };
@@ -506,11 +506,11 @@ fn pressure_check(inlet: f64, dp: &Figure, back: f64, rating: f64, rating_part: 
         topic: "Pressure budget",
         verdict,
         reason: format!(
-            "Inlet pressure {} bar(g) (back-pressure + {} bar bed drop by Ergun{size_note}; correlations span {}–{} bar) is {:.0} % of the {} bar(g) limit of the {rating_part}, the lowest of pump, cartridge and fittings{note}. A fresh bed of fines, compaction and swelling raise it further.",
+            "Inlet pressure {} bar(g) (back-pressure + {} bed drop by Ergun{size_note}; correlations span {} to {}) is {:.0} % of the {} bar(g) limit of the {rating_part}, the lowest of pump, cartridge and fittings{note}. A fresh bed of fines, compaction and swelling raise it further.",
             bar(inlet),
-            bar(dp.value.get()),
-            bar(dp.spread().0),
-            bar(worst_dp),
+            Dimension::PressureDifference.show(dp.value.get(), 3),
+            Dimension::PressureDifference.show(dp.spread().0, 3),
+            Dimension::PressureDifference.show(worst_dp, 3),
             ratio * 100.0,
             bar(rating),
         ),

@@ -675,10 +675,10 @@ fn pressure_check(inlet_gauge: f64, dp: f64, figures: &[Figure], rating: f64) ->
         topic: "Pressure budget",
         verdict,
         reason: format!(
-            "Inlet pressure {} bar(g) (back-pressure + {} bar coil drop by Kreutzer a = 0.17; models up to {} bar) is {:.0} % of the {} bar(g) rating{note}. Fittings, mixer and regulator add to it.",
+            "Inlet pressure {} bar(g) (back-pressure + {} coil drop by Kreutzer a = 0.17; models up to {}) is {:.0} % of the {} bar(g) rating{note}. Fittings, mixer and regulator add to it.",
             bar(inlet_gauge),
-            bar(dp),
-            bar(worst_dp),
+            Dimension::PressureDifference.show(dp, 3),
+            Dimension::PressureDifference.show(worst_dp, 3),
             ratio * 100.0,
             bar(rating)
         ),

@@ -593,11 +593,11 @@ fn pressure_check(inlet: f64, total: &Figure, back: f64, rating: f64) -> Check {
         topic: "Pressure budget",
         verdict,
         reason: format!(
-            "Inlet pressure {} bar(g) (back-pressure + {} bar line drop, Hagen–Poiseuille with the Krieger–Dougherty suspension viscosity; viscosity models span {}–{} bar) is {:.0} % of the {} bar(g) rating{note}. Frits, entrance losses and a growing deposit add to it.",
+            "Inlet pressure {} bar(g) (back-pressure + {} line drop, Hagen–Poiseuille with the Krieger–Dougherty suspension viscosity; viscosity models span {} to {}) is {:.0} % of the {} bar(g) rating{note}. Frits, entrance losses and a growing deposit add to it.",
             bar(inlet),
-            bar(total.value.get()),
-            bar(total.spread().0),
-            bar(worst),
+            Dimension::PressureDifference.show(total.value.get(), 3),
+            Dimension::PressureDifference.show(total.spread().0, 3),
+            Dimension::PressureDifference.show(worst, 3),
             ratio * 100.0,
             bar(rating)
         ),

@@ -176,9 +176,9 @@ fn pressure_check(inlet: PressureDifference, dp: PressureDifference, rating: Pre
     let verdict = budget_verdict(ratio, ratio);
     let caution = crate::physics::hazards::over_pressure_caution(verdict, crate::physics::hazards::LineContents::Liquid);
     let reason = format!(
-        "Inlet pressure {} bar(g) (back-pressure + {} bar line drop) is {:.0} % of the {} bar(g) rating{}.",
+        "Inlet pressure {} bar(g) (back-pressure + {} line drop) is {:.0} % of the {} bar(g) rating{}.",
         bar(inlet),
-        bar(dp),
+        Dimension::PressureDifference.show(dp.si(), 3),
         ratio * 100.0,
         bar(rating),
         match verdict {

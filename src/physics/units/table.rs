@@ -114,9 +114,11 @@ const DURATION: &[Unit] = &[
     Unit::scale("min", MINUTE),
     Unit::scale("s", 1.0),
     Unit::scale("h", HOUR),
+    Unit::scale("ms", 1e-3),
 ];
 const PRESSURE: &[Unit] = &[
     Unit::scale("bar", 1e5),
+    Unit::scale("mbar", 1e2),
     Unit::scale("kPa", 1e3),
     Unit::scale("MPa", 1e6),
     Unit::scale("psi", PSI),
@@ -163,6 +165,7 @@ const SPACE_TIME_YIELD: &[Unit] = &[
 ];
 const VELOCITY: &[Unit] = &[
     Unit::scale("mm/s", 1e-3),
+    Unit::scale("µm/s", 1e-6),
     Unit::scale("cm/s", 1e-2),
     Unit::scale("m/s", 1.0),
 ];
@@ -201,6 +204,56 @@ impl Dimension {
     /// The lab default unit (first of [`Dimension::units`]).
     pub fn default_unit(self) -> Unit {
         self.units()[0]
+    }
+
+    /// The units a value of this kind is shown in when its size decides, in order of preference
+    /// (metric lab units only; psi, atm, inches and the like stay available to pick by hand).
+    fn display_ladder(self) -> &'static [&'static str] {
+        match self {
+            Dimension::Length => &["mm", "µm", "m"],
+            Dimension::Volume => &["mL", "µL", "L"],
+            Dimension::VolumetricFlow => &["mL/min", "µL/min", "L/h"],
+            Dimension::Duration => &["min", "s", "h", "ms"],
+            Dimension::PressureDifference => &["bar", "mbar", "Pa", "MPa"],
+            Dimension::Pressure => &["bar", "kPa", "MPa"],
+            Dimension::Concentration => &["mol/L", "mmol/L"],
+            Dimension::Mass => &["g", "mg", "kg"],
+            Dimension::Amount => &["mmol", "µmol", "mol"],
+            Dimension::SpecificAmount => &["mmol/g", "µmol/g"],
+            Dimension::Frequency => &["1/h", "1/min", "1/s"],
+            Dimension::MassFlow => &["g/h", "mg/min", "kg/h"],
+            Dimension::Velocity => &["mm/s", "µm/s", "m/s"],
+            Dimension::DynamicViscosity => &["mPa·s", "Pa·s"],
+            _ => &[],
+        }
+    }
+
+    /// The unit a value of `si` reads best in: the first unit of the display ladder in which it
+    /// lies between 0.1 and 10 000 (µm for 0.17 µm, not "1.7e-4 mm"; s for 0.17 s, not
+    /// "0.0028 min"), else the one that brings it closest to that band; the lab default for kinds
+    /// with one useful unit and for zero.
+    pub fn display_unit(self, si: f64) -> Unit {
+        let ladder: Vec<Unit> = self.display_ladder().iter().filter_map(|s| unit_by_symbol(self, s)).collect();
+        let magnitude = si.abs();
+        if ladder.is_empty() || magnitude == 0.0 || !magnitude.is_finite() {
+            return self.default_unit();
+        }
+        let distance = |u: &Unit| {
+            let v = u.from_si(magnitude).abs();
+            if v < 0.1 { (0.1 / v).log10() } else if v >= 1e4 { (v / 1e4).log10() } else { 0.0 }
+        };
+        ladder
+            .iter()
+            .find(|u| distance(u) == 0.0)
+            .copied()
+            .unwrap_or_else(|| ladder.iter().copied().min_by(|a, b| distance(a).total_cmp(&distance(b))).unwrap_or(self.default_unit()))
+    }
+
+    /// `si` shown in the unit its size calls for, to `sig` significant figures, with the symbol.
+    pub fn show(self, si: f64, sig: usize) -> String {
+        let unit = self.display_unit(si);
+        let number = super::format_significant(unit.from_si(si), sig);
+        if unit.symbol.is_empty() { number } else { format!("{number} {}", unit.symbol) }
     }
 
     /// The SI unit symbol, for machine-readable output.
