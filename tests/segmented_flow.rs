@@ -1056,3 +1056,16 @@ fn case_files_without_the_tubing_choice_still_open() {
     assert!(r.check("tubing_rating").is_none());
     assert!(r.figure("kla_per_s").is_some());
 }
+
+#[test]
+fn the_slug_strip_shows_the_junction_and_outlet_lengths_to_scale() {
+    let r = demo();
+    let Some(clearbore::physics::diagram::Diagram::Slugs(strip)) = r.diagrams.first() else { panic!("no slug strip") };
+    assert_eq!(strip.places.len(), 2);
+    assert_eq!(strip.places[0].bubble, r.figure("bubble_length").unwrap().value);
+    assert_eq!(strip.places[0].slug, r.figure("slug_length").unwrap().value);
+    assert_eq!(strip.places[1].bubble, r.figure("bubble_length_outlet").unwrap().value);
+    let cell = r.figure("unit_cell_outlet").unwrap().value.get();
+    assert!(rel(strip.places[1].bubble.get() + strip.places[1].slug.get(), cell) < 1e-12);
+    assert!(strip.film.get() > 0.0 && strip.film.get() < strip.bore.get() / 2.0);
+}

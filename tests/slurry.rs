@@ -626,3 +626,24 @@ fn fine_potassium_carbonate_in_a_narrow_bore_gets_practical_advice() {
         assert!(r.advice_for("element_1_settling").any(|a| a.kind == AdviceKind::NoneExists || a.kind == AdviceKind::Remedy));
     }
 }
+
+#[test]
+fn the_line_diagram_adds_the_drops_upstream_and_colours_each_element_by_its_checks() {
+    let r = clearbore::case::CaseFile::from_json(clearbore::case::Calculator::SlurryLine.demo_json()).unwrap().evaluate().unwrap();
+    let Some(clearbore::physics::diagram::Diagram::Line(line)) = r.diagrams.first() else { panic!("no line diagram") };
+    assert_eq!(line.parts.len(), 5);
+    assert_eq!(line.node_pressures.len(), 6);
+    // Last node is the back-pressure; the first is the inlet pressure; each step is that element's drop.
+    let nodes: Vec<f64> = line.node_pressures.iter().map(|p| p.get()).collect();
+    assert!((nodes[5] - 4e5).abs() < 1e-6);
+    assert!(rel(nodes[0], value(&r, "inlet_pressure")) < 1e-12);
+    for (i, part) in line.parts.iter().enumerate() {
+        let dp = r.figure(&format!("element_{}_pressure_drop", i + 1)).map_or(0.0, |f| f.value.get());
+        assert!((nodes[i] - nodes[i + 1] - dp).abs() < 1e-9 * nodes[0]);
+        let worst = part.checks.iter().map(|k| verdict(&r, k)).max().unwrap();
+        assert_eq!(part.verdict, worst);
+        assert_eq!(part.values.len(), line.columns.len());
+    }
+    // The 0.25 mm regulator seat (element 5) is the narrowest passage.
+    assert_eq!(line.narrowest, Some(4));
+}

@@ -2,6 +2,7 @@
 //! to wasm32 (the page). One folder per phenomenon, one file per correlation.
 
 pub mod ambient;
+pub mod diagram;
 pub mod fluids;
 pub mod form;
 pub mod gases;

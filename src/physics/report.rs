@@ -293,6 +293,9 @@ pub struct Report {
     /// What would fix the failing checks, each said once.
     #[serde(skip_serializing_if = "Vec::is_empty")]
     pub advice: Vec<Advice>,
+    /// Schematics of the line or of the bubbles and slugs.
+    #[serde(skip_serializing_if = "Vec::is_empty")]
+    pub diagrams: Vec<super::diagram::Diagram>,
 }
 
 /// Collects advice, merging the same text offered for several checks into one entry.

@@ -874,5 +874,5 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
     checks.extend(input.liquid.checks(crate::physics::units::Pressure::from_gauge(input.back_pressure, input.ambient)));
     let lifting_flow = umf.as_ref().map(|f| f.value.get() * crate::physics::pipe_flow::bore_area(input.tube_diameter));
     let plots = vec![plots::pressure_drop_vs_flow(input, &bed, lifting_flow)?];
-    Ok(Report { figures, checks, plots, advice: advice.into_vec() })
+    Ok(Report { figures, checks, plots, advice: advice.into_vec(), diagrams: Vec::new() })
 }

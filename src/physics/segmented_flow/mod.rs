@@ -40,6 +40,7 @@ use super::fluids::{self, Liquid, Solvent};
 use super::form::{ChoiceSpec, Collector, FieldSource};
 use super::gases::reference_state;
 use super::gases::{Gas, HenrySolubility, MolarFlow, ReferenceFlow, ReferenceState, henry, sutherland};
+use super::diagram::{Diagram, SlugPlace, SlugStrip};
 use super::hazards;
 use super::input::{Allowed, FieldSpec, InputError};
 use super::report::{Check, Estimate, Figure, Finite, ModelInfo, RangeWarning, Report, Verdict, budget_verdict};
@@ -577,7 +578,23 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
     }
     let mut plots = plots::profiles(&profile, input.rating, input.ambient);
     plots.extend(plots::lengths_vs_gas_fraction(&junction.flow));
-    Ok(SegmentedFlowResult { report: Report { figures, checks, plots, advice: Vec::new() }, profile })
+    let recommended = |key: &str| figures.iter().find(|f| f.key == key).map(|f| f.value);
+    let diagrams = match (recommended("bubble_length"), recommended("slug_length")) {
+        (Some(bubble), Some(slug)) => vec![Diagram::Slugs(SlugStrip {
+            bore: Finite::new("tube bore", d)?,
+            film: Finite::new("film thickness", outlet.film_thickness())?,
+            places: vec![
+                SlugPlace { label: "at the junction", bubble, slug },
+                SlugPlace {
+                    label: "at the outlet",
+                    bubble: Finite::new("bubble length", outlet.bubble_length)?,
+                    slug: Finite::new("slug length", outlet.slug_length)?,
+                },
+            ],
+        })],
+        _ => Vec::new(),
+    };
+    Ok(SegmentedFlowResult { report: Report { figures, checks, plots, advice: Vec::new(), diagrams }, profile })
 }
 
 fn liquid_state(input: &SegmentedFlowInput) -> Result<(Liquid, Vec<RangeWarning>, Figure), SegmentedFlowError> {

@@ -10,6 +10,7 @@ use super::{
 };
 use crate::physics::numeric::{RootError, Tolerance, brent};
 use crate::physics::pipe_flow::{self, hagen_poiseuille};
+use crate::physics::diagram::{Column, Diagram, LineDiagram, LinePart, node_pressures};
 use crate::physics::practical::{FINEST_MILLED_D90, LAMINAR_REYNOLDS, SMALLEST_BORE};
 use crate::physics::report::{AdviceKind, AdviceList, Check, Estimate, Figure, Finite, ModelInfo, NumericalError, RangeWarning, Report, Verdict, budget_verdict};
 use crate::physics::settling::drag::terminal_velocity_spread;
@@ -144,6 +145,50 @@ pub fn over_passes(per_pass: f64, passes: u32) -> f64 {
 struct ElementResult {
     settling: Verdict,
     clogging: Verdict,
+}
+
+/// The quantities listed for every element in the line's table, with the per-element figure
+/// tables they come from.
+const LINE_COLUMNS: [(&[keys::ElementKey; keys::MAX_ELEMENTS], Column); 6] = [
+    (&keys::MEAN_VELOCITY, Column { label: "Velocity", dimension: Dimension::Velocity }),
+    (&keys::RESIDENCE_TIME, Column { label: "Residence time", dimension: Dimension::Duration }),
+    (&keys::DEPOSITED_FRACTION, Column { label: "Reaching the wall", dimension: Dimension::Fraction }),
+    (&keys::SHIELDS_NUMBER, Column { label: "Shields number", dimension: Dimension::Number }),
+    (&keys::PASSAGE_RATIO, Column { label: "Passage / d90", dimension: Dimension::Number }),
+    (&keys::PRESSURE_DROP, Column { label: "Pressure drop", dimension: Dimension::PressureDifference }),
+];
+
+/// The line drawn: each element with its verdict, size and key quantities, and the gauge pressure
+/// at every node from the back-pressure upstream.
+fn line_diagram(input: &SlurryInput, results: &[ElementResult], figures: &[Figure], outlet: f64) -> Result<LineDiagram, NumericalError> {
+    let value = |key: &str| figures.iter().find(|f| f.key == key).map(|f| f.value);
+    let mut parts = Vec::with_capacity(results.len());
+    let mut drops = Vec::with_capacity(results.len());
+    for (i, (e, r)) in input.elements.iter().zip(results).enumerate() {
+        drops.push(value(keys::PRESSURE_DROP[i].key).map_or(0.0, Finite::get));
+        parts.push(LinePart {
+            kind: e.kind.word(),
+            bore: Finite::new("bore", e.inner_diameter.si())?,
+            length: Finite::new("length", e.length.si())?,
+            orientation: match e.orientation {
+                Orientation::Horizontal => "horizontal",
+                Orientation::Up => "up",
+                Orientation::Down => "down",
+            },
+            verdict: r.settling.max(r.clogging),
+            checks: vec![keys::SETTLING[i].key, keys::CLOGGING[i].key],
+            values: LINE_COLUMNS.iter().map(|(table, _)| value(table[i].key)).collect(),
+        });
+    }
+    let narrowest = input.elements.iter().enumerate().min_by(|a, b| a.1.inner_diameter.si().total_cmp(&b.1.inner_diameter.si())).map(|(i, _)| i);
+    Ok(LineDiagram {
+        key: "line",
+        title: "The line, in flow order",
+        parts,
+        node_pressures: node_pressures(outlet, &drops)?,
+        narrowest,
+        columns: LINE_COLUMNS.iter().map(|(_, c)| *c).collect(),
+    })
 }
 
 fn horizontal(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<Figure>, advice: &mut AdviceList) -> Result<(Verdict, String), NumericalError> {
@@ -725,7 +770,8 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
         caution: (verdict == Verdict::Problem).then(|| PLUG_CAUTION.to_owned()),
     });
     let plots = if drift == Drift::Neutral { Vec::new() } else { vec![super::plots::settling_vs_size(input, phi)?] };
-    Ok(Report { figures, checks, plots, advice: advice.into_vec() })
+    let diagrams = vec![Diagram::Line(line_diagram(input, &results, &figures, inlet - total)?)];
+    Ok(Report { figures, checks, plots, advice: advice.into_vec(), diagrams })
 }
 
 /// Metadata of the fitted log-normal spread.

@@ -251,5 +251,5 @@ pub fn evaluate(input: &TubularInput) -> Result<Report, NumericalError> {
         checks.push(check);
     }
     checks.extend(input.liquid.checks(Pressure::from_gauge(input.back_pressure, input.ambient)));
-    Ok(Report { figures, checks, plots: Vec::new(), advice: Vec::new() })
+    Ok(Report { figures, checks, plots: Vec::new(), advice: Vec::new(), diagrams: Vec::new() })
 }
