@@ -4,6 +4,7 @@
 pub mod ambient;
 pub mod fluids;
 pub mod form;
+pub mod gas_liquid_bed;
 pub mod gases;
 pub mod input;
 pub mod numeric;
