@@ -526,7 +526,7 @@ fn spread(key: &'static str, label: &'static str, dimension: Dimension, recommen
 
 fn figures(input: &GasLiquidBedInput, a: &Assessment) -> Result<Vec<Figure>, GasLiquidBedError> {
     use super::gases::{reference_state, sutherland};
-    use super::packed_bed::{ergun, flow as bed_flow, geometry};
+    use super::packed_bed::{ergun, geometry};
     let cond = &a.conditions;
     let rec = a.recommended()?;
     let outlet = cond.at(cond.outlet_pressure);
@@ -566,22 +566,7 @@ fn figures(input: &GasLiquidBedInput, a: &Assessment) -> Result<Vec<Figure>, Gas
     figures.push(Figure::definition("liquid_reynolds", "Liquid particle Reynolds number Re_L", Dimension::Number, regime::REYNOLDS_INFO, outlet.liquid_reynolds())?);
     figures.push(Figure::definition("gas_reynolds", "Gas particle Reynolds number Re_G (outlet)", Dimension::Number, regime::REYNOLDS_INFO, outlet.gas_reynolds())?);
     figures.push(Figure::definition("lockhart_martinelli", "Lockhart–Martinelli parameter χ (outlet)", Dimension::Number, regime::CHI_INFO, outlet.chi())?);
-    figures.push(Figure::single(
-        "diameter_ratio",
-        "Tube-to-particle diameter ratio",
-        Dimension::Number,
-        geometry::DIAMETER_RATIO_INFO,
-        diameter_ratio,
-        bed_flow::range_warnings(&geometry::DIAMETER_RATIO_INFO, &[(bed_flow::DIAMETER_RATIO, diameter_ratio)]),
-    )?);
-    figures.push(Figure::single(
-        "length_ratio",
-        "Bed-length-to-particle ratio",
-        Dimension::Number,
-        geometry::LENGTH_RATIO_INFO,
-        length_ratio,
-        bed_flow::range_warnings(&geometry::LENGTH_RATIO_INFO, &[(geometry::LENGTH_RATIO, length_ratio)]),
-    )?);
+    figures.extend(bed::ratio_figures(diameter_ratio, length_ratio)?);
     let alone = outlet.liquid_alone().with_length(input.bed_length);
     figures.push(Figure::single(
         "liquid_alone_pressure_drop",

@@ -755,6 +755,28 @@ fn sizing_figures_and_check(input: &PackedBedInput, target: &SizingTarget, voida
     })
 }
 
+/// The D_t/d_p and L/d_p figures, each with the warning of its rule of thumb.
+pub fn ratio_figures(diameter_ratio: f64, length_ratio: f64) -> Result<[Figure; 2], NumericalError> {
+    Ok([
+        Figure::single(
+            "diameter_ratio",
+            "Tube-to-particle diameter ratio",
+            Dimension::Number,
+            geometry::DIAMETER_RATIO_INFO,
+            diameter_ratio,
+            flow::range_warnings(&geometry::DIAMETER_RATIO_INFO, &[(flow::DIAMETER_RATIO, diameter_ratio)]),
+        )?,
+        Figure::single(
+            "length_ratio",
+            "Bed-length-to-particle ratio",
+            Dimension::Number,
+            geometry::LENGTH_RATIO_INFO,
+            length_ratio,
+            flow::range_warnings(&geometry::LENGTH_RATIO_INFO, &[(geometry::LENGTH_RATIO, length_ratio)]),
+        )?,
+    ])
+}
+
 /// Computes every figure and check for the packed cartridge.
 pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
     let voidage = input.voidage.resolve(input.shape, input.particle_diameter, input.tube_diameter)?;
@@ -793,26 +815,13 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
         Figure::definition("superficial_velocity", "Superficial velocity", Dimension::Velocity, geometry::SUPERFICIAL_VELOCITY_INFO, u_s.si())?,
         Figure::definition("interstitial_velocity", "Interstitial velocity", Dimension::Velocity, geometry::INTERSTITIAL_VELOCITY_INFO, geometry::interstitial_velocity(u_s, eps).si())?,
         Figure::definition("particle_reynolds", "Particle Reynolds number", Dimension::Number, geometry::PARTICLE_REYNOLDS_INFO, bed.particle_reynolds())?,
-        Figure::single(
-            "diameter_ratio",
-            "Tube-to-particle diameter ratio",
-            Dimension::Number,
-            geometry::DIAMETER_RATIO_INFO,
-            diameter_ratio,
-            flow::range_warnings(&geometry::DIAMETER_RATIO_INFO, &[(flow::DIAMETER_RATIO, diameter_ratio)]),
-        )?,
-        Figure::single(
-            "length_ratio",
-            "Bed-length-to-particle ratio",
-            Dimension::Number,
-            geometry::LENGTH_RATIO_INFO,
-            length_ratio,
-            flow::range_warnings(&geometry::LENGTH_RATIO_INFO, &[(geometry::LENGTH_RATIO, length_ratio)]),
-        )?,
+    ];
+    figures.extend(ratio_figures(diameter_ratio, length_ratio)?);
+    figures.extend([
         dp.clone(),
         Figure::definition("inlet_pressure", "Inlet pressure (gauge)", Dimension::PressureDifference, INLET_PRESSURE_INFO, inlet)?,
         Figure::definition("packed_mass", "Mass a full bed holds", Dimension::Mass, geometry::PACKED_MASS_INFO, geometry::packed_mass(v_bed, eps, input.particle_density).si())?,
-    ];
+    ]);
     if let Some(f) = &umf {
         figures.push(f.clone());
     }
