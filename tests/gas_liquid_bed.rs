@@ -614,3 +614,49 @@ fn the_chart_rises_with_gas_flow_and_holds_the_recommended_line_in_its_spread() 
         assert!(*lo <= y && y <= *hi);
     }
 }
+
+#[test]
+fn a_boiling_liquid_dissolves_no_gas() {
+    let r = with(&[("temperature", q(80.0, "°C")), ("back_pressure", q(0.0, "bar"))]);
+    assert_eq!(verdict(&r, "boiling"), Verdict::Problem);
+    assert_eq!(verdict(&r, "gas_transfer"), Verdict::Problem);
+    assert_eq!(common::value(&r, "capacity"), 0.0);
+}
+
+#[test]
+fn a_mixture_takes_the_entered_gas_data_and_a_rate_demand_is_compared_as_entered() {
+    let r = with(&[
+        ("liquid", json!("mixture")),
+        ("solubility", q(4.0, "mmol/L")),
+        ("demand", json!("rate")),
+        ("required_rate", q(0.002, "mmol/min")),
+    ]);
+    assert_eq!(r.figure("saturation_concentration").unwrap().estimates[0].model.name, "Entered solubility");
+    assert_eq!(r.figure("diffusivity").unwrap().estimates[0].model.name, "Entered diffusivity");
+    assert!(rel(common::value(&r, "required_rate"), 0.002e-3 / 60.0) < 1e-12);
+    assert!(r.check("liquid_mixture").is_some());
+    // C* = 4 mmol/L per bar × the H₂ partial pressure (outlet minus the mixture's vapour pressure).
+    let c = common::value(&r, "saturation_concentration");
+    let p_gas = (common::value(&r, "outlet_pressure") - common::value(&r, "liquid_vapour_pressure")) / 1e5;
+    assert!(rel(c, 4.0 * p_gas) < 1e-12, "{c} vs {}", 4.0 * p_gas);
+}
+
+#[test]
+fn fields_choices_layout_and_demo_agree() {
+    use clearbore::case::FormItem;
+    use clearbore::physics::gas_liquid_bed::{CHOICES, FIELDS};
+    let listed: Vec<&str> = FIELDS.iter().map(|f| f.key).chain(CHOICES.iter().map(|c| c.key)).collect();
+    let layout: Vec<&str> = Calculator::GasLiquidBed.layout().iter().filter_map(FormItem::key).collect();
+    let mut a = listed.clone();
+    let mut b = layout.clone();
+    a.sort_unstable();
+    b.sort_unstable();
+    assert_eq!(a, b);
+    let demo: Value = serde_json::from_str(Calculator::GasLiquidBed.demo_json()).unwrap();
+    for k in demo["inputs"].as_object().unwrap().keys() {
+        assert!(listed.contains(&k.as_str()), "{k}");
+    }
+    for k in listed {
+        assert!(demo["inputs"].get(k).is_some(), "demo lacks {k}");
+    }
+}

@@ -197,6 +197,17 @@ fn gas_supply_check(input: &GasLiquidBedInput) -> Check {
 }
 
 fn transfer_check(input: &GasLiquidBedInput, a: &Assessment) -> Result<Check, GasLiquidBedError> {
+    let key = "gas_transfer";
+    let topic = "Gas transfer to the catalyst";
+    if a.capacity.overall <= 0.0 {
+        return Ok(Check {
+            key,
+            topic,
+            verdict: Verdict::Problem,
+            reason: "No gas dissolves at the outlet: the liquid's vapour pressure reaches the pressure there, so the gas space holds only vapour (see the boiling check). Raise the back-pressure or lower the temperature.".to_owned(),
+            caution: None,
+        });
+    }
     let ratio = a.transfer_ratio();
     let c = &a.capacity;
     let gl_share = (1.0 / a.kla) / (1.0 / a.kla + 1.0 / (a.ks * a.conditions.at(a.conditions.outlet_pressure).specific_surface()));
@@ -228,5 +239,5 @@ fn transfer_check(input: &GasLiquidBedInput, a: &Assessment) -> Result<Check, Ga
         reason.push(' ');
         reason.push_str(&remedies::suggest(input, a)?);
     }
-    Ok(Check { key: "gas_transfer", topic: "Gas transfer to the catalyst", verdict, reason, caution: None })
+    Ok(Check { key, topic, verdict, reason, caution: None })
 }
