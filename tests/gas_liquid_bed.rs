@@ -660,3 +660,17 @@ fn fields_choices_layout_and_demo_agree() {
         assert!(demo["inputs"].get(k).is_some(), "demo lacks {k}");
     }
 }
+
+#[test]
+fn figure_and_check_keys_are_unique() {
+    for r in [demo(), with(&[("flow_direction", json!("up"))]), with(&[("liquid", json!("custom"))])] {
+        let mut f: Vec<&str> = r.figures.iter().map(|x| x.key).collect();
+        let mut c: Vec<&str> = r.checks.iter().map(|x| x.key).collect();
+        let (nf, nc) = (f.len(), c.len());
+        f.sort_unstable();
+        f.dedup();
+        c.sort_unstable();
+        c.dedup();
+        assert_eq!((f.len(), c.len()), (nf, nc));
+    }
+}
