@@ -674,3 +674,17 @@ fn figure_and_check_keys_are_unique() {
         assert_eq!((f.len(), c.len()), (nf, nc));
     }
 }
+
+#[test]
+fn total_holdup_is_dynamic_plus_static() {
+    let r = demo();
+    let total = r.figure("liquid_holdup").unwrap();
+    let dynamic = r.figure("dynamic_holdup").unwrap();
+    let fixed = common::value(&r, "static_holdup");
+    assert_eq!(fixed, 0.06);
+    // Recommended: Larkins' total minus the static holdup; Wammes–Westerterp: their own split.
+    assert!((dynamic.value.get() - (total.value.get() - fixed)).abs() < 1e-15);
+    let wammes_total = total.estimates.iter().find(|e| e.model.name.starts_with("Wammes")).unwrap().value.get();
+    let wammes_dynamic = dynamic.estimates.iter().find(|e| e.model.name.starts_with("Wammes")).unwrap().value.get();
+    assert!((wammes_total - (wammes_dynamic + fixed)).abs() < 1e-15);
+}

@@ -586,6 +586,7 @@ fn figures(input: &GasLiquidBedInput, a: &Assessment) -> Result<Vec<Figure>, Gas
     figures.push(Figure::definition("inlet_pressure", "Inlet pressure (gauge)", Dimension::PressureDifference, profile::INLET_PRESSURE_INFO, inlet_gauge)?);
     figures.push(holdup_figure(a, eps)?);
     figures.push(Figure::definition("static_holdup", "Static liquid holdup (fraction of the bed)", Dimension::Fraction, wammes_holdup::STATIC_INFO, wammes_holdup::STATIC_HOLDUP)?);
+    figures.push(dynamic_holdup_figure(a, eps)?);
     figures.push(residence_figure(a)?);
     figures.push(Figure::definition(
         "residence_time_liquid_filled",
@@ -621,6 +622,37 @@ fn holdup_figure(a: &Assessment, eps: f64) -> Result<Figure, NumericalError> {
         }
     }
     spread("liquid_holdup", "Total liquid holdup (fraction of the bed)", Dimension::Fraction, pressure_drop::HOLDUP_RECOMMENDATION, estimates)
+}
+
+/// Metadata of the dynamic holdup from the recommended total.
+pub const DYNAMIC_FROM_TOTAL_INFO: ModelInfo = ModelInfo {
+    name: "Total (Larkins–White–Jeffrey) minus static (Wammes–Westerterp)",
+    formula: "ε_dyn = max(0, ε R_L − 0.06)",
+    source: "derived: Larkins et al. (1961) do not split their saturation; the static 0.06 is Wammes & Westerterp's (1991)",
+    validity: &[],
+};
+
+/// Metadata of Wammes and Westerterp's own dynamic holdup.
+pub const DYNAMIC_WAMMES_INFO: ModelInfo = ModelInfo {
+    name: "Wammes–Westerterp dynamic holdup",
+    formula: "ε_dyn = ε β_dyn (their Eq. 9, solved with Eq. 8)",
+    source: wammes_holdup::INFO.source,
+    validity: wammes_holdup::INFO.validity,
+};
+
+fn dynamic_holdup_figure(a: &Assessment, eps: f64) -> Result<Figure, NumericalError> {
+    let mut estimates = Vec::new();
+    for p in &a.profiles {
+        // Wammes–Westerterp's total is their dynamic plus the same static holdup, so one expression
+        // serves both.
+        let value = (eps * p.mean_saturation - wammes_holdup::STATIC_HOLDUP).max(0.0);
+        let info = match p.model {
+            TwoPhaseModel::LarkinsWhiteJeffrey => DYNAMIC_FROM_TOTAL_INFO,
+            TwoPhaseModel::WammesWesterterp => DYNAMIC_WAMMES_INFO,
+        };
+        estimates.push(Estimate { model: info, value: Finite::new("dynamic holdup", value)?, recommended: p.model == RECOMMENDED, warnings: p.warnings.clone() });
+    }
+    spread("dynamic_holdup", "Dynamic (flowing) liquid holdup (fraction of the bed)", Dimension::Fraction, pressure_drop::HOLDUP_RECOMMENDATION, estimates)
 }
 
 /// The liquid residence time by one holdup correlation: its name and source, the integral's formula.
