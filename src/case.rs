@@ -9,6 +9,7 @@ use crate::physics::form::{ChoiceSpec, FieldSource};
 use crate::physics::input::{FieldSpec, InputError};
 use crate::physics::packed_bed::{self as bed, PackedBedInput};
 use crate::physics::fluids;
+use crate::physics::gas_liquid_bed::{self as gas_bed, GasLiquidBedInput};
 use crate::physics::report::{NumericalError, Report};
 use crate::physics::segmented_flow::{self as gas, SegmentedFlowInput};
 use crate::physics::slurry::{self, SlurryInput};
@@ -29,6 +30,9 @@ pub const SLURRY_DEMO_JSON: &str = include_str!("../public/cases/slurry-demo.jso
 /// The demo segmented-flow case (an invented scenario), as shipped in `public/cases/`.
 pub const SEGMENTED_FLOW_DEMO_JSON: &str = include_str!("../public/cases/segmented-flow-demo.json");
 
+/// The demo gas–liquid cartridge case (an invented scenario), as shipped in `public/cases/`.
+pub const GAS_LIQUID_BED_DEMO_JSON: &str = include_str!("../public/cases/gas-liquid-bed-demo.json");
+
 /// Which calculator a case is for.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
 #[serde(rename_all = "snake_case")]
@@ -41,6 +45,8 @@ pub enum Calculator {
     SlurryLine,
     /// Gas–liquid segmented flow (gas bookkeeping, slugs, mass transfer, pressure along the coil).
     SegmentedFlow,
+    /// Gas and liquid together through a packed catalyst cartridge (pressure drop, holdup, transfer).
+    GasLiquidBed,
 }
 
 /// One entry of a calculator's form, in page order.
@@ -209,10 +215,67 @@ const SEGMENTED_FLOW_LAYOUT: &[FormItem] = &[
     Field(gas::LIMITING_OXYGEN_FIELD),
 ];
 
+const GAS_LIQUID_BED_LAYOUT: &[FormItem] = &[
+    Heading("Cartridge and catalyst bed"),
+    Field(bed::TUBE_DIAMETER),
+    Field(bed::BED_LENGTH),
+    Choice(bed::SIZE_MODE),
+    Field(bed::PARTICLE_DIAMETER),
+    Field(bed::D10),
+    Field(bed::D50),
+    Field(bed::D90),
+    Choice(bed::PARTICLE_SHAPE),
+    Field(bed::SPHERICITY),
+    Choice(crate::physics::solids::SOLID),
+    Field(bed::PARTICLE_DENSITY),
+    Field(crate::physics::solids::PARTICLE_POROSITY),
+    Choice(bed::VOIDAGE_SOURCE),
+    Field(bed::VOIDAGE),
+    Heading("Liquid and substrate"),
+    Choice(fluids::selection::LIQUID),
+    Choice(fluids::selection::MIXTURE_FIRST),
+    Choice(fluids::selection::MIXTURE_SECOND),
+    Field(fluids::FIRST_VOLUME_FRACTION),
+    Field(fluids::selection::TEMPERATURE),
+    Field(bed::DENSITY),
+    Field(bed::VISCOSITY),
+    Field(fluids::CUSTOM_SURFACE_TENSION),
+    Field(gas_bed::LIQUID_FLOW),
+    Field(gas_bed::CONCENTRATION),
+    Heading("Gas"),
+    Choice(gas::GAS),
+    Field(gas::GAS_MOLE_FRACTION),
+    Field(gas::GAS_FLOW),
+    Choice(gas::REFERENCE_STATE),
+    Field(gas::REFERENCE_TEMPERATURE),
+    Field(gas::REFERENCE_PRESSURE),
+    Field(gas_bed::GAS_STOICHIOMETRY),
+    Choice(gas::LOC_SOURCE),
+    Field(gas::LIMITING_OXYGEN_FIELD),
+    Choice(gas::SOLUBILITY_SOURCE),
+    Field(gas::SOLUBILITY),
+    Field(gas::DIFFUSIVITY),
+    Heading("Flow direction"),
+    Choice(gas_bed::FLOW_DIRECTION),
+    Choice(bed::CONFINEMENT),
+    Heading("Pressure limits and tubing"),
+    Field(bed::BACK_PRESSURE),
+    Field(crate::physics::ambient::AMBIENT_PRESSURE),
+    Field(bed::PUMP_LIMIT),
+    Field(bed::RATING),
+    Field(bed::FITTING_RATING),
+    Choice(crate::physics::tubing::MATERIAL),
+    Choice(crate::physics::tubing::SIZE),
+    Heading("What the chemistry needs"),
+    Choice(gas_bed::DEMAND),
+    Field(gas_bed::TARGET_CONVERSION),
+    Field(gas_bed::REQUIRED_RATE),
+];
+
 impl Calculator {
     /// Every calculator, in page order.
-    pub const ALL: [Calculator; 4] =
-        [Calculator::TubularReactor, Calculator::PackedBed, Calculator::SlurryLine, Calculator::SegmentedFlow];
+    pub const ALL: [Calculator; 5] =
+        [Calculator::TubularReactor, Calculator::PackedBed, Calculator::SlurryLine, Calculator::SegmentedFlow, Calculator::GasLiquidBed];
 
     /// Stable key, as in case files.
     pub const fn key(self) -> &'static str {
@@ -221,6 +284,7 @@ impl Calculator {
             Calculator::PackedBed => "packed_bed",
             Calculator::SlurryLine => "slurry_line",
             Calculator::SegmentedFlow => "segmented_flow",
+            Calculator::GasLiquidBed => "gas_liquid_bed",
         }
     }
 
@@ -231,6 +295,7 @@ impl Calculator {
             Calculator::PackedBed => "Packed cartridge",
             Calculator::SlurryLine => "Slurry line",
             Calculator::SegmentedFlow => "Gas–liquid flow",
+            Calculator::GasLiquidBed => "Gas–liquid cartridge",
         }
     }
 
@@ -253,6 +318,11 @@ impl Calculator {
                 "How much gas reaches the liquid, the slug pattern it forms, how fast it dissolves against the \
                  residence time, and the pressure and bubble length along the coil up to the back-pressure regulator."
             }
+            Calculator::GasLiquidBed => {
+                "Gas and liquid pumped together through a catalyst cartridge: the pressure it takes, how much liquid the \
+                 bed holds and for how long, whether the gas reaches the catalyst as fast as the chemistry needs it, \
+                 and what would help."
+            }
         }
     }
 
@@ -263,6 +333,7 @@ impl Calculator {
             Calculator::PackedBed => PACKED_BED_LAYOUT,
             Calculator::SlurryLine => SLURRY_LAYOUT,
             Calculator::SegmentedFlow => SEGMENTED_FLOW_LAYOUT,
+            Calculator::GasLiquidBed => GAS_LIQUID_BED_LAYOUT,
         }
     }
 
@@ -270,7 +341,7 @@ impl Calculator {
     pub const fn element_layout(self) -> Option<&'static [FormItem]> {
         match self {
             Calculator::SlurryLine => Some(SLURRY_ELEMENT_LAYOUT),
-            Calculator::TubularReactor | Calculator::PackedBed | Calculator::SegmentedFlow => None,
+            Calculator::TubularReactor | Calculator::PackedBed | Calculator::SegmentedFlow | Calculator::GasLiquidBed => None,
         }
     }
 
@@ -281,6 +352,7 @@ impl Calculator {
             Calculator::PackedBed => PACKED_BED_DEMO_JSON,
             Calculator::SlurryLine => SLURRY_DEMO_JSON,
             Calculator::SegmentedFlow => SEGMENTED_FLOW_DEMO_JSON,
+            Calculator::GasLiquidBed => GAS_LIQUID_BED_DEMO_JSON,
         }
     }
 
@@ -291,6 +363,7 @@ impl Calculator {
             Calculator::PackedBed => "packed-bed-demo.json",
             Calculator::SlurryLine => "slurry-demo.json",
             Calculator::SegmentedFlow => "segmented-flow-demo.json",
+            Calculator::GasLiquidBed => "gas-liquid-bed-demo.json",
         }
     }
 
@@ -302,7 +375,7 @@ impl Calculator {
         match self {
             Calculator::SegmentedFlow => &[("tubing_material", Added::Choice("none"))],
             Calculator::PackedBed | Calculator::SlurryLine => &[PUMP],
-            Calculator::TubularReactor => &[],
+            Calculator::TubularReactor | Calculator::GasLiquidBed => &[],
         }
     }
 
@@ -330,6 +403,10 @@ impl Calculator {
             Calculator::PackedBed => {
                 let input = PackedBedInput::from_source(src).map_err(CaseError::Inputs)?;
                 bed::evaluate(&input).map_err(CaseError::Numerical)
+            }
+            Calculator::GasLiquidBed => {
+                let input = GasLiquidBedInput::from_source(src).map_err(CaseError::Inputs)?;
+                gas_bed::evaluate(&input).map_err(|e| CaseError::Calculation(e.to_string()))
             }
         }
     }

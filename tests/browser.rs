@@ -267,6 +267,34 @@ async fn gas_liquid_demo_shows_equivalents_spreads_and_the_oxygen_caution() {
     b.close().await;
 }
 
+#[tokio::test]
+async fn gas_liquid_cartridge_demo_shows_pressure_holdup_transfer_and_lifting_in_up_flow() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    b.click("[data-testid=tab-gas_liquid_bed]").await;
+    b.wait_for("[data-testid=panel-gas_liquid_bed]").await;
+    b.wait_for("[data-testid=result-bed_pressure_drop]").await;
+    assert_page_matches_cli(&b, Calculator::GasLiquidBed).await;
+    // Two correlations with their spread, the holdup spread, k_L a, the regime, the transfer
+    // verdict and the caution for opening the bed.
+    assert!(b.exists("[data-testid=spread-bed_pressure_drop]").await);
+    assert!(b.exists("[data-testid=spread-liquid_holdup]").await);
+    assert!(b.exists("[data-testid=result-kla]").await);
+    assert!(b.text("[data-testid=verdict-flow_regime]").await.to_lowercase().contains("caution"));
+    assert!(b.exists("[data-testid=verdict-gas_transfer]").await);
+    assert!(b.exists("[data-testid=caution-catalyst_ignition]").await);
+    assert_chart_drawn(&b, "bed_pressure_drop_vs_gas_flow").await;
+    b.screenshot("gas-liquid-cartridge-demo").await;
+    // Up-flow with the bed free to rise: the two-phase flow lifts it.
+    assert!(b.text("[data-testid=verdict-bed_lifting]").await.to_lowercase().contains("fine"));
+    b.click("[data-testid=option-flow_direction-up]").await;
+    b.wait_for("[data-testid=choice-confinement]").await;
+    b.text_when("[data-testid=verdict-bed_lifting]", |t| t.to_lowercase().contains("problem")).await;
+    assert!(b.exists("[data-testid=caution-bed_lifting]").await);
+    assert_clean(&b).await;
+    b.close().await;
+}
+
 /// The chart `key` is drawn: its canvas backing store is the CSS size times the device pixel
 /// ratio, and it has ink on it (not a blank white canvas).
 async fn assert_chart_drawn(b: &Browser, key: &str) {

@@ -133,3 +133,27 @@ fn every_form_opens_with_a_heading_and_has_no_empty_section() {
         assert_eq!(keys.len(), unique.len(), "{calculator:?}");
     }
 }
+
+#[test]
+fn gas_liquid_bed_demo_gives_the_librarys_numbers() {
+    use clearbore::case::{Calculator, CaseFile};
+    let out = run(&[concat!(env!("CARGO_MANIFEST_DIR"), "/public/cases/gas-liquid-bed-demo.json")], None);
+    assert!(out.status.success(), "{}", String::from_utf8_lossy(&out.stderr));
+    let v: serde_json::Value = serde_json::from_slice(&out.stdout).unwrap();
+    assert_eq!(v["calculator"], "gas_liquid_bed");
+    let library = CaseFile::from_json(Calculator::GasLiquidBed.demo_json()).unwrap().evaluate().unwrap();
+    let figures = v["report"]["figures"].as_array().unwrap();
+    assert_eq!(figures.len(), library.figures.len());
+    for (cli, lib) in figures.iter().zip(&library.figures) {
+        assert_eq!(cli["key"], lib.key);
+        // JSON text round trip: serde_json's default float parsing may miss the last bit.
+        let (a, b) = (cli["value"].as_f64().unwrap(), lib.value.get());
+        assert!((a - b).abs() <= 1e-14 * b.abs(), "{}: {a} vs {b}", lib.key);
+    }
+    let checks = v["report"]["checks"].as_array().unwrap();
+    for (cli, lib) in checks.iter().zip(&library.checks) {
+        assert_eq!(cli["verdict"], lib.verdict.word(), "{}", lib.key);
+    }
+    let dp = figures.iter().find(|f| f["key"] == "bed_pressure_drop").unwrap();
+    assert_eq!(dp["estimates"][0]["model"]["name"], "Larkins–White–Jeffrey");
+}

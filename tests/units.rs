@@ -35,7 +35,7 @@ fn every_unit_round_trips() {
         Dimension::SurfaceTension, Dimension::Diffusivity, Dimension::DynamicViscosity,
         Dimension::Density, Dimension::Concentration, Dimension::MolarMass, Dimension::Mass,
         Dimension::Amount, Dimension::SpecificAmount, Dimension::Frequency,
-        Dimension::MassFlow, Dimension::SpaceTimeYield, Dimension::Velocity, Dimension::Fraction,
+        Dimension::MassFlow, Dimension::MolarFlow, Dimension::SpaceTimeYield, Dimension::Velocity, Dimension::Fraction,
         Dimension::Number,
     ];
     for d in all {

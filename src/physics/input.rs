@@ -131,6 +131,8 @@ pub mod lab {
     pub const RATIO: Allowed = Allowed::positive_up_to(1000.0);
     /// Diffusivity in a liquid: 10⁻⁶ m²/s (a gas's own is about 10⁻⁵).
     pub const DIFFUSIVITY: Allowed = Allowed::positive_up_to(1e-6);
+    /// Molar flow (a rate the chemistry needs): 1 mol/min.
+    pub const MOLAR_FLOW: Allowed = Allowed::positive_up_to(1.0 / 60.0);
     /// Passes round a loop: 10 000.
     pub const PASSES: Allowed = Allowed { low: 1.0, low_inclusive: true, high: Some(1e4), high_inclusive: true, whole: true };
 }

@@ -5,6 +5,7 @@ pub mod ambient;
 pub mod diagram;
 pub mod fluids;
 pub mod form;
+pub mod gas_liquid_bed;
 pub mod gases;
 pub mod hazards;
 pub mod input;

@@ -34,15 +34,18 @@ pub struct PropertyError {
     pub fluid: &'static str,
     /// The temperature asked for, K.
     pub temperature_k: f64,
+    /// The temperatures the model was fitted over, K, if known.
+    pub fitted_k: Option<(f64, f64)>,
 }
 
 impl std::fmt::Display for PropertyError {
     fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
-        write!(
-            f,
-            "{} of {} has no physical value from its model at {} K (far outside the fitted range)",
-            self.quantity, self.fluid, self.temperature_k
-        )
+        let c = |k: f64| crate::physics::units::format_significant(k - 273.15, 3);
+        write!(f, "The {} model of {} gives no physical value at {} °C", self.quantity, self.fluid, c(self.temperature_k))?;
+        match self.fitted_k {
+            Some((low, high)) => write!(f, "; it covers {} to {} °C. Change the temperature, or enter the liquid's own properties.", c(low), c(high)),
+            None => f.write_str(". Change the temperature, or enter the liquid's own properties."),
+        }
     }
 }
 

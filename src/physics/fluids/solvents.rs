@@ -207,7 +207,12 @@ impl Solvent {
     fn evaluate(self, property: Property, t: Temperature, value: Option<f64>) -> Result<Evaluated<f64>, PropertyError> {
         match value {
             Some(v) => Ok(Evaluated { value: v, warnings: range_warnings(self.info(property), t) }),
-            None => Err(PropertyError { quantity: property.word(), fluid: self.name(), temperature_k: t.kelvin() }),
+            None => Err(PropertyError {
+                quantity: property.word(),
+                fluid: self.name(),
+                temperature_k: t.kelvin(),
+                fitted_k: self.info(property).validity.first().and_then(|b| b.low.zip(b.high)),
+            }),
         }
     }
 

@@ -189,6 +189,112 @@ pub struct SizingTarget {
     pub max_pressure_drop: PressureDifference,
 }
 
+/// The particles of a bed and how they pack, as entered on a cartridge form (one size or a
+/// d10/d50/d90 distribution, shape, voidage, solid). Shared by every calculator with a packed bed.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct Particles {
+    /// Volume-equivalent particle diameter d_v used in every correlation (d10 of a distribution).
+    pub particle_diameter: Length,
+    /// d10, d50, d90 when a distribution was entered.
+    pub distribution: Option<[Length; 3]>,
+    /// Particle shape.
+    pub shape: ParticleShape,
+    /// Bed voidage source.
+    pub voidage: VoidageSource,
+    /// The solid: from the solids table (with its internal porosity) or an entered density.
+    pub solid: SolidSelection,
+}
+
+impl Particles {
+    /// An input error on the voidage choice when the estimate is impossible (outside (0, 1)) for
+    /// these particles in a tube of bore `tube_diameter`; nothing when the voidage is entered.
+    pub fn check_estimated_voidage(&self, tube_diameter: Length) -> Result<(), InputError> {
+        if self.voidage != VoidageSource::Estimated {
+            return Ok(());
+        }
+        let (estimate, info, _) = packing::estimated_voidage(self.shape, self.particle_diameter, tube_diameter);
+        if estimate.si() > 0.0 && estimate.si() < 1.0 {
+            return Ok(());
+        }
+        Err(InputError {
+            field: VOIDAGE_SOURCE.key,
+            label: VOIDAGE_SOURCE.label,
+            given: "\"estimated\"".to_owned(),
+            problem: format!(
+                "{} gives ε = {} for these particles and this tube, which is impossible; enter a measured voidage",
+                info.name,
+                format_significant(estimate.si(), 3)
+            ),
+        })
+    }
+
+    /// Says which size the correlations used when a distribution was entered (empty otherwise).
+    pub fn size_note(&self) -> String {
+        match self.distribution {
+            Some([d10, ..]) => format!(
+                ", with d10 = {} µm: the fines fill the gaps between larger particles and set the pressure drop, so d10 is used (a conservative choice)",
+                format_significant(d10.si() * 1e6, 3)
+            ),
+            None => String::new(),
+        }
+    }
+}
+
+/// Reads the particle fields (size or distribution, shape, voidage, solid) that the choices make
+/// apply, reporting bad fields to `c`.
+pub fn read_particles(src: &dyn FieldSource, c: &mut Collector) -> Option<Particles> {
+    let sizes = match c.take(src.choice(&SIZE_MODE)) {
+        Some(0) => c.take(src.quantity(&PARTICLE_DIAMETER)).map(|d| (d, None)),
+        Some(_) => {
+            let d10 = c.take(src.quantity(&D10));
+            let d50 = c.take(src.quantity(&D50));
+            let d90 = c.take(src.quantity(&D90));
+            match (d10, d50, d90) {
+                (Some(a), Some(b), Some(g)) => {
+                    let micro = crate::physics::units::unit_by_symbol(Dimension::Length, "µm").unwrap_or(Dimension::Length.default_unit());
+                    let order = crate::physics::input::increasing(&[(&D10, a), (&D50, b), (&D90, g)], micro);
+                    if order.is_empty() {
+                        Some((a, Some([Length::from_si(a), Length::from_si(b), Length::from_si(g)])))
+                    } else {
+                        order.into_iter().for_each(|e| {
+                            c.take::<()>(Err(e));
+                        });
+                        None
+                    }
+                }
+                _ => None,
+            }
+        }
+        None => None,
+    };
+    let shape = match c.take(src.choice(&PARTICLE_SHAPE)) {
+        Some(0) => Some(ParticleShape::Sphere),
+        Some(1) => c.take(src.quantity(&SPHERICITY)).map(|sphericity| ParticleShape::Irregular { sphericity }),
+        Some(_) => c.take(src.quantity(&SPHERICITY)).map(|sphericity| ParticleShape::Cylinder { sphericity }),
+        None => None,
+    };
+    let voidage = match c.take(src.choice(&VOIDAGE_SOURCE)) {
+        Some(0) => c.take(src.quantity(&VOIDAGE)).map(|v| VoidageSource::Entered(Fraction::from_si(v))),
+        Some(_) => Some(VoidageSource::Estimated),
+        None => None,
+    };
+    let solid = solids::read(src, c, &PARTICLE_DENSITY);
+    let ((d, distribution), shape, voidage, solid) = (sizes?, shape?, voidage?, solid?);
+    Some(Particles { particle_diameter: Length::from_si(d), distribution, shape, voidage, solid })
+}
+
+/// Reads the pump limit and the cartridge and fittings ratings (gauge) and returns the lowest with
+/// the part that sets it: "pump", "cartridge" or "fittings and tubing".
+pub fn read_ratings(src: &dyn FieldSource, c: &mut Collector) -> Option<(f64, &'static str)> {
+    let ratings = [
+        (c.take(src.quantity(&PUMP_LIMIT)), "pump"),
+        (c.take(src.quantity(&RATING)), "cartridge"),
+        (c.take(src.quantity(&FITTING_RATING)), "fittings and tubing"),
+    ];
+    // The weakest part sets the limit.
+    ratings.iter().try_fold((f64::INFINITY, ""), |acc, (r, part)| r.map(|r| if r < acc.0 { (r, *part) } else { acc }))
+}
+
 /// Validated inputs of the packed-cartridge calculator.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
 pub struct PackedBedInput {
@@ -239,6 +345,11 @@ pub struct PackedBedInput {
 }
 
 impl PackedBedInput {
+    /// The particles as entered.
+    pub fn particles(&self) -> Particles {
+        Particles { particle_diameter: self.particle_diameter, distribution: self.distribution, shape: self.shape, voidage: self.voidage, solid: self.solid }
+    }
+
     /// Builds validated inputs from a source, reporting every bad field at once. Fields that the
     /// choices make irrelevant (sphericity of spheres, voidage when estimated, confinement in
     /// down-flow, capacity of a catalyst, sizing targets) are not read.
@@ -253,44 +364,7 @@ impl PackedBedInput {
             None => None,
         };
         let length_from_mass = matches!(src.choice(&BED_LENGTH_SOURCE), Ok(1));
-        let sizes = match c.take(src.choice(&SIZE_MODE)) {
-            Some(0) => c.take(src.quantity(&PARTICLE_DIAMETER)).map(|d| (d, None)),
-            Some(_) => {
-                let d10 = c.take(src.quantity(&D10));
-                let d50 = c.take(src.quantity(&D50));
-                let d90 = c.take(src.quantity(&D90));
-                match (d10, d50, d90) {
-                    (Some(a), Some(b), Some(g)) => {
-                        let micro = crate::physics::units::unit_by_symbol(Dimension::Length, "µm").unwrap_or(Dimension::Length.default_unit());
-                        let order = crate::physics::input::increasing(&[(&D10, a), (&D50, b), (&D90, g)], micro);
-                        if order.is_empty() {
-                            Some((a, Some([Length::from_si(a), Length::from_si(b), Length::from_si(g)])))
-                        } else {
-                            order.into_iter().for_each(|e| {
-                                c.take::<()>(Err(e));
-                            });
-                            None
-                        }
-                    }
-                    _ => None,
-                }
-            }
-            None => None,
-        };
-        let particle_diameter = sizes.map(|s| s.0);
-        let distribution = sizes.and_then(|s| s.1);
-        let shape = match c.take(src.choice(&PARTICLE_SHAPE)) {
-            Some(0) => Some(ParticleShape::Sphere),
-            Some(1) => c.take(src.quantity(&SPHERICITY)).map(|sphericity| ParticleShape::Irregular { sphericity }),
-            Some(_) => c.take(src.quantity(&SPHERICITY)).map(|sphericity| ParticleShape::Cylinder { sphericity }),
-            None => None,
-        };
-        let voidage = match c.take(src.choice(&VOIDAGE_SOURCE)) {
-            Some(0) => c.take(src.quantity(&VOIDAGE)).map(|v| VoidageSource::Entered(Fraction::from_si(v))),
-            Some(_) => Some(VoidageSource::Estimated),
-            None => None,
-        };
-        let solid = solids::read(src, &mut c, &PARTICLE_DENSITY);
+        let particles = read_particles(src, &mut c);
         let flow = c.take(src.quantity(&FLOW));
         let pump_max_flow = crate::physics::practical::read_pump_max_flow(src, &mut c);
         let direction = match c.take(src.choice(&FLOW_DIRECTION)) {
@@ -306,15 +380,9 @@ impl PackedBedInput {
         let back_pressure = c.take(src.quantity(&BACK_PRESSURE));
         let ambient = crate::physics::ambient::read(src, &mut c);
         let tubing = crate::physics::tubing::read(src, &mut c, &selection::TEMPERATURE);
-        let ratings = [
-            (c.take(src.quantity(&PUMP_LIMIT)), "pump"),
-            (c.take(src.quantity(&RATING)), "cartridge"),
-            (c.take(src.quantity(&FITTING_RATING)), "fittings and tubing"),
-        ];
-        // The weakest part sets the limit.
-        let lowest = ratings.iter().try_fold((f64::INFINITY, ""), |acc, (r, part)| r.map(|r| if r < acc.0 { (r, *part) } else { acc }));
-        let rating = lowest.map(|l| l.0);
-        let rating_part = lowest.map_or("", |l| l.1);
+        let ratings = read_ratings(src, &mut c);
+        let rating = ratings.map(|r| r.0);
+        let rating_part = ratings.map_or("", |r| r.1);
         let solid_mass = c.take(src.quantity(&SOLID_MASS));
         let role = match c.take(src.choice(&BED_ROLE)) {
             Some(0) => Some(BedRole::Catalyst),
@@ -349,19 +417,20 @@ impl PackedBedInput {
             None => None,
         };
         let (
-            Some(dt), Some(l), Some(dv), Some(shape), Some(voidage), Some(solid), Some(q), Some(direction), Some(rho),
+            Some(dt), Some(l), Some(particles), Some(q), Some(direction), Some(rho),
             Some(mu), Some(bp), Some(rating), Some(mass), Some(role), Some(sizing), Some(ambient), Some(tubing), Some(pump),
         ) = (
-            tube_diameter, bed_length, particle_diameter, shape, voidage, solid, flow, direction, density,
+            tube_diameter, bed_length, particles, flow, direction, density,
             viscosity, back_pressure, rating, solid_mass, role, sizing, ambient, tubing, pump_max_flow,
         )
         else {
             return Err(c.into_errors());
         };
+        let Particles { particle_diameter, distribution, shape, voidage, solid } = particles;
         let input = Self {
             tube_diameter: Length::from_si(dt),
             bed_length: Length::from_si(l),
-            particle_diameter: Length::from_si(dv),
+            particle_diameter,
             distribution,
             shape,
             voidage,
@@ -391,33 +460,8 @@ impl PackedBedInput {
             let area = crate::physics::pipe_flow::bore_area(input.tube_diameter);
             input.bed_length = Length::from_si(input.solid_mass.si() / (input.particle_density.si() * (1.0 - eps) * area));
         }
-        if input.voidage == VoidageSource::Estimated {
-            let (estimate, info, _) = packing::estimated_voidage(input.shape, input.particle_diameter, input.tube_diameter);
-            if !(estimate.si() > 0.0 && estimate.si() < 1.0) {
-                return Err(vec![InputError {
-                    field: VOIDAGE_SOURCE.key,
-                    label: VOIDAGE_SOURCE.label,
-                    given: "\"estimated\"".to_owned(),
-                    problem: format!(
-                        "{} gives ε = {} for these particles and this tube, which is impossible; enter a measured voidage",
-                        info.name,
-                        format_significant(estimate.si(), 3)
-                    ),
-                }]);
-            }
-        }
+        particles.check_estimated_voidage(input.tube_diameter).map_err(|e| vec![e])?;
         Ok(input)
-    }
-}
-
-/// Says which size the correlations used when a distribution was entered.
-fn size_note(input: &PackedBedInput) -> String {
-    match input.distribution {
-        Some([d10, ..]) => format!(
-            ", with d10 = {} µm: the fines fill the gaps between larger particles and set the pressure drop, so d10 is used (a conservative choice)",
-            format_significant(d10.si() * 1e6, 3)
-        ),
-        None => String::new(),
     }
 }
 
@@ -464,11 +508,13 @@ fn bar(p: f64) -> String {
     format_significant(p / 1e5, 3)
 }
 
-fn voidage_figure(voidage: &Voidage, input: &PackedBedInput) -> Result<Figure, NumericalError> {
+/// The bed-voidage figure: the estimate with its correlation, or the entered value with the
+/// Benyahia–O'Neill estimate beside it for comparison.
+pub fn voidage_figure(voidage: &Voidage, shape: ParticleShape, particle_diameter: Length, tube_diameter: Length) -> Result<Figure, NumericalError> {
     match voidage.model {
         Some(model) => Figure::single("bed_voidage", "Bed voidage", Dimension::Fraction, model, voidage.value.si(), voidage.warnings.clone()),
         None => {
-            let (estimate, info, warnings) = packing::estimated_voidage(input.shape, input.particle_diameter, input.tube_diameter);
+            let (estimate, info, warnings) = packing::estimated_voidage(shape, particle_diameter, tube_diameter);
             let value = Finite::new("bed voidage", voidage.value.si())?;
             let mut estimates = vec![Estimate { model: ENTERED_VOIDAGE_INFO, value, recommended: true, warnings: Vec::new() }];
             if estimate.si() > 0.0 && estimate.si() < 1.0 {
@@ -576,7 +622,8 @@ fn lifting_check(input: &PackedBedInput, u_s: Velocity, umf: Option<&Figure>) ->
     }
 }
 
-fn wall_check(ratio: f64, bed: &BedFlow) -> Check {
+/// The wall-effect check for D_t/d_p = `ratio`, with the Mehta–Hawley correction to Ergun for `bed`.
+pub fn wall_check(ratio: f64, bed: &BedFlow) -> Check {
     let extra = (mehta_hawley::pressure_drop(bed).si() / ergun::pressure_drop(bed).si() - 1.0) * 100.0;
     let (verdict, text) = if ratio < geometry::MIN_DIAMETER_RATIO {
         (Verdict::Caution, "below 10: liquid bypasses along the wall (channelling), widening the residence-time distribution")
@@ -637,7 +684,8 @@ fn fill_check(mass: Mass, full: Mass, length: Length, voidage: Fraction) -> Chec
     Check { key: "bed_fill", topic: "Mass packed and bed", verdict, reason, caution: None }
 }
 
-fn plug_flow_check(ratio: f64) -> Check {
+/// The plug-flow check for L/d_p = `ratio` (rule of thumb, marked as such).
+pub fn plug_flow_check(ratio: f64) -> Check {
     let ok = ratio >= geometry::MIN_LENGTH_RATIO;
     Check {
         key: "plug_flow",
@@ -768,6 +816,28 @@ fn sizing_figures_and_check(
     Ok(Check { key, topic: "Sizing for the target residence time", verdict: if fits { Verdict::Fine } else { Verdict::Caution }, reason: text, caution: None })
 }
 
+/// The D_t/d_p and L/d_p figures, each with the warning of its rule of thumb.
+pub fn ratio_figures(diameter_ratio: f64, length_ratio: f64) -> Result<[Figure; 2], NumericalError> {
+    Ok([
+        Figure::single(
+            "diameter_ratio",
+            "Tube-to-particle diameter ratio",
+            Dimension::Number,
+            geometry::DIAMETER_RATIO_INFO,
+            diameter_ratio,
+            flow::range_warnings(&geometry::DIAMETER_RATIO_INFO, &[(flow::DIAMETER_RATIO, diameter_ratio)]),
+        )?,
+        Figure::single(
+            "length_ratio",
+            "Bed-length-to-particle ratio",
+            Dimension::Number,
+            geometry::LENGTH_RATIO_INFO,
+            length_ratio,
+            flow::range_warnings(&geometry::LENGTH_RATIO_INFO, &[(geometry::LENGTH_RATIO, length_ratio)]),
+        )?,
+    ])
+}
+
 /// Computes every figure and check for the packed cartridge.
 pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
     let voidage = input.voidage.resolve(input.shape, input.particle_diameter, input.tube_diameter)?;
@@ -800,33 +870,20 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
     })?;
 
     let mut figures = vec![
-        voidage_figure(&voidage, input)?,
+        voidage_figure(&voidage, input.shape, input.particle_diameter, input.tube_diameter)?,
         Figure::definition("bed_volume", "Bed volume", Dimension::Volume, geometry::BED_VOLUME_INFO, v_bed.si())?,
         Figure::definition("void_volume", "Void volume between particles", Dimension::Volume, geometry::VOID_VOLUME_INFO, v_void.si())?,
         Figure::definition("residence_time", "Residence time between particles", Dimension::Duration, geometry::RESIDENCE_TIME_INFO, geometry::residence_time(v_void, input.flow).si())?,
         Figure::definition("superficial_velocity", "Superficial velocity", Dimension::Velocity, geometry::SUPERFICIAL_VELOCITY_INFO, u_s.si())?,
         Figure::definition("interstitial_velocity", "Interstitial velocity", Dimension::Velocity, geometry::INTERSTITIAL_VELOCITY_INFO, geometry::interstitial_velocity(u_s, eps).si())?,
         Figure::definition("particle_reynolds", "Particle Reynolds number", Dimension::Number, geometry::PARTICLE_REYNOLDS_INFO, bed.particle_reynolds())?,
-        Figure::single(
-            "diameter_ratio",
-            "Tube-to-particle diameter ratio",
-            Dimension::Number,
-            geometry::DIAMETER_RATIO_INFO,
-            diameter_ratio,
-            flow::range_warnings(&geometry::DIAMETER_RATIO_INFO, &[(flow::DIAMETER_RATIO, diameter_ratio)]),
-        )?,
-        Figure::single(
-            "length_ratio",
-            "Bed-length-to-particle ratio",
-            Dimension::Number,
-            geometry::LENGTH_RATIO_INFO,
-            length_ratio,
-            flow::range_warnings(&geometry::LENGTH_RATIO_INFO, &[(geometry::LENGTH_RATIO, length_ratio)]),
-        )?,
+    ];
+    figures.extend(ratio_figures(diameter_ratio, length_ratio)?);
+    figures.extend([
         dp.clone(),
         Figure::definition("inlet_pressure", "Inlet pressure (gauge)", Dimension::PressureDifference, INLET_PRESSURE_INFO, inlet)?,
         Figure::definition("packed_mass", "Mass a full bed holds", Dimension::Mass, geometry::PACKED_MASS_INFO, full_mass.si())?,
-    ];
+    ]);
     if let Some(f) = &umf {
         figures.push(f.clone());
     }
@@ -849,7 +906,7 @@ pub fn evaluate(input: &PackedBedInput) -> Result<Report, NumericalError> {
     figures.insert(0, input.solid.figure(false, input.density)?);
     figures.splice(0..0, input.liquid.figures()?);
     let mut advice = AdviceList::default();
-    let pressure = pressure_check(inlet, &dp, input.back_pressure.si(), input.rating.si(), input.rating_part, &size_note(input));
+    let pressure = pressure_check(inlet, &dp, input.back_pressure.si(), input.rating.si(), input.rating_part, &input.particles().size_note());
     if pressure.verdict != Verdict::Fine {
         advice::pressure(input, &bed, input.rating.si(), &mut advice, pressure.key);
     }

@@ -38,7 +38,13 @@ impl std::fmt::Display for SegmentedFlowError {
             SegmentedFlowError::NoConvergence { quantity, iterations } => {
                 write!(f, "{quantity} did not converge in {iterations} iterations")
             }
-            SegmentedFlowError::Profile(e) => write!(f, "pressure profile: {e}"),
+            // Integration failures mean the drop approaches the pressure itself: the gas would
+            // expand without bound. Said in the user's terms, the solver detail left out.
+            SegmentedFlowError::Profile(_) => f.write_str(
+                "The pressure along the coil cannot be followed for these entries: the coil's pressure drop comes close to \
+                 the pressure itself, so the gas would expand without bound. Shorten the coil, widen its bore, lower the gas \
+                 or liquid flow, or raise the back-pressure.",
+            ),
             SegmentedFlowError::Root(e) => write!(f, "root finding: {e}"),
             SegmentedFlowError::Numerical(e) => e.fmt(f),
             SegmentedFlowError::Property(e) => e.fmt(f),

@@ -71,6 +71,8 @@ pub enum Dimension {
     Frequency,
     /// Mass flow (SI: kg/s).
     MassFlow,
+    /// Amount-of-substance flow, e.g. gas fed or taken up (SI: mol/s).
+    MolarFlow,
     /// Mass produced per time per reactor volume (SI: kg s⁻¹ m⁻³).
     SpaceTimeYield,
     /// Velocity (SI: m/s).
@@ -158,6 +160,12 @@ const MASS_FLOW: &[Unit] = &[
     Unit::scale("kg/h", 1.0 / HOUR),
     Unit::scale("kg/s", 1.0),
 ];
+const MOLAR_FLOW: &[Unit] = &[
+    Unit::scale("mmol/min", 1e-3 / MINUTE),
+    Unit::scale("µmol/min", 1e-6 / MINUTE),
+    Unit::scale("mmol/h", 1e-3 / HOUR),
+    Unit::scale("mol/s", 1.0),
+];
 const SPACE_TIME_YIELD: &[Unit] = &[
     Unit::scale("g/(h·L)", 1e-3 / HOUR / LITRE),
     Unit::scale("kg/(h·L)", 1.0 / HOUR / LITRE),
@@ -194,6 +202,7 @@ impl Dimension {
             Dimension::SpecificAmount => SPECIFIC_AMOUNT,
             Dimension::Frequency => FREQUENCY,
             Dimension::MassFlow => MASS_FLOW,
+            Dimension::MolarFlow => MOLAR_FLOW,
             Dimension::SpaceTimeYield => SPACE_TIME_YIELD,
             Dimension::Velocity => VELOCITY,
             Dimension::Fraction => FRACTION,
@@ -277,6 +286,7 @@ impl Dimension {
             Dimension::SpecificAmount => "mol/kg",
             Dimension::Frequency => "1/s",
             Dimension::MassFlow => "kg/s",
+            Dimension::MolarFlow => "mol/s",
             Dimension::SpaceTimeYield => "kg/(s·m³)",
             Dimension::Velocity => "m/s",
             Dimension::Fraction | Dimension::Number => "1",

@@ -1,0 +1,55 @@
+//! Chart of the two-phase bed pressure drop against the gas flow: the recommended correlation,
+//! the spread of all of them, the liquid's own Ergun pressure drop, the pressure the weakest part
+//! leaves for the bed, and this gas flow.
+
+use super::pressure_drop::{RECOMMENDED, TwoPhaseModel};
+use super::{Assessment, GasLiquidBedError, GasLiquidBedInput, profile};
+use crate::physics::gases::ReferenceFlow;
+use crate::physics::packed_bed::ergun;
+use crate::physics::plot::{Axis, Marker, Plot};
+use crate::physics::units::{Dimension, VolumetricFlow};
+
+/// Points over the two decades of gas flow.
+const POINTS: usize = 31;
+
+/// Bed friction pressure drop from a tenth to ten times the entered gas flow (at its reference
+/// state), log–log.
+pub fn pressure_drop_vs_gas_flow(input: &GasLiquidBedInput, a: &Assessment) -> Result<Plot, GasLiquidBedError> {
+    let mut plot = Plot::new(
+        "bed_pressure_drop_vs_gas_flow",
+        "Two-phase bed pressure drop against gas flow",
+        Axis { label: "Gas flow at its reference state", dimension: Dimension::VolumetricFlow, log: true, unit: "" },
+        Axis { label: "Bed pressure drop (friction)", dimension: Dimension::PressureDifference, log: true, unit: "" },
+    );
+    let q0 = input.gas_flow.flow.si();
+    let mut recommended = Vec::with_capacity(POINTS);
+    let mut band = Vec::with_capacity(POINTS);
+    for i in 0..POINTS {
+        let q = q0 * 10f64.powf(-1.0 + 2.0 * i as f64 / (POINTS - 1) as f64);
+        let mut cond = a.conditions;
+        cond.gas_feed = ReferenceFlow { flow: VolumetricFlow::from_si(q), state: input.gas_flow.state }.molar_flow();
+        let mut lo = f64::INFINITY;
+        let mut hi = f64::NEG_INFINITY;
+        for model in TwoPhaseModel::ALL {
+            let dp = profile::integrate(&cond, model)?.friction_drop;
+            lo = lo.min(dp);
+            hi = hi.max(dp);
+            if model == RECOMMENDED {
+                recommended.push((q, dp));
+            }
+        }
+        band.push((q, lo, hi));
+    }
+    plot.band("Spread of the correlations", band);
+    plot.line("Larkins–White–Jeffrey (recommended)", recommended, true);
+    let cond = &a.conditions;
+    let alone = cond.at(cond.outlet_pressure).liquid_alone().with_length(input.bed_length);
+    plot.mark(Marker::Horizontal { label: "Liquid alone (Ergun)".to_owned(), y: ergun::pressure_drop(&alone).si(), limit: false });
+    plot.mark(Marker::Horizontal {
+        label: "Allowed bed drop (rating − back-pressure)".to_owned(),
+        y: input.rating.si() - input.back_pressure.si(),
+        limit: true,
+    });
+    plot.mark(Marker::Point { label: "This gas flow".to_owned(), x: q0, y: a.recommended()?.friction_drop });
+    Ok(plot)
+}
