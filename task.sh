@@ -48,6 +48,14 @@ setup_other_browsers() {
   fi
 }
 
+# axe-core (pinned in tests/browser-tools/package-lock.json), injected by the layout tests only.
+setup_browser_tools() {
+  if [ ! -f tests/browser-tools/node_modules/axe-core/axe.min.js ]; then
+    say "installing the browser-test tools (npm ci: axe-core, pinned)"
+    npm ci --prefix tests/browser-tools --no-audit --no-fund
+  fi
+}
+
 build() {
   setup_wasm
   say "building the page (release, wasm32)"
@@ -95,7 +103,8 @@ case "${1:-}" in
     cargo test
     build
     say "browser end-to-end tests (headless Chromium, file://)"
-    cargo test --features e2e --test browser
+    setup_browser_tools
+    cargo test --features e2e --test browser --test layout
     say "smoke tests in Firefox and WebKit (file://)"
     cargo test --features e2e --test engines
     ;;

@@ -299,6 +299,17 @@ impl Calculator {
         }
     }
 
+    /// The figures a chemist reads first, shown in the answer summary (keys of the report).
+    pub const fn headline(self) -> &'static [&'static str] {
+        match self {
+            Calculator::TubularReactor => &["residence_time", "inlet_pressure", "productivity"],
+            Calculator::PackedBed => &["residence_time", "bed_pressure_drop", "inlet_pressure"],
+            Calculator::SlurryLine => &["inlet_pressure", "narrowest_passage", "total_pressure_drop"],
+            Calculator::SegmentedFlow => &["gas_equivalents", "residence_time", "saturation_time", "inlet_pressure"],
+            Calculator::GasLiquidBed => &["bed_pressure_drop", "liquid_residence_time", "capacity", "required_rate"],
+        }
+    }
+
     /// One sentence on what it answers.
     pub const fn summary(self) -> &'static str {
         match self {

@@ -70,7 +70,13 @@ where
     let px = |v: f64| (v * scale).round() as u32;
     let ux = plot.x.display_unit();
     let uy = plot.y.display_unit();
-    let mut chart = ChartBuilder::on(area)
+    // The legend goes below the chart, outside the data.
+    let items = legend_items(plot);
+    let (width, height) = area.dim_in_pixel();
+    let rows = legend_rows(&items, width, scale);
+    let legend_height = px(8.0) + rows.len() as u32 * px(17.0);
+    let (chart_area, legend_area) = area.split_vertically(height.saturating_sub(legend_height));
+    let mut chart = ChartBuilder::on(&chart_area)
         .caption(plot.title, ("sans-serif", 16.0 * scale))
         .margin(px(10.0))
         .x_label_area_size(px(42.0))
@@ -95,16 +101,14 @@ where
     let mut next = 0usize;
     for s in &plot.series {
         match s {
-            Series::Band { label, x, low, high } => {
+            Series::Band { x, low, high, .. } => {
                 let mut outline: Vec<(f64, f64)> = x.iter().zip(low).map(|(a, b)| (ux.from_si(*a), uy.from_si(*b))).collect();
                 outline.extend(x.iter().zip(high).rev().map(|(a, b)| (ux.from_si(*a), uy.from_si(*b))));
                 chart
                     .draw_series(std::iter::once(Polygon::new(outline, ACCENT.mix(0.18).filled())))
-                    .map_err(err)?
-                    .label(label.as_str())
-                    .legend(move |(x, y)| Rectangle::new([(x, y - 5), (x + 18, y + 5)], ACCENT.mix(0.18).filled()));
+                    .map_err(err)?;
             }
-            Series::Line { label, points, emphasis } => {
+            Series::Line { points, emphasis, .. } => {
                 let color = if *emphasis { ACCENT } else { lines[1 + next % 2] };
                 if !*emphasis {
                     next += 1;
@@ -113,9 +117,7 @@ where
                 let pts = points.iter().map(|(a, b)| (ux.from_si(*a), uy.from_si(*b)));
                 chart
                     .draw_series(LineSeries::new(pts, color.stroke_width(width)))
-                    .map_err(err)?
-                    .label(label.as_str())
-                    .legend(move |(x, y)| PathElement::new(vec![(x, y), (x + 18, y)], color.stroke_width(width)));
+                    .map_err(err)?;
             }
         }
     }
@@ -124,46 +126,145 @@ where
         limits += 1;
         LIMITS[(limits - 1) % LIMITS.len()]
     };
+    let off = plot.off_range();
     for m in &plot.markers {
+        // Every limit takes its colour in turn, drawn or not, so the legend's colours match.
+        let color = match m {
+            Marker::Horizontal { limit: true, .. } | Marker::Vertical { limit: true, .. } => limit_color(),
+            _ => GUIDE,
+        };
+        if off.iter().any(|o| std::ptr::eq(*o, m)) {
+            continue;
+        }
         match m {
-            Marker::Horizontal { label, y, limit } => {
-                let color = if *limit { limit_color() } else { GUIDE };
+            Marker::Horizontal { y, .. } => {
                 let y = uy.from_si(*y);
                 chart
                     .draw_series(LineSeries::new([(xr.start, y), (xr.end, y)], color.stroke_width(px(1.5).max(1))))
-                    .map_err(err)?
-                    .label(label.as_str())
-                    .legend(move |(x, y)| PathElement::new(vec![(x, y), (x + 18, y)], color));
+                    .map_err(err)?;
             }
-            Marker::Vertical { label, x, limit } => {
-                let color = if *limit { limit_color() } else { GUIDE };
+            Marker::Vertical { x, .. } => {
                 let x = ux.from_si(*x);
                 chart
                     .draw_series(LineSeries::new([(x, yr.start), (x, yr.end)], color.stroke_width(px(1.0).max(1))))
-                    .map_err(err)?
-                    .label(label.as_str())
-                    .legend(move |(x, y)| PathElement::new(vec![(x, y - 5), (x, y + 5)], color));
+                    .map_err(err)?;
             }
-            Marker::Point { label, x, y } => {
+            Marker::Point { x, y, .. } => {
                 let p = (ux.from_si(*x), uy.from_si(*y));
                 let r = px(4.5).max(2);
                 chart
                     .draw_series(std::iter::once(Circle::new(p, r, BLACK.filled())))
-                    .map_err(err)?
-                    .label(label.as_str())
-                    .legend(move |(x, y)| Circle::new((x + 9, y), r, BLACK.filled()));
+                    .map_err(err)?;
             }
         }
     }
-    chart
-        .configure_series_labels()
-        .position(SeriesLabelPosition::UpperLeft)
-        .label_font(("sans-serif", 11.0 * scale))
-        .background_style(WHITE.mix(0.85))
-        .border_style(GUIDE)
-        .draw()
-        .map_err(err)?;
+    draw_legend(&legend_area, &items, &rows, scale)?;
     area.present().map_err(err)
+}
+
+/// How a legend entry is drawn.
+#[derive(Clone, Copy)]
+enum Swatch {
+    Band,
+    Line(RGBColor, f64),
+    Vertical(RGBColor),
+    Point,
+    /// A limit too far from the data to draw: named with an arrow at the legend.
+    Off(RGBColor, &'static str),
+}
+
+/// The legend's entries in drawing order, with the same colours the chart uses.
+fn legend_items(plot: &Plot) -> Vec<(String, Swatch)> {
+    let mut items = Vec::new();
+    let lines = [ACCENT, SECOND, THIRD];
+    let mut next = 0usize;
+    for s in &plot.series {
+        match s {
+            Series::Band { label, .. } => items.push((label.clone(), Swatch::Band)),
+            Series::Line { label, emphasis, .. } => {
+                let color = if *emphasis { ACCENT } else { lines[1 + next % 2] };
+                if !*emphasis {
+                    next += 1;
+                }
+                items.push((label.clone(), Swatch::Line(color, if *emphasis { 2.5 } else { 1.5 })));
+            }
+        }
+    }
+    let off = plot.off_range();
+    let (_, x1, _, y1) = plot.bounds().unwrap_or((0.0, 0.0, 0.0, 0.0));
+    let ux = plot.x.display_unit();
+    let uy = plot.y.display_unit();
+    let mut limits = 0usize;
+    for m in &plot.markers {
+        let is_off = off.iter().any(|o| std::ptr::eq(*o, m));
+        match m {
+            Marker::Horizontal { label, y, limit } | Marker::Vertical { label, x: y, limit } => {
+                let color = if *limit {
+                    limits += 1;
+                    LIMITS[(limits - 1) % LIMITS.len()]
+                } else {
+                    GUIDE
+                };
+                let horizontal = matches!(m, Marker::Horizontal { .. });
+                if is_off {
+                    let (unit, arrow) = if horizontal { (uy, if *y > y1 { "↑" } else { "↓" }) } else { (ux, if *y > x1 { "→" } else { "←" }) };
+                    let at = format!("{label}: {} {} (off the chart)", format_significant(unit.from_si(*y), 3), unit.symbol);
+                    items.push((at, Swatch::Off(color, arrow)));
+                } else if horizontal {
+                    items.push((label.clone(), Swatch::Line(color, 1.5)));
+                } else {
+                    items.push((label.clone(), Swatch::Vertical(color)));
+                }
+            }
+            Marker::Point { label, .. } => items.push((label.clone(), Swatch::Point)),
+        }
+    }
+    items
+}
+
+/// Rough width of a legend entry in pixels (swatch, gap and text at 11 px × `scale`).
+fn item_width(label: &str, scale: f64) -> u32 {
+    ((30.0 + 6.2 * label.chars().count() as f64) * scale).round() as u32
+}
+
+/// The entries packed into rows that fit `width`.
+fn legend_rows(items: &[(String, Swatch)], width: u32, scale: f64) -> Vec<Vec<usize>> {
+    let mut rows: Vec<Vec<usize>> = Vec::new();
+    let mut used = u32::MAX;
+    let room = width.saturating_sub((20.0 * scale) as u32);
+    for (i, (label, _)) in items.iter().enumerate() {
+        let w = item_width(label, scale) + (12.0 * scale) as u32;
+        if used.saturating_add(w) > room || rows.is_empty() {
+            rows.push(vec![i]);
+            used = w;
+        } else if let Some(row) = rows.last_mut() {
+            row.push(i);
+            used += w;
+        }
+    }
+    rows
+}
+
+fn draw_legend<DB: DrawingBackend>(area: &DrawingArea<DB, Shift>, items: &[(String, Swatch)], rows: &[Vec<usize>], scale: f64) -> Result<(), DrawError> {
+    let px = |v: f64| (v * scale).round() as i32;
+    let font = ("sans-serif", 11.0 * scale).into_font();
+    for (r, row) in rows.iter().enumerate() {
+        let y = px(12.0) + r as i32 * px(17.0);
+        let mut x = px(12.0);
+        for &i in row {
+            let Some((label, swatch)) = items.get(i) else { continue };
+            match *swatch {
+                Swatch::Band => area.draw(&Rectangle::new([(x, y - px(5.0)), (x + px(18.0), y + px(5.0))], ACCENT.mix(0.18).filled())).map_err(err)?,
+                Swatch::Line(color, w) => area.draw(&PathElement::new(vec![(x, y), (x + px(18.0), y)], color.stroke_width((w * scale).round().max(1.0) as u32))).map_err(err)?,
+                Swatch::Vertical(color) => area.draw(&PathElement::new(vec![(x + px(9.0), y - px(6.0)), (x + px(9.0), y + px(6.0))], color.stroke_width(px(1.5).max(1) as u32))).map_err(err)?,
+                Swatch::Point => area.draw(&Circle::new((x + px(9.0), y), px(4.0).max(2) as u32, BLACK.filled())).map_err(err)?,
+                Swatch::Off(color, arrow) => area.draw(&Text::new(arrow, (x + px(3.0), y - px(7.0)), ("sans-serif", 13.0 * scale).into_font().color(&color))).map_err(err)?,
+            }
+            area.draw(&Text::new(label.clone(), (x + px(24.0), y - px(6.0)), font.clone())).map_err(err)?;
+            x += item_width(label, scale) as i32 + px(12.0);
+        }
+    }
+    Ok(())
 }
 
 /// The chart as an SVG document of `width` × `height` pixels.

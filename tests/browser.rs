@@ -10,15 +10,15 @@ use clearbore::physics::units::format_significant;
 use serde_json::Value;
 use support::Browser;
 
-/// Label, value and unit of every result row on the page.
-async fn result_rows(b: &Browser) -> Vec<(String, String, String)> {
+/// Label, value and unit of every result row of the table with this test id.
+async fn result_rows(b: &Browser, table: &str) -> Vec<(String, String, String)> {
     let rows = b
-        .js(r#"return Array.from(document.querySelectorAll('[data-testid=results] > tbody > tr')).map(tr => [
+        .js(&format!(r#"return Array.from(document.querySelectorAll('[data-testid={table}] > tbody > tr')).map(tr => [
             tr.querySelector('th').textContent.trim(),
             tr.querySelector('td.value').textContent.trim(),
             (tr.querySelector('select.unit') || tr.querySelector('span.unit')).value
                 ?? tr.querySelector('span.unit').textContent.trim()
-        ]);"#)
+        ]);"#))
         .await;
     rows.as_array()
         .unwrap()
@@ -36,29 +36,50 @@ async fn assert_clean(b: &Browser) {
     b.assert_clean().await;
 }
 
-/// Every result row on the page equals the command line's output for the calculator's demo case
-/// file, formatted with the page's default of 4 significant figures in each figure's default unit.
+/// The rows of `table` equal the command line's `figures`, each formatted with the page's default
+/// of 4 significant figures in the unit its size calls for.
+async fn assert_rows_match(b: &Browser, table: &str, figures: &[&Value], library: &clearbore::physics::report::Report) {
+    let rows = result_rows(b, table).await;
+    assert_eq!(rows.len(), figures.len(), "{table}: one row per figure: {rows:?}");
+    for (f, (label, value, unit)) in figures.iter().zip(&rows) {
+        let si = f["value"].as_f64().unwrap();
+        let u = library.figure(f["key"].as_str().unwrap()).unwrap().dimension.display_unit(si);
+        assert_eq!(label, f["label"].as_str().unwrap());
+        assert_eq!(unit, u.symbol, "{label}");
+        assert_eq!(value, &format_significant(u.from_si(si), 4), "{label}");
+    }
+}
+
+/// Every figure and verdict on the page equals the command line's output for the calculator's
+/// demo case file: the main results table, and for a line each element's detail in turn.
 async fn assert_page_matches_cli(b: &Browser, calculator: Calculator) {
     let file = format!("{}/public/cases/{}", env!("CARGO_MANIFEST_DIR"), calculator.demo_file());
     let out = std::process::Command::new(env!("CARGO_BIN_EXE_clearbore")).arg(&file).output().unwrap();
     assert!(out.status.success(), "{file}: {}", String::from_utf8_lossy(&out.stderr));
     let cli: Value = serde_json::from_slice(&out.stdout).unwrap();
     let figures = cli["report"]["figures"].as_array().unwrap();
-    // The library gives each figure's kind of quantity (and so its default unit).
     let library = CaseFile::from_json(calculator.demo_json()).unwrap().evaluate().unwrap();
-    let rows = result_rows(b).await;
-    assert_eq!(rows.len(), figures.len(), "one row per figure: {rows:?}");
-    for (f, (label, value, unit)) in figures.iter().zip(&rows) {
-        let u = library.figure(f["key"].as_str().unwrap()).unwrap().dimension.default_unit();
-        assert_eq!(label, f["label"].as_str().unwrap());
-        assert_eq!(unit, u.symbol, "{label}");
-        assert_eq!(value, &format_significant(u.from_si(f["value"].as_f64().unwrap()), 4), "{label}");
-    }
+    let element = |key: &str| key.strip_prefix("element_").and_then(|k| k.split('_').next()).and_then(|n| n.parse::<usize>().ok());
+    let main: Vec<&Value> = figures.iter().filter(|f| element(f["key"].as_str().unwrap()).is_none()).collect();
+    assert_rows_match(b, "results", &main, &library).await;
     let checks = cli["report"]["checks"].as_array().unwrap();
-    for c in checks {
+    let verdict_of = async |key: &str| b.text(&format!("[data-testid=verdict-{key}]")).await.to_lowercase();
+    for c in checks.iter().filter(|c| element(c["key"].as_str().unwrap()).is_none()) {
         let key = c["key"].as_str().unwrap();
-        let shown = b.text(&format!("[data-testid=verdict-{key}]")).await.to_lowercase();
+        let shown = verdict_of(key).await;
         assert!(shown.contains(c["verdict"].as_str().unwrap()), "{key}: page {shown}, CLI {}", c["verdict"]);
+    }
+    let parts = figures.iter().filter_map(|f| element(f["key"].as_str().unwrap())).max().unwrap_or(0);
+    for n in 1..=parts {
+        b.click(&format!("[data-testid=part-{n}]")).await;
+        b.text_when("[data-testid=element-detail] h3", |t| t.starts_with(&format!("Element {n}:"))).await;
+        let mine: Vec<&Value> = figures.iter().filter(|f| element(f["key"].as_str().unwrap()) == Some(n)).collect();
+        assert_rows_match(b, "element-results", &mine, &library).await;
+        for c in checks.iter().filter(|c| element(c["key"].as_str().unwrap()) == Some(n)) {
+            let key = c["key"].as_str().unwrap();
+            let shown = verdict_of(key).await;
+            assert!(shown.contains(c["verdict"].as_str().unwrap()), "{key}: page {shown}, CLI {}", c["verdict"]);
+        }
     }
 }
 
@@ -185,6 +206,13 @@ async fn packed_cartridge_demo_matches_the_command_line_and_flags_problems() {
     b.close().await;
 }
 
+/// Opens element `n`'s detail by clicking it in the drawn line.
+async fn select_element(b: &Browser, n: usize) {
+    b.wait_for(&format!("[data-testid=part-{n}]")).await;
+    b.click(&format!("[data-testid=part-{n}]")).await;
+    b.text_when("[data-testid=element-detail] h3", |t| t.starts_with(&format!("Element {n}:"))).await;
+}
+
 #[tokio::test]
 async fn slurry_line_gives_a_verdict_per_element_and_follows_edits() {
     let b = Browser::start().await;
@@ -193,41 +221,55 @@ async fn slurry_line_gives_a_verdict_per_element_and_follows_edits() {
     b.wait_for("[data-testid=panel-slurry_line]").await;
     b.wait_for("[data-testid=verdict-line_verdict]").await;
     assert_page_matches_cli(&b, Calculator::SlurryLine).await;
+    // Every element is drawn, coloured by its verdict; each one's checks open with it.
     for n in 1..=5 {
+        assert!(b.exists(&format!("[data-testid=part-{n}]")).await, "element {n} drawn");
+        select_element(&b, n).await;
         assert!(b.exists(&format!("[data-testid=verdict-element_{n}_settling]")).await, "element {n}");
         assert!(b.exists(&format!("[data-testid=verdict-element_{n}_clogging]")).await, "element {n}");
     }
+    assert!(b.text("[data-testid=narrowest-mark]").await.contains("narrowest"));
     let narrowest = b.text("[data-testid=check-narrowest_passage]").await;
     assert!(narrowest.contains("Element 5") && narrowest.contains("back-pressure regulator seat"), "{narrowest}");
     // Horizontal 1.6 mm tubing: d90 particles reach the wall in a fraction of a second, a plug
     // risk, with its caution beside the verdict.
+    select_element(&b, 1).await;
     assert!(b.text("[data-testid=verdict-element_1_settling]").await.to_lowercase().contains("problem"));
     assert!(b.text("[data-testid=caution-element_1_settling]").await.contains("plug"));
+    // The summary opens with the verdict and names the failing elements.
+    assert!(b.text("[data-testid=overall-verdict]").await.to_lowercase().contains("problem"));
+    assert!(b.exists("[data-testid=act-element_1_settling]").await);
     b.screenshot("slurry-demo").await;
 
     // A 0.10 mm seat against d90 = 60 µm: passage ratio 1.7, below 3 (bridging, Marin et al. 2018).
     b.type_into("element_5_inner_diameter", "0.1").await;
+    select_element(&b, 5).await;
     b.text_when("[data-testid=verdict-element_5_clogging]", |t| t.to_lowercase().contains("problem")).await;
     assert!(b.exists("[data-testid=caution-element_5_clogging]").await);
     // Faster flow carries the particles up the vertical run: 10 mL/min gives U = 82.9 mm/s in
     // 1.6 mm, above 5 × the 6.6 mm/s hindered settling velocity of d90.
     b.type_into("flow", "10").await;
+    select_element(&b, 4).await;
     b.text_when("[data-testid=verdict-element_4_settling]", |t| t.to_lowercase().contains("fine")).await;
     // Coarser particles bridge the 0.5 mm fitting: d90 = 200 µm gives a passage ratio of 2.5 (< 3).
+    select_element(&b, 2).await;
     assert!(!b.text("[data-testid=verdict-element_2_clogging]").await.to_lowercase().contains("problem"));
     b.type_into("d90", "200").await;
+    select_element(&b, 2).await;
     b.text_when("[data-testid=verdict-element_2_clogging]", |t| t.to_lowercase().contains("problem")).await;
     // Elements can be added and removed; each new one gets its own verdicts.
     b.click("[data-testid=add-element]").await;
+    b.wait_for("[data-testid=part-6]").await;
+    select_element(&b, 6).await;
     b.wait_for("[data-testid=verdict-element_6_settling]").await;
     b.click("[data-testid=remove-element-6]").await;
     for _ in 0..50 {
-        if !b.exists("[data-testid=verdict-element_6_settling]").await {
+        if !b.exists("[data-testid=part-6]").await {
             break;
         }
         tokio::time::sleep(std::time::Duration::from_millis(50)).await;
     }
-    assert!(!b.exists("[data-testid=verdict-element_6_settling]").await);
+    assert!(!b.exists("[data-testid=part-6]").await && !b.exists("[data-testid=verdict-element_6_settling]").await);
     b.screenshot("slurry-edited").await;
     assert_clean(&b).await;
     b.close().await;
@@ -269,7 +311,8 @@ async fn gas_liquid_demo_shows_equivalents_spreads_and_the_oxygen_caution() {
 
 #[tokio::test]
 async fn gas_liquid_cartridge_demo_shows_pressure_holdup_transfer_and_lifting_in_up_flow() {
-    let b = Browser::start().await;
+    // At device pixel ratio 2, so that its chart is checked for sharpness like the others.
+    let b = Browser::start_scaled(2.0).await;
     b.open_page().await;
     b.click("[data-testid=tab-gas_liquid_bed]").await;
     b.wait_for("[data-testid=panel-gas_liquid_bed]").await;

@@ -157,3 +157,13 @@ fn gas_liquid_bed_demo_gives_the_librarys_numbers() {
     let dp = figures.iter().find(|f| f["key"] == "bed_pressure_drop").unwrap();
     assert_eq!(dp["estimates"][0]["model"]["name"], "Larkins–White–Jeffrey");
 }
+
+#[test]
+fn every_headline_figure_is_in_its_demo_report() {
+    for c in clearbore::case::Calculator::ALL {
+        let r = clearbore::case::CaseFile::from_json(c.demo_json()).unwrap().evaluate().unwrap();
+        for key in c.headline() {
+            assert!(r.figure(key).is_some(), "{}: no figure {key}", c.key());
+        }
+    }
+}

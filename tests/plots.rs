@@ -127,3 +127,24 @@ fn junction_lengths_follow_the_squeezing_law_across_gas_fractions() {
         assert!(points.windows(2).all(|w| w[1].1 > w[0].1));
     }
 }
+
+#[test]
+fn a_limit_far_from_the_curve_is_named_at_the_edge_instead_of_squashing_it() {
+    // The cartridge demo's allowed drop (rating minus back-pressure) lies far above its ~0.01 bar
+    // bed drop on a log axis: it stays off the axis range and the legend names it instead.
+    let report = demo(Calculator::PackedBed);
+    let p = report.plots.iter().find(|p| p.key == "bed_pressure_drop_vs_flow").unwrap();
+    let (_, _, y0, y1) = p.bounds().unwrap();
+    let data_high = p.series.iter().flat_map(|s| match s {
+        Series::Line { points, .. } => points.iter().map(|q| q.1).collect::<Vec<_>>(),
+        Series::Band { high, .. } => high.clone(),
+    }).fold(0.0, f64::max);
+    let off = p.off_range();
+    assert_eq!(off.len(), 1, "{off:?}");
+    let Marker::Horizontal { y, .. } = off[0] else { panic!("{off:?}") };
+    assert!(*y > 10.0 * data_high && *y > y1, "{y} {y1}");
+    // The axis spans the data (the log axis pads by 1.5 when drawn; here the bounds are the data's).
+    assert!(y1 <= data_high * (1.0 + 1e-12) && y0 > 0.0, "{y0}..{y1}");
+    let svg = clearbore::plot::to_svg(p, 800, 500).unwrap();
+    assert!(svg.contains("(off the chart)") && svg.contains("16.0 bar"), "the far limit is named with its value");
+}

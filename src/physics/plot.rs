@@ -175,14 +175,19 @@ impl Plot {
         if xs.is_empty() {
             return None;
         }
+        // A limit line joins the axis range only when it lies near the data; one far off would
+        // squash the curve it bounds, so it is named at the chart's edge instead
+        // (`Plot::off_range`). The operating point always joins.
+        let (data_x, data_y) = (xs.clone(), ys.clone());
         for m in &self.markers {
             match m {
-                Marker::Horizontal { y, .. } => ys.push(*y),
-                Marker::Vertical { x, .. } => xs.push(*x),
+                Marker::Horizontal { y, .. } if near(&data_y, *y, self.y.log) => ys.push(*y),
+                Marker::Vertical { x, .. } if near(&data_x, *x, self.x.log) => xs.push(*x),
                 Marker::Point { x, y, .. } => {
                     xs.push(*x);
                     ys.push(*y);
                 }
+                _ => {}
             }
         }
         let span = |v: &[f64], log: bool| {
@@ -201,5 +206,35 @@ impl Plot {
         let (x0, x1) = span(&xs, self.x.log);
         let (y0, y1) = span(&ys, self.y.log);
         Some((x0, x1, y0, y1))
+    }
+
+    /// The limit lines that lie too far from the data to draw without squashing it: drawn as a
+    /// note at the edge of the chart instead.
+    pub fn off_range(&self) -> Vec<&Marker> {
+        let Some((x0, x1, y0, y1)) = self.bounds() else { return Vec::new() };
+        self.markers
+            .iter()
+            .filter(|m| match m {
+                Marker::Horizontal { y, .. } => *y < y0 || *y > y1,
+                Marker::Vertical { x, .. } => *x < x0 || *x > x1,
+                Marker::Point { .. } => false,
+            })
+            .collect()
+    }
+}
+
+/// Whether `value` lies close enough to the data in `values` to share its axis: within the data's
+/// own span beyond either end (linear), or a decade beyond (log).
+fn near(values: &[f64], value: f64, log: bool) -> bool {
+    let lo = values.iter().copied().fold(f64::INFINITY, f64::min);
+    let hi = values.iter().copied().fold(f64::NEG_INFINITY, f64::max);
+    if !(lo.is_finite() && hi.is_finite()) {
+        return true;
+    }
+    if log {
+        lo > 0.0 && value > 0.0 && value >= lo / 10.0 && value <= hi * 10.0
+    } else {
+        let span = (hi - lo).max(hi.abs().max(lo.abs()) * 0.1);
+        value >= lo - span && value <= hi + span
     }
 }

@@ -4,6 +4,7 @@ use leptos::prelude::*;
 
 use super::calculator::CalculatorPanel;
 use super::display::provide_display;
+use super::print::Printing;
 use super::workbench::provide_workbench;
 use crate::case::Calculator;
 
@@ -11,6 +12,16 @@ use crate::case::Calculator;
 #[component]
 pub fn App() -> impl IntoView {
     let display = provide_display();
+    // The printed record is built only while printing: the browser's own print command and the
+    // page's button both raise these events.
+    let printing = RwSignal::new(false);
+    provide_context(Printing(printing));
+    let before = window_event_listener(leptos::ev::beforeprint, move |_| printing.set(true));
+    let after = window_event_listener(leptos::ev::afterprint, move |_| printing.set(false));
+    on_cleanup(move || {
+        before.remove();
+        after.remove();
+    });
     let bench = provide_workbench();
     let active = bench.active;
     view! {
@@ -33,32 +44,63 @@ pub fn App() -> impl IntoView {
             </label>
         </header>
         <SafetyNotice />
-        <nav class="tabs no-print" aria-label="Calculators">
+        <div class="tabs no-print" role="tablist" aria-label="Calculators" data-testid="tablist">
             {Calculator::ALL
                 .iter()
-                .map(|c| {
+                .enumerate()
+                .map(|(i, c)| {
                     let c = *c;
+                    // Arrow keys, Home and End move between tabs (the ARIA tab pattern).
+                    let on_key = move |ev: leptos::ev::KeyboardEvent| {
+                        let n = Calculator::ALL.len();
+                        let to = match ev.key().as_str() {
+                            "ArrowRight" => (i + 1) % n,
+                            "ArrowLeft" => (i + n - 1) % n,
+                            "Home" => 0,
+                            "End" => n - 1,
+                            _ => return,
+                        };
+                        ev.prevent_default();
+                        if let Some(next) = Calculator::ALL.get(to) {
+                            active.set(*next);
+                            focus(&format!("tab-{}", next.key()));
+                        }
+                    };
                     view! {
                         <button
                             type="button"
+                            role="tab"
                             class="tab"
+                            id=format!("tab-{}", c.key())
                             class:active=move || active.get() == c
-                            aria-pressed=move || if active.get() == c { "true" } else { "false" }
+                            aria-selected=move || if active.get() == c { "true" } else { "false" }
+                            aria-controls=format!("panel-{}", c.key())
+                            tabindex=move || if active.get() == c { "0" } else { "-1" }
                             data-testid=format!("tab-{}", c.key())
                             on:click=move |_| active.set(c)
+                            on:keydown=on_key
                         >
                             {c.title()}
                         </button>
                     }
                 })
                 .collect_view()}
-        </nav>
+        </div>
         <main>
             {move || bench.form(active.get()).map(|form| view! { <CalculatorPanel form=form /> })}
         </main>
         <footer>
             <p>{concat!("Clearbore ", env!("CARGO_PKG_VERSION"), " · runs entirely in this browser; nothing is sent anywhere.")}</p>
         </footer>
+    }
+}
+
+/// Moves the keyboard focus to the element with this id, if there is one.
+fn focus(id: &str) {
+    use wasm_bindgen::JsCast;
+    if let Some(el) = web_sys::window().and_then(|w| w.document()).and_then(|d| d.get_element_by_id(id)).and_then(|e| e.dyn_into::<web_sys::HtmlElement>().ok()) {
+        // Focus can only fail on a detached element; then there is nothing to move to.
+        let _ = el.focus();
     }
 }
 

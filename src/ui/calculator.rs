@@ -5,14 +5,18 @@ use std::cell::RefCell;
 
 use leptos::prelude::*;
 
+use super::advice::AdviceView;
 use super::case_io::CaseToolbar;
 use super::charts::PlotList;
-use super::field::{FieldState, QuantityField};
+use super::diagrams::{LineStrip, PartTable, SlugView, line_of, slugs_of};
+use super::field::{FieldErrors, FieldState, QuantityField};
 use super::results::{CheckList, ResultTable};
+use super::print::{PrintRecord, Printing, entry_rows, entry_text};
+use super::summary::AnswerSummary;
 use crate::case::{Calculator, CaseError, CaseFile, Entries, Entry, FORMAT_VERSION, FormItem};
 use crate::physics::form::{ChoiceSpec, FieldSource};
 use crate::physics::input::{FieldSpec, InputError};
-use crate::physics::report::Report;
+use crate::physics::report::{Advice, Report, Verdict};
 use crate::physics::units::parse_number;
 
 /// The editable state of one set of entries (a calculator's, or one element's): a state per
@@ -243,11 +247,24 @@ struct Outcome {
     stale: bool,
     /// A numerical failure, shown instead of numbers.
     failure: Option<String>,
+    /// The entries' errors (each shown at its field where the field is on the page).
+    errors: Vec<InputError>,
     /// Keys of the fields and choices the calculator read.
     applicable: Vec<&'static str>,
 }
 
-/// A calculator: its toolbar, inputs on the left, checks and results on the right.
+/// Whether a check belongs to one element of a line (shown in that element's detail).
+fn element_check(key: &str) -> bool {
+    key.starts_with("element_")
+}
+
+/// The number of the element a check or figure key belongs to (`element_3_…` → 3).
+fn element_number(key: &str) -> Option<usize> {
+    key.strip_prefix("element_")?.split('_').next()?.parse().ok()
+}
+
+/// A calculator: its toolbar; the answer first (summary), the inputs, and the detail (drawing,
+/// per-element table and detail, checks, advice, every figure, charts).
 #[component]
 pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
     let source = form.clone();
@@ -255,16 +272,55 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
         let last = prev.and_then(|p| p.report.clone());
         let (result, applicable) = run_watched(&source);
         match result {
-            Ok(report) => Outcome { report: Some(report), stale: false, failure: None, applicable },
+            Ok(report) => Outcome { report: Some(report), stale: false, failure: None, errors: Vec::new(), applicable },
             Err(e @ (CaseError::Numerical(_) | CaseError::Calculation(_))) => {
-                Outcome { report: last, stale: true, failure: Some(e.to_string()), applicable }
+                Outcome { report: last, stale: true, failure: Some(e.to_string()), errors: Vec::new(), applicable }
             }
-            Err(_) => Outcome { report: last, stale: true, failure: None, applicable },
+            Err(CaseError::Inputs(errors)) => Outcome { report: last, stale: true, failure: None, errors, applicable },
+            Err(CaseError::Format(m)) => Outcome { report: last, stale: true, failure: Some(m), errors: Vec::new(), applicable },
         }
     });
+    let errors = Memo::new(move |_| outcome.with(|o| o.errors.clone()));
+    provide_context(FieldErrors(errors));
     let report = Signal::derive(move || outcome.with(|o| o.report.clone()));
     let applicable = Memo::new(move |_| outcome.with(|o| o.applicable.clone()));
     let calculator = form.calculator;
+    // Errors at entries that are not on the page (the list of elements as a whole) are said in
+    // the notice; the others show at their fields, which are then red.
+    let element_names = {
+        let form = form.clone();
+        Memo::new(move |_| {
+            let n = form.elements.with(Vec::len);
+            let layout = calculator.element_layout().unwrap_or_default();
+            (1..=n).flat_map(|i| layout.iter().filter_map(FormItem::key).map(move |k| format!("element_{i}_{k}"))).collect::<Vec<_>>()
+        })
+    };
+    let unplaced = Memo::new(move |_| {
+        outcome.with(|o| {
+            o.errors
+                .iter()
+                .filter(|e| !o.applicable.contains(&e.field) && !element_names.with(|n| n.iter().any(|k| k == e.field)))
+                .map(|e| format!("{}: {} — {}", e.label, e.given, e.problem))
+                .collect::<Vec<_>>()
+        })
+    });
+    let line = Memo::new(move |_| report.with(|r| r.as_ref().and_then(line_of)));
+    let slugs = Memo::new(move |_| report.with(|r| r.as_ref().and_then(slugs_of)));
+    // The element whose detail is open: the worst one when the report changes, or the one picked.
+    let selected = RwSignal::new(0usize);
+    Effect::new(move |prev: Option<Vec<Verdict>>| {
+        let verdicts: Vec<Verdict> = line.with(|l| l.as_ref().map(|l| l.parts.iter().map(|p| p.verdict).collect()).unwrap_or_default());
+        if prev.as_ref() != Some(&verdicts) {
+            let worst = verdicts.iter().enumerate().max_by_key(|(i, v)| (**v, std::cmp::Reverse(*i))).map_or(0, |(i, _)| i);
+            selected.set(worst);
+        }
+        verdicts
+    });
+    let select = Callback::new(move |key: &'static str| {
+        if let Some(n) = element_number(key) {
+            selected.set(n.saturating_sub(1));
+        }
+    });
     let inputs = {
         let form = form.clone();
         move || {
@@ -280,47 +336,137 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
             layout
                 .iter()
                 .enumerate()
-                .filter_map(|(i, item)| match item {
-                    FormItem::Field(spec) if keys.contains(&spec.key) => {
-                        form.main.field(spec.key).map(|state| view! { <QuantityField spec=*spec state=state /> }.into_any())
-                    }
-                    FormItem::Choice(spec) if keys.contains(&spec.key) => {
-                        form.main.choice_signal(spec.key).map(|selected| view! { <ChoicePicker spec=*spec selected=selected /> }.into_any())
-                    }
-                    FormItem::Heading(text) if shown_under(i) => Some(view! { <h3 class="form-heading">{*text}</h3> }.into_any()),
-                    _ => None,
+                .filter(|(i, item)| match item {
+                    FormItem::Heading(_) => shown_under(*i),
+                    other => other.key().is_some_and(|k| keys.contains(&k)),
                 })
-                .collect_view()
+                .map(|(i, _)| i)
+                .collect::<Vec<_>>()
+                .into_iter()
+                .filter_map(|i| Some((i, layout.get(i).copied()?)))
+                .map(|(i, item)| (i, item, form.clone()))
+                .collect::<Vec<_>>()
+        }
+    };
+    let main_checks = Callback::new(|key: &'static str| !element_check(key));
+    let main_figures = Signal::derive(move || {
+        report.with(|r| r.as_ref().map(|r| r.figures.iter().map(|f| f.key).filter(|k| !element_check(k)).collect::<Vec<_>>()).unwrap_or_default())
+    });
+    let element_figures = Signal::derive(move || {
+        let n = selected.get() + 1;
+        report.with(|r| r.as_ref().map(|r| r.figures.iter().map(|f| f.key).filter(|k| element_number(k) == Some(n)).collect::<Vec<_>>()).unwrap_or_default())
+    });
+    let element_checks = Callback::new(move |key: &'static str| element_number(key) == Some(selected.get_untracked() + 1));
+    let element_advice = Callback::new(move |a: Advice| {
+        let n = selected.get_untracked() + 1;
+        a.checks.iter().all(|k| element_number(k) == Some(n))
+    });
+    let shared_advice = Callback::new(move |a: Advice| {
+        // Said once in the main list: advice for line-level checks, or shared by several elements.
+        let elements: Vec<usize> = a.checks.iter().filter_map(|k| element_number(k)).collect();
+        elements.len() < a.checks.len() || elements.windows(2).any(|w| w[0] != w[1])
+    });
+    let printing = use_context::<Printing>();
+    let record = {
+        let form = form.clone();
+        move || {
+            printing.is_some_and(|p| p.0.get()).then(|| {
+                let (report, stale, applicable) = outcome.with_untracked(|o| (o.report.clone(), o.stale, o.applicable.clone()));
+                let mut ignored = Vec::new();
+                let inputs = form.main.to_entries(&[], &mut ignored);
+                let entries = entry_rows(calculator.layout(), &applicable, &inputs);
+                let elements = form.elements.with_untracked(|list| {
+                    list.iter()
+                        .map(|e| {
+                            let entries = e.state.to_entries(&[], &mut ignored);
+                            calculator
+                                .element_layout()
+                                .unwrap_or_default()
+                                .iter()
+                                .filter_map(|item| match item {
+                                    FormItem::Choice(c) => entries.get(c.key).map(|v| match v {
+                                        Entry::Choice(k) => c.options.iter().find(|(key, _)| key == k).map_or(k.clone(), |(_, l)| (*l).to_owned()),
+                                        other => entry_text(other),
+                                    }),
+                                    FormItem::Field(f) => Some(entries.get(f.key).map_or_else(|| "—".to_owned(), entry_text)),
+                                    FormItem::Heading(_) => None,
+                                })
+                                .collect::<Vec<_>>()
+                        })
+                        .collect::<Vec<_>>()
+                });
+                report.map(|report| view! {
+                    <PrintRecord calculator=calculator title=form.title.get_untracked() entries=entries elements=elements report=report stale=stale />
+                })
+            })
         }
     };
     view! {
-        <section class="panel" data-testid=format!("panel-{}", calculator.key())>
-            <h2>{calculator.title()}</h2>
-            <p class="lead">{calculator.summary()}</p>
-            <CaseToolbar form=form.clone() />
-            <p class="case-title" data-testid="case-title">{move || form.title.get()}</p>
-            <div class="columns">
-                <form class="inputs" on:submit=|ev| ev.prevent_default()>
-                    {inputs}
-                    {calculator.element_layout().map(|_| view! { <ElementList form=form.clone() /> })}
-                </form>
-                <div class="outputs">
-                    {move || outcome.with(|o| o.stale).then(|| view! {
-                        <p class="stale" role="status" data-testid="stale-notice">
-                            "Some entries are invalid (marked in red). The results below are for the last valid entries."
-                        </p>
+        <section class="panel" role="tabpanel" id=format!("panel-{}", calculator.key()) aria-labelledby=format!("tab-{}", calculator.key()) data-testid=format!("panel-{}", calculator.key())>
+            <div class="panel-head">
+                <h2>{calculator.title()}</h2>
+                <p class="lead">{calculator.summary()}</p>
+                <CaseToolbar form=form.clone() />
+                <p class="case-title" data-testid="case-title">{move || form.title.get()}</p>
+            </div>
+            <div class="workspace">
+                <div class="summary-area">
+                    {move || outcome.with(|o| o.stale).then(|| {
+                        let unplaced = unplaced.get();
+                        view! {
+                            <div class="stale" role="status" data-testid="stale-notice">
+                                {if unplaced.is_empty() {
+                                    "Some entries are invalid (marked in red). The results are for the last valid entries.".to_owned()
+                                } else {
+                                    "Not computed for the present entries; the results are for the last valid ones.".to_owned()
+                                }}
+                                {(!unplaced.is_empty()).then(|| view! { <ul>{unplaced.into_iter().map(|u| view! { <li>{u}</li> }).collect_view()}</ul> })}
+                            </div>
+                        }
                     })}
                     {move || outcome.with(|o| o.failure.clone()).map(|f| view! {
                         <p class="failure" role="alert" data-testid="numerical-failure">{f}</p>
                     })}
+                    <AnswerSummary calculator=calculator report=report select=select />
+                </div>
+                <form class="inputs" on:submit=|ev| ev.prevent_default() aria-label=format!("{} inputs", calculator.title())>
+                    <For each=inputs key=|(i, _, _)| *i let:entry>
+                        <FormEntry item=entry.1 form=entry.2 />
+                    </For>
+                    {calculator.element_layout().map(|_| view! { <ElementList form=form.clone() /> })}
+                </form>
+                <div class="detail-area">
+                    <SlugView strip=Signal::derive(move || slugs.get()) />
+                    {move || line.with(Option::is_some).then(|| view! {
+                        <LineStrip line=Signal::derive(move || line.get()) selected=selected />
+                        <PartTable line=Signal::derive(move || line.get()) selected=selected />
+                        <section class="element-detail" data-testid="element-detail">
+                            <h3>{move || line.with(|l| l.as_ref().and_then(|l| l.parts.get(selected.get()).map(|p| format!("Element {}: {}", selected.get() + 1, p.kind))).unwrap_or_default())}</h3>
+                            {move || { selected.track(); view! { <CheckList report=report wanted=element_checks testid="element-checks" /> } }}
+                            {move || { selected.track(); view! { <AdviceView report=report wanted=element_advice select=select testid="element-advice" /> } }}
+                            <ResultTable report=report keys=element_figures testid="element-results" />
+                        </section>
+                    })}
                     <h3>"Checks"</h3>
-                    <CheckList report=report />
+                    <CheckList report=report wanted=main_checks />
+                    <AdviceView report=report wanted=shared_advice select=select />
                     <h3>"Results"</h3>
-                    <ResultTable report=report />
+                    <ResultTable report=report keys=main_figures />
                     <PlotList report=report />
                 </div>
             </div>
+            {record}
         </section>
+    }
+}
+
+/// One entry of a calculator's form: a heading, a quantity field or a choice.
+#[component]
+fn FormEntry(item: FormItem, form: CalculatorForm) -> impl IntoView {
+    match item {
+        FormItem::Field(spec) => form.main.field(spec.key).map(|state| view! { <QuantityField spec=spec state=state /> }.into_any()),
+        FormItem::Choice(spec) => form.main.choice_signal(spec.key).map(|selected| view! { <ChoicePicker spec=spec selected=selected /> }.into_any()),
+        FormItem::Heading(text) => Some(view! { <h3 class="form-heading">{text}</h3> }.into_any()),
     }
 }
 

@@ -36,6 +36,7 @@ async fn read_chosen(input: web_sys::HtmlInputElement) -> Result<String, String>
 #[component]
 pub fn CaseToolbar(form: CalculatorForm) -> impl IntoView {
     let message = RwSignal::new(String::new());
+    let file_input = NodeRef::<leptos::html::Input>::new();
     let bench = use_workbench();
     let on_open = move |ev: leptos::ev::Event| {
         let Some(input) = ev.target().and_then(|t| t.dyn_into::<web_sys::HtmlInputElement>().ok()) else { return };
@@ -70,18 +71,28 @@ pub fn CaseToolbar(form: CalculatorForm) -> impl IntoView {
             message.set("Demo case loaded (an invented scenario).".to_owned());
         }
     };
+    let printing = use_context::<super::print::Printing>();
     let on_print = move |_| {
-        if let Some(w) = web_sys::window() {
-            // Printing is best effort: a refusal leaves the page as it is.
-            let _ = w.print();
+        // Build the record first, then open the browser's print dialog once it is drawn.
+        if let Some(p) = printing {
+            p.0.set(true);
         }
+        leptos::prelude::request_animation_frame(move || {
+            if let Some(w) = web_sys::window() {
+                // Printing is best effort: a refusal leaves the page as it is.
+                let _ = w.print();
+            }
+        });
     };
     view! {
         <div class="toolbar no-print">
-            <label class="button">
-                "Open case…"
-                <input type="file" accept=".json,application/json" data-testid="open-case" on:change=on_open />
-            </label>
+            // A real button opens the (hidden) file chooser, so that Tab reaches it.
+            <button type="button" data-testid="open-case-button" on:click=move |_| {
+                if let Some(input) = file_input.get() {
+                    input.click();
+                }
+            }>"Open case…"</button>
+            <input node_ref=file_input type="file" class="visually-hidden" tabindex="-1" aria-hidden="true" accept=".json,application/json" data-testid="open-case" on:change=on_open />
             <button type="button" data-testid="save-case" on:click=on_save>"Save case"</button>
             <button type="button" data-testid="load-demo" on:click=on_demo>"Load demo"</button>
             <button type="button" data-testid="print" on:click=on_print>"Print record"</button>

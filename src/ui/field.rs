@@ -1,5 +1,6 @@
 //! `QuantityField`: a labelled number entry with its unit selector and, when the entry is
-//! impossible or unreadable, the validation message right at the field.
+//! impossible, unreadable or disagrees with another entry, the message right at the field (tied
+//! to the input for screen readers).
 
 use leptos::prelude::*;
 
@@ -28,6 +29,11 @@ impl FieldState {
     }
 }
 
+/// The errors of the current entries that involve several fields (d50 below d10, a solids
+/// fraction above the packing limit), by field name, so that each shows at its field.
+#[derive(Debug, Clone, Copy)]
+pub struct FieldErrors(pub Memo<Vec<InputError>>);
+
 /// A number shown without trailing zeros, for writing a converted value back into a field.
 fn plain(value: f64) -> String {
     let s = format_significant(value, 6);
@@ -40,10 +46,17 @@ fn plain(value: f64) -> String {
 /// physical value stays the same.
 #[component]
 pub fn QuantityField(spec: FieldSpec, state: FieldState, #[prop(optional, into)] name: Option<String>) -> impl IntoView {
-    let error = Memo::new(move |_| state.read(&spec).err());
     let name = name.unwrap_or_else(|| spec.key.to_owned());
+    let others = use_context::<FieldErrors>();
+    let error = {
+        let name = name.clone();
+        Memo::new(move |_| {
+            state.read(&spec).err().or_else(|| others.and_then(|o| o.0.with(|errors| errors.iter().find(|e| e.field == name).cloned())))
+        })
+    };
     let id = format!("in-{name}");
     let error_id = format!("error-{name}");
+    let help_id = format!("help-{name}");
     let units = spec.dimension.units();
     let on_unit = move |new_symbol: String| {
         let old = unit_by_symbol(spec.dimension, &state.unit.get_untracked());
@@ -68,6 +81,10 @@ pub fn QuantityField(spec: FieldSpec, state: FieldState, #[prop(optional, into)]
             </select>
         }
     });
+    let described = {
+        let (error_id, help_id) = (error_id.clone(), help_id.clone());
+        move || if error.with(Option::is_some) { format!("{error_id} {help_id}") } else { help_id.clone() }
+    };
     view! {
         <div class="field" class:invalid=move || error.with(Option::is_some) data-testid=format!("field-{name}")>
             <label for=id.clone()>{spec.label}</label>
@@ -79,18 +96,19 @@ pub fn QuantityField(spec: FieldSpec, state: FieldState, #[prop(optional, into)]
                     autocomplete="off"
                     data-testid=format!("input-{name}")
                     aria-invalid=move || if error.with(Option::is_some) { "true" } else { "false" }
+                    aria-describedby=described
                     prop:value=move || state.text.get()
                     on:input:target=move |ev| state.text.set(ev.target().value())
                 />
                 {unit_picker}
             </div>
-            <p class="help">{spec.help}</p>
+            <p class="help" id=help_id>{spec.help}</p>
             {move || {
                 error
                     .get()
                     .map(|e| {
                         view! {
-                            <p class="field-error" role="alert" data-testid=error_id.clone()>
+                            <p class="field-error" role="alert" id=error_id.clone() data-testid=error_id.clone()>
                                 {format!("{}: {}", e.given, e.problem)}
                             </p>
                         }

@@ -1,17 +1,31 @@
 //! The page (Leptos 0.8, client-side rendering; wasm32 only). Components show what the physics
 //! returns; none of them computes a formula.
 
+mod advice;
 mod app;
 mod calculator;
 mod case_io;
 mod charts;
+mod diagrams;
 mod display;
 mod field;
 mod panic_banner;
+mod print;
 mod results;
+mod summary;
 mod workbench;
 
 use wasm_bindgen::JsValue;
+
+/// Scrolls the element with this id into view once the page has redrawn (after a selection
+/// has opened the detail it is in).
+pub(crate) fn scroll_to(id: String) {
+    leptos::prelude::request_animation_frame(move || {
+        if let Some(el) = web_sys::window().and_then(|w| w.document()).and_then(|d| d.get_element_by_id(&id)) {
+            el.scroll_into_view();
+        }
+    });
+}
 
 /// Installs the panic banner, mounts the page, and records when it became interactive.
 pub fn mount() {

@@ -180,9 +180,16 @@ impl Browser {
             .unwrap_or_else(|e| panic!("{css} did not appear: {e}"));
     }
 
-    /// Text of the element matching `css`.
+    /// Text of the element matching `css`: its rendered text, or for an element folded away
+    /// (a closed `<details>`) its text content, trimmed.
     pub async fn text(&self, css: &str) -> String {
-        self.client.find(Locator::Css(css)).await.unwrap_or_else(|e| panic!("{css}: {e}")).text().await.unwrap()
+        let el = self.client.find(Locator::Css(css)).await.unwrap_or_else(|e| panic!("{css}: {e}"));
+        let t = self
+            .client
+            .execute("const e = arguments[0]; return e.innerText.trim() || e.textContent.replace(/\\s+/g, ' ').trim();", vec![serde_json::to_value(&el).unwrap()])
+            .await
+            .unwrap();
+        t.as_str().unwrap_or_default().to_owned()
     }
 
     /// Whether an element matching `css` exists.
@@ -195,7 +202,8 @@ impl Browser {
         let mut last = String::new();
         for _ in 0..100 {
             if let Ok(el) = self.client.find(Locator::Css(css)).await
-                && let Ok(t) = el.text().await
+                && let Ok(t) = self.client.execute("const e = arguments[0]; return e.innerText.trim() || e.textContent.replace(/\\s+/g, ' ').trim();", vec![serde_json::to_value(&el).unwrap()]).await
+                && let Some(t) = t.as_str().map(str::to_owned)
             {
                 if ok(&t) {
                     return t;
@@ -229,6 +237,12 @@ impl Browser {
     /// Runs JavaScript in the page and returns its value.
     pub async fn js(&self, script: &str) -> Value {
         self.client.execute(script, vec![]).await.unwrap()
+    }
+
+    /// Sets the browser window's outer size in CSS pixels.
+    pub async fn resize(&self, width: u32, height: u32) {
+        self.client.set_window_size(width, height).await.unwrap();
+        tokio::time::sleep(Duration::from_millis(150)).await;
     }
 
     /// Saves a screenshot under `target/screenshots/` for a person to look at.

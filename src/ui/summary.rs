@@ -1,0 +1,122 @@
+//! `AnswerSummary`: what a chemist reads first — the overall verdict in words, the few figures
+//! that matter, and each thing to act on with its first practical remedy (or the statement that
+//! none exists), each linking to its detail.
+
+use leptos::prelude::*;
+
+use super::display::use_display;
+use super::results::VerdictBadge;
+use crate::case::Calculator;
+use crate::physics::report::{AdviceKind, Report, Verdict};
+
+/// The sentence under the overall verdict.
+fn headline(verdict: Verdict) -> &'static str {
+    match verdict {
+        Verdict::Fine => "Within every check, with margin. Confirm at small scale before you scale up.",
+        Verdict::Caution => "Runs on paper, but close to a limit or outside a correlation's range: read the points below before you pump.",
+        Verdict::Problem => "Do not run as set: at least one check fails. The points below say what and what would fix it.",
+    }
+}
+
+/// One thing to act on: a check that is not fine, and what to do about it.
+#[derive(Debug, Clone, PartialEq)]
+struct ActOn {
+    key: &'static str,
+    topic: &'static str,
+    verdict: Verdict,
+    /// The first remedy, else the statement that none exists, else the first alternative.
+    what_to_do: Option<String>,
+}
+
+fn act_on(report: &Report) -> Vec<ActOn> {
+    let mut items: Vec<ActOn> = report
+        .checks
+        .iter()
+        .filter(|c| c.verdict != Verdict::Fine && c.key != "line_verdict")
+        .map(|c| {
+            let advice: Vec<_> = report.advice_for(c.key).collect();
+            let pick = |kind| advice.iter().find(|a| a.kind == kind).map(|a| a.text.clone());
+            ActOn {
+                key: c.key,
+                topic: c.topic,
+                verdict: c.verdict,
+                what_to_do: pick(AdviceKind::Remedy).or_else(|| pick(AdviceKind::NoneExists)).or_else(|| pick(AdviceKind::Alternative)),
+            }
+        })
+        .collect();
+    // Problems first, then cautions, each in report order.
+    items.sort_by_key(|i| std::cmp::Reverse(i.verdict));
+    items
+}
+
+/// The answer first: overall verdict, headline figures and the things to act on. Clicking an
+/// item calls `select` with its check key (so that an element's detail can be opened) and
+/// scrolls to it.
+#[component]
+pub fn AnswerSummary(calculator: Calculator, report: Signal<Option<Report>>, select: Callback<&'static str>) -> impl IntoView {
+    let sig = use_display().sig;
+    let overall = Memo::new(move |_| report.with(|r| r.as_ref().map(Report::overall)));
+    let items = Memo::new(move |_| report.with(|r| r.as_ref().map(act_on).unwrap_or_default()));
+    let figures = move || {
+        report.with(|r| {
+            r.as_ref()
+                .map(|r| {
+                    calculator
+                        .headline()
+                        .iter()
+                        .filter_map(|k| r.figure(k))
+                        .map(|f| (f.key, f.label, f.dimension.show(f.value.get(), sig.get())))
+                        .collect::<Vec<_>>()
+                })
+                .unwrap_or_default()
+        })
+    };
+    let shown_items = 6;
+    view! {
+        <section class="summary" aria-labelledby=format!("summary-{}", calculator.key()) data-testid="summary">
+            <h3 class="visually-hidden" id=format!("summary-{}", calculator.key())>"Answer"</h3>
+            {move || overall.get().map(|v| view! {
+                <div class=format!("overall overall-{}", v.word()) data-testid="overall-verdict">
+                    <VerdictBadge verdict=v />
+                    <span class="overall-words">{headline(v)}</span>
+                </div>
+            })}
+            <dl class="headline">
+                {move || figures().into_iter().map(|(key, label, value)| view! {
+                    <div class="headline-figure">
+                        <dt>{label}</dt>
+                        <dd data-testid=format!("headline-{key}")>{value}</dd>
+                    </div>
+                }).collect_view()}
+            </dl>
+            {move || {
+                let items = items.get();
+                let more = items.len().saturating_sub(shown_items);
+                (!items.is_empty()).then(|| view! {
+                    <ol class="act-on" data-testid="act-on">
+                        {items.into_iter().take(shown_items).map(|i| {
+                            let key = i.key;
+                            view! {
+                                <li class=format!("act act-{}", i.verdict.word())>
+                                    <a href=format!("#check-{key}") data-testid=format!("act-{key}")
+                                        on:click=move |ev| {
+                                            // Scroll without writing the fragment: the address may carry a shared case.
+                                            ev.prevent_default();
+                                            select.run(key);
+                                            super::scroll_to(format!("check-{key}"));
+                                        }>
+                                        <VerdictBadge verdict=i.verdict />
+                                        " "
+                                        <strong>{i.topic}</strong>
+                                    </a>
+                                    {i.what_to_do.map(|t| view! { <span class="act-what">{t}</span> })}
+                                </li>
+                            }
+                        }).collect_view()}
+                        {(more > 0).then(|| view! { <li class="act-more">{format!("and {more} more below")}</li> })}
+                    </ol>
+                })
+            }}
+        </section>
+    }
+}
