@@ -9,7 +9,7 @@ use super::case_io::CaseToolbar;
 use super::charts::PlotList;
 use super::field::{FieldState, QuantityField};
 use super::results::{CheckList, ResultTable};
-use crate::case::{Calculator, CaseError, CaseFile, Entries, Entry, FORMAT_VERSION, FormItem};
+use crate::case::{Calculator, CaseError, CaseFile, Entries, Entry, FormItem};
 use crate::physics::form::{ChoiceSpec, FieldSource};
 use crate::physics::input::{FieldSpec, InputError};
 use crate::physics::report::Report;
@@ -197,13 +197,9 @@ impl CalculatorForm {
         if !errors.is_empty() {
             return Err(errors);
         }
-        Ok(CaseFile {
-            clearbore_case: FORMAT_VERSION,
-            title: self.title.get_untracked(),
-            calculator: self.calculator,
-            inputs,
-            elements,
-        })
+        let mut case = CaseFile::new(self.calculator, inputs, elements);
+        case.title = self.title.get_untracked();
+        Ok(case)
     }
 }
 
