@@ -5,6 +5,7 @@
 
 pub mod case;
 pub mod cli;
+pub mod export;
 pub mod physics;
 pub mod plot;
 
