@@ -39,6 +39,9 @@ pub fn text_report(case: &CaseFile, report: &Report, sig: usize) -> String {
     if !case.title.is_empty() {
         out.push_str(&format!("{}\n\n", case.title));
     }
+    if !case.notes.is_empty() {
+        out.push_str(&format!("{}\n\n", case.notes));
+    }
     for f in &report.figures {
         let unit = f.dimension.default_unit();
         let value = format_significant(unit.from_si(f.value.get()), sig);
