@@ -243,28 +243,19 @@ fn read_quantity(v: &Value, at: &str, unit: Option<&str>, problems: &mut Problem
         problems.add(format!("{at}.{key}"), "not part of a quantity, which has only \"value\" and \"unit\"");
         ok = false;
     }
-    let value = match map.get("value") {
-        Some(Value::Number(n)) => n.as_f64(),
-        Some(other) => {
-            problems.add(format!("{at}.value"), format!("expected a number (without quotes); found {}", describe(other)));
+    let mut part = |name: &str, what: &str, expected: &str, is: fn(&Value) -> bool| match map.get(name) {
+        Some(v) if is(v) => Some(v),
+        Some(v) => {
+            problems.add(format!("{at}.{name}"), format!("expected {expected}; found {}", describe(v)));
             None
         }
         None => {
-            problems.add(at, format!("the number is missing; a quantity is written like {like}"));
+            problems.add(at, format!("the {what} is missing; a quantity is written like {like}"));
             None
         }
     };
-    let symbol = match map.get("unit") {
-        Some(Value::String(s)) => Some(s.clone()),
-        Some(other) => {
-            problems.add(format!("{at}.unit"), format!("expected a unit symbol in quotes; found {}", describe(other)));
-            None
-        }
-        None => {
-            problems.add(at, format!("the unit is missing; a quantity is written like {like}"));
-            None
-        }
-    };
+    let value = part("value", "number", "a number (without quotes)", Value::is_number).and_then(Value::as_f64);
+    let symbol = part("unit", "unit", "a unit symbol in quotes", Value::is_string).and_then(Value::as_str).map(str::to_owned);
     match (value, symbol) {
         (Some(value), Some(unit)) if ok => Some(Entry::Quantity { value, unit }),
         _ => None,
