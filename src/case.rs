@@ -1,5 +1,12 @@
-//! The case file: a calculator's inputs as the user entered them (number and unit per field),
-//! saved by the page and read by the command line. JSON, versioned by `clearbore_case`.
+//! The case document: a calculator's inputs as the user entered them (number and unit per field),
+//! with a title, notes and optional times; saved by the page, kept in its workspace, shared as a
+//! link and read by the command line. JSON, versioned by `clearbore_case`.
+//!
+//! Format 2 (this build) adds `notes`, `created` and `modified` to format 1, which still opens
+//! (upgraded on read); a newer format is refused by its number. The document is an object whose
+//! calculation part is `calculator` + `inputs` (+ `elements` for a line): a setup of several
+//! stages can later add a `stages` list of such parts under a new format number without moving
+//! anything that exists.
 
 use std::collections::BTreeMap;
 
@@ -15,8 +22,17 @@ use crate::physics::segmented_flow::{self as gas, SegmentedFlowInput};
 use crate::physics::slurry::{self, SlurryInput};
 use crate::physics::tubular::{self, TubularInput};
 
-/// The case-file format version this build reads and writes.
-pub const FORMAT_VERSION: u32 = 1;
+mod format;
+pub mod link;
+pub mod workspace;
+
+pub use format::{FormatProblem, is_iso_8601};
+
+/// The case-file format version this build writes (and the newest it reads).
+pub const FORMAT_VERSION: u32 = 2;
+
+/// The oldest case-file format version this build reads (upgraded to [`FORMAT_VERSION`]).
+pub const OLDEST_FORMAT_VERSION: u32 = 1;
 
 /// The demo tubular-reactor case (an invented scenario), as shipped in `public/cases/`.
 pub const TUBULAR_DEMO_JSON: &str = include_str!("../public/cases/tubular-demo.json");
@@ -443,7 +459,7 @@ impl Added {
 }
 
 /// One entry: a quantity as typed (number and unit symbol), or the key of a chosen option.
-#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[derive(Debug, Clone, PartialEq, Serialize)]
 #[serde(untagged)]
 pub enum Entry {
     /// A number in a unit, e.g. `{"value": 0.76, "unit": "mm"}`.
@@ -475,29 +491,43 @@ impl FormItem {
 /// Field key → entry: the inputs of a case, or of one element of a line.
 pub type Entries = BTreeMap<String, Entry>;
 
-/// A saved case.
-#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
-#[serde(deny_unknown_fields)]
+/// A case: its calculator's inputs with a title and notes. Read only through
+/// [`CaseFile::from_json`] (or a workspace or link), which checks every entry's shape.
+#[derive(Debug, Clone, PartialEq, Serialize)]
 pub struct CaseFile {
-    /// Format version; must equal [`FORMAT_VERSION`].
+    /// Format version: [`FORMAT_VERSION`] once read (older files are upgraded).
     pub clearbore_case: u32,
-    /// Free text describing the case.
-    #[serde(default)]
+    /// A name for people; empty for an untitled case.
     pub title: String,
+    /// Free-text notes (what was tried, why), kept with the case and printed on the record.
+    pub notes: String,
+    /// When the case was first saved, ISO 8601 (as the page's clock gives it); `None` when not
+    /// known (files from the command line or format 1).
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub created: Option<String>,
+    /// When the case was last changed, ISO 8601; `None` when not known.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub modified: Option<String>,
     /// The calculator the inputs belong to.
     pub calculator: Calculator,
     /// Field key → entry.
     pub inputs: Entries,
     /// For a line: the elements in flow order, each field key → entry.
-    #[serde(default, skip_serializing_if = "Vec::is_empty")]
+    #[serde(skip_serializing_if = "Vec::is_empty")]
     pub elements: Vec<Entries>,
 }
 
-/// Why a case could not be evaluated.
+/// Why a case could not be read or evaluated.
 #[derive(Debug, Clone, PartialEq)]
 pub enum CaseError {
-    /// Not valid JSON or not the case format.
-    Format(String),
+    /// Not a case document this build can read: every problem found, each at its place.
+    Format(Vec<FormatProblem>),
+    /// Written by a newer Clearbore, in case format `found` (this build reads up to
+    /// [`FORMAT_VERSION`]).
+    NewerVersion {
+        /// The format version in the file.
+        found: u64,
+    },
     /// One or more fields are impossible or unreadable.
     Inputs(Vec<InputError>),
     /// The computation failed numerically.
@@ -509,7 +539,18 @@ pub enum CaseError {
 impl std::fmt::Display for CaseError {
     fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
         match self {
-            CaseError::Format(m) => write!(f, "not a Clearbore case file: {m}"),
+            CaseError::Format(problems) => {
+                f.write_str("not a case file this version of Clearbore can read:")?;
+                for p in problems {
+                    write!(f, "\n  {p}")?;
+                }
+                Ok(())
+            }
+            CaseError::NewerVersion { found } => write!(
+                f,
+                "this case was written by a newer version of Clearbore (case format {found}); this version reads case \
+                 formats {OLDEST_FORMAT_VERSION} to {FORMAT_VERSION}. Open it with the newer version."
+            ),
             CaseError::Inputs(errors) => {
                 for (i, e) in errors.iter().enumerate() {
                     if i > 0 {
@@ -528,44 +569,52 @@ impl std::fmt::Display for CaseError {
 impl std::error::Error for CaseError {}
 
 impl CaseFile {
-    /// Parses case JSON and checks the version and the field keys.
+    /// A new untitled case of `calculator` with these entries, in the current format.
+    pub fn new(calculator: Calculator, inputs: Entries, elements: Vec<Entries>) -> Self {
+        Self {
+            clearbore_case: FORMAT_VERSION,
+            title: String::new(),
+            notes: String::new(),
+            created: None,
+            modified: None,
+            calculator,
+            inputs,
+            elements,
+        }
+    }
+
+    /// Reads case JSON of any format from [`OLDEST_FORMAT_VERSION`] to [`FORMAT_VERSION`]: checks
+    /// every entry's shape and key (naming each wrong one by its place, e.g. `inputs.flow`),
+    /// refuses a newer format by its number, upgrades an older one, and fills entries added to
+    /// the calculator since (see [`Calculator::added_entries`]). Values and units are checked
+    /// when the case is evaluated, at their fields.
     pub fn from_json(text: &str) -> Result<Self, CaseError> {
-        let mut case: CaseFile = serde_json::from_str(text).map_err(|e| CaseError::Format(e.to_string()))?;
-        if case.clearbore_case != FORMAT_VERSION {
-            return Err(CaseError::Format(format!(
-                "format version {} is not supported (this build reads version {FORMAT_VERSION})",
-                case.clearbore_case
-            )));
-        }
-        let unknown: Vec<&str> =
-            case.inputs.keys().map(String::as_str).filter(|k| !case.calculator.knows(k)).collect();
-        if !unknown.is_empty() {
-            return Err(CaseError::Format(format!("unknown input field(s): {}", unknown.join(", "))));
-        }
-        match case.calculator.element_layout() {
-            None if !case.elements.is_empty() => {
-                return Err(CaseError::Format(format!("a {} case has no elements", case.calculator.key())));
-            }
-            Some(layout) => {
-                for (i, e) in case.elements.iter().enumerate() {
-                    let unknown: Vec<&str> = e.keys().map(String::as_str).filter(|k| !layout_has(layout, k)).collect();
-                    if !unknown.is_empty() {
-                        return Err(CaseError::Format(format!("element {}: unknown field(s): {}", i + 1, unknown.join(", "))));
-                    }
-                }
-            }
-            None => {}
-        }
-        for (key, added) in case.calculator.added_entries() {
-            case.inputs.entry((*key).to_owned()).or_insert_with(|| added.entry());
-        }
-        Ok(case)
+        format::read_text(text)
     }
 
     /// Pretty JSON, as the page saves it.
     pub fn to_json(&self) -> String {
-        // Serialising plain data with string keys cannot fail; fall back to compact form anyway.
+        // Serialising plain data with string keys cannot fail.
         serde_json::to_string_pretty(self).unwrap_or_default()
+    }
+
+    /// A file name from the title (`amide-coupling-cb-7.json`): letters and digits kept (lower
+    /// case), everything else a single hyphen, at most 60 characters; `clearbore-{calculator}`
+    /// for an untitled case. `extension` without the dot.
+    pub fn file_name(&self, extension: &str) -> String {
+        let mut stem = String::new();
+        for c in self.title.chars().flat_map(char::to_lowercase) {
+            if c.is_alphanumeric() {
+                stem.push(c);
+            } else if !stem.is_empty() && !stem.ends_with('-') {
+                stem.push('-');
+            }
+            if stem.chars().count() >= 60 {
+                break;
+            }
+        }
+        let stem = stem.trim_end_matches('-');
+        if stem.is_empty() { format!("clearbore-{}.{extension}", self.calculator.key()) } else { format!("{stem}.{extension}") }
     }
 
     /// Validates the inputs and runs the calculator.

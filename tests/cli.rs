@@ -1,5 +1,5 @@
 //! The command line: evaluates the shipped demo case, prints JSON and a table, and names the bad
-//! field on error.
+//! field on error; evaluates many cases into one CSV or JSON table.
 #![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
 
 use std::io::Write;
@@ -166,4 +166,83 @@ fn every_headline_figure_is_in_its_demo_report() {
             assert!(r.figure(key).is_some(), "{}: no figure {key}", c.key());
         }
     }
+}
+
+const CASES: &str = concat!(env!("CARGO_MANIFEST_DIR"), "/public/cases/");
+
+fn csv_records(text: &str) -> Vec<Vec<String>> {
+    let mut reader = csv::ReaderBuilder::new().has_headers(false).flexible(true).from_reader(text.as_bytes());
+    reader.records().map(|r| r.unwrap().iter().map(str::to_owned).collect()).collect()
+}
+
+#[test]
+fn a_table_of_many_cases_has_a_row_each_and_columns_per_calculator() {
+    let files: Vec<String> = ["tubular-demo.json", "slurry-demo.json", "packed-bed-demo.json", "segmented-flow-demo.json"]
+        .iter()
+        .map(|f| format!("{CASES}{f}"))
+        .chain([concat!(env!("CARGO_MANIFEST_DIR"), "/tests/fixtures/cases-v1/tubular-demo.json").to_owned()])
+        .collect();
+    let args: Vec<&str> = ["--table", "csv"].into_iter().chain(files.iter().map(String::as_str)).collect();
+    let out = run(&args, None);
+    assert!(out.status.success(), "{}", String::from_utf8_lossy(&out.stderr));
+    let rows = csv_records(&String::from_utf8(out.stdout).unwrap());
+    assert_eq!(rows[0], ["Table", "Cases, one row each"]);
+    let head = rows.iter().position(|r| r[0] == "File").unwrap();
+    let (columns, cases) = (&rows[head], &rows[head + 1..]);
+    assert_eq!(cases.len(), 5);
+    assert_eq!(columns[..5], ["File", "Title", "Calculator", "Overall verdict", "Error"]);
+    let col = |name: &str| columns.iter().position(|c| c == name).unwrap_or_else(|| panic!("no column {name}"));
+    // Mixed calculators: each heading names its calculator; a case fills only its own.
+    let tau = col("Tubular reactor: Residence time (min)");
+    assert_eq!(cases[0][tau], "9.073", "544.3752 s, hand calculation in json_output_for_the_demo");
+    assert_eq!(cases[4][tau], "9.073", "the format-1 file gives the same");
+    assert!(cases[1..4].iter().all(|r| r[tau].is_empty()));
+    let line = col("Slurry line: Line verdict (verdict)");
+    assert_eq!((cases[1][2].as_str(), cases[1][3].as_str(), cases[1][line].as_str()), ("slurry_line", "problem", "problem"));
+    assert_eq!(cases[1][col("Slurry line: Element 3: settling (verdict)")], "problem");
+    assert!(!columns.iter().any(|c| c.contains("Element 3: mean velocity")), "per-element figures are left to the element table");
+    assert_eq!(cases[2][col("Packed cartridge: Sizing for the target residence time (verdict)")], "caution");
+    assert!(cases.iter().all(|r| r[4].is_empty() && r.len() == columns.len()));
+}
+
+#[test]
+fn a_json_table_of_variants_compares_them() {
+    let dir = std::env::temp_dir().join(format!("clearbore-cli-{}", std::process::id()));
+    std::fs::create_dir_all(&dir).unwrap();
+    let fast = dir.join("fast.json");
+    let demo = std::fs::read_to_string(DEMO).unwrap();
+    std::fs::write(&fast, demo.replace("{ \"value\": 0.5, \"unit\": \"mL/min\" }", "{ \"value\": 1, \"unit\": \"mL/min\" }")).unwrap();
+    let broken = dir.join("broken.json");
+    std::fs::write(&broken, demo.replace("{ \"value\": 0.5, \"unit\": \"mL/min\" }", "0.5")).unwrap();
+    let out = run(&["--table", "json", DEMO, fast.to_str().unwrap(), broken.to_str().unwrap()], None);
+    // A case that does not open fails the run, and the others are still in the table.
+    assert_eq!(out.status.code(), Some(1));
+    let err = String::from_utf8(out.stderr).unwrap();
+    assert!(err.contains("broken.json") && err.contains("inputs.flow: expected a number with a unit"), "{err}");
+    let v: serde_json::Value = serde_json::from_slice(&out.stdout).unwrap();
+    let columns = v["columns"].as_array().unwrap();
+    let tau = columns.iter().find(|c| c["key"] == "tubular_reactor.residence_time").unwrap();
+    // One calculator: headings without its name.
+    assert_eq!((tau["heading"].as_str(), tau["unit"].as_str()), (Some("Residence time (min)"), Some("min")));
+    let rows = v["rows"].as_array().unwrap();
+    assert_eq!(rows.len(), 3);
+    // Full precision in the column's unit: 544.3752 s / 60 = 9.07292 min; twice the flow, half.
+    let t0 = rows[0]["tubular_reactor.residence_time"].as_f64().unwrap();
+    let t1 = rows[1]["tubular_reactor.residence_time"].as_f64().unwrap();
+    assert!((t0 - 9.07292).abs() < 1e-5 && (t1 - t0 / 2.0).abs() < 1e-12, "{t0} {t1}");
+    assert_eq!(rows[0]["tubular_reactor.pressure_budget.verdict"], "fine");
+    assert_eq!(rows[2]["tubular_reactor.residence_time"], serde_json::Value::Null);
+    assert!(rows[2]["error"].as_str().unwrap().contains("inputs.flow"), "{}", rows[2]);
+    assert_eq!(rows[2]["file"], broken.to_str().unwrap());
+    std::fs::remove_dir_all(&dir).unwrap();
+}
+
+#[test]
+fn table_arguments_are_checked() {
+    assert_eq!(run(&["--table", "xml", DEMO], None).status.code(), Some(2));
+    assert_eq!(run(&["--table"], None).status.code(), Some(2));
+    assert_eq!(run(&["--table", "csv"], None).status.code(), Some(2));
+    assert_eq!(run(&[DEMO, DEMO], None).status.code(), Some(2), "several files need --table");
+    assert_eq!(run(&["--table", "csv", "--text", DEMO], None).status.code(), Some(2));
+    assert_eq!(run(&["--table", "csv", "-", "-"], None).status.code(), Some(2));
 }

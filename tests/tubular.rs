@@ -183,10 +183,12 @@ fn every_bad_field_is_reported_at_once() {
 #[test]
 fn case_format_errors() {
     assert!(matches!(CaseFile::from_json("{"), Err(CaseError::Format(_))));
-    let v2 = clearbore::case::TUBULAR_DEMO_JSON.replace("\"clearbore_case\": 1", "\"clearbore_case\": 2");
-    assert!(matches!(CaseFile::from_json(&v2), Err(CaseError::Format(m)) if m.contains("version 2")));
+    let v3 = clearbore::case::TUBULAR_DEMO_JSON.replace("\"clearbore_case\": 2", "\"clearbore_case\": 3");
+    let e = CaseFile::from_json(&v3).unwrap_err();
+    assert_eq!(e, CaseError::NewerVersion { found: 3 });
+    assert!(e.to_string().contains("case format 3"), "{e}");
     let extra = clearbore::case::TUBULAR_DEMO_JSON.replace("\"inputs\": {", "\"inputs\": { \"colour\": \"red\",");
-    assert!(matches!(CaseFile::from_json(&extra), Err(CaseError::Format(m)) if m.contains("colour")));
+    assert!(matches!(CaseFile::from_json(&extra), Err(CaseError::Format(p)) if p[0].path == "inputs.colour"));
 }
 
 #[test]

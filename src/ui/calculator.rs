@@ -13,7 +13,7 @@ use super::field::{FieldErrors, FieldState, QuantityField};
 use super::results::{CheckList, ResultTable};
 use super::print::{PrintRecord, Printing, entry_rows, entry_text};
 use super::summary::AnswerSummary;
-use crate::case::{Calculator, CaseError, CaseFile, Entries, Entry, FORMAT_VERSION, FormItem};
+use crate::case::{Calculator, CaseError, CaseFile, Entries, Entry, FormItem};
 use crate::physics::form::{ChoiceSpec, FieldSource};
 use crate::physics::input::{FieldSpec, InputError};
 use crate::physics::report::{Advice, Report, Verdict};
@@ -201,13 +201,9 @@ impl CalculatorForm {
         if !errors.is_empty() {
             return Err(errors);
         }
-        Ok(CaseFile {
-            clearbore_case: FORMAT_VERSION,
-            title: self.title.get_untracked(),
-            calculator: self.calculator,
-            inputs,
-            elements,
-        })
+        let mut case = CaseFile::new(self.calculator, inputs, elements);
+        case.title = self.title.get_untracked();
+        Ok(case)
     }
 }
 
@@ -277,7 +273,7 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                 Outcome { report: last, stale: true, failure: Some(e.to_string()), errors: Vec::new(), applicable }
             }
             Err(CaseError::Inputs(errors)) => Outcome { report: last, stale: true, failure: None, errors, applicable },
-            Err(CaseError::Format(m)) => Outcome { report: last, stale: true, failure: Some(m), errors: Vec::new(), applicable },
+            Err(e) => Outcome { report: last, stale: true, failure: Some(e.to_string()), errors: Vec::new(), applicable },
         }
     });
     let errors = Memo::new(move |_| outcome.with(|o| o.errors.clone()));
