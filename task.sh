@@ -104,7 +104,7 @@ case "${1:-}" in
     build
     say "browser end-to-end tests (headless Chromium, file://)"
     setup_browser_tools
-    cargo test --features e2e --test browser --test layout
+    cargo test --features e2e --test browser --test layout --test keeping
     say "smoke tests in Firefox and WebKit (file://)"
     cargo test --features e2e --test engines
     ;;

@@ -88,7 +88,7 @@ async fn demo_case_renders_and_matches_the_command_line() {
     let b = Browser::start().await;
     b.open_page().await;
     assert!(b.text("[data-testid=safety-notice]").await.contains("Engineering estimates"));
-    assert!(b.text("[data-testid=case-title]").await.contains("Demo (invented)"));
+    assert!(b.js("return document.querySelector('[data-testid=case-title-input]').value;").await.as_str().unwrap().contains("Demo (invented)"));
 
     assert_page_matches_cli(&b, Calculator::TubularReactor).await;
     // Hand check of the headline number: V = π (0.76 mm)² / 4 × 10 m = 4.5365 mL; τ = V / 0.5 mL/min.

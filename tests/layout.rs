@@ -25,7 +25,8 @@ const controls = [...document.querySelectorAll('[role=tab]'), ...panel.querySele
 const bad = [];
 for (const c of controls) {
   const box = c.getBoundingClientRect();
-  if (box.width === 0 || box.height === 0 || c.closest('.visually-hidden')) continue;
+  const folded = c.tagName !== 'SUMMARY' && c.closest('details:not([open])');
+  if (box.width === 0 || box.height === 0 || c.closest('.visually-hidden') || folded) continue;
   c.scrollIntoView({ block: 'center', inline: 'center' });
   const r = c.getBoundingClientRect();
   const x = r.left + r.width / 2, y = r.top + r.height / 2;
@@ -128,7 +129,7 @@ async fn tab_reaches_every_control_in_page_order_including_opening_a_case() {
     show(&b, Calculator::TubularReactor).await;
     b.js("document.querySelector('[data-testid=tab-tubular_reactor]').focus();").await;
     let mut seen = Vec::new();
-    for _ in 0..12 {
+    for _ in 0..25 {
         let active = b.client.active_element().await.unwrap();
         active.send_keys("\u{E004}").await.unwrap();
         let id = b.js("return document.activeElement.getAttribute('data-testid') || document.activeElement.tagName;").await;
@@ -237,6 +238,7 @@ async fn a_choice_never_shows_unselected_after_other_choices_change() {
         show(&b, c).await;
         let bad = b.client.execute_async(CHOICE_GROUPS, vec![]).await.unwrap();
         assert_eq!(bad, Value::Array(vec![]), "{}", c.key());
+        b.assert_clean().await;
         b.click(&format!("[data-testid=panel-{}] [data-testid=load-demo]", c.key())).await;
     }
     // The case reported: a catalyst, then up-flow.

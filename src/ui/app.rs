@@ -44,6 +44,7 @@ pub fn App() -> impl IntoView {
             </label>
         </header>
         <SafetyNotice />
+        <KeepingNotices />
         <div class="tabs no-print" role="tablist" aria-label="Calculators" data-testid="tablist">
             {Calculator::ALL
                 .iter()
@@ -102,6 +103,26 @@ fn focus(id: &str) {
         // Focus can only fail on a detached element; then there is nothing to move to.
         let _ = el.focus();
     }
+}
+
+/// Messages about keeping cases: storage unavailable or full, a stored record kept aside, a
+/// case opened from a link. Each can be dismissed.
+#[component]
+fn KeepingNotices() -> impl IntoView {
+    let Some(lib) = use_context::<super::library::Library>() else { return ().into_any() };
+    view! {
+        <div class="keeping" role="status" data-testid="keeping-notices">
+            {move || lib.notices.get().into_iter().enumerate().map(|(i, text)| view! {
+                <p class="keeping-notice" data-testid=format!("keeping-notice-{i}")>
+                    {text}
+                    " "
+                    <button type="button" class="small" aria-label="Dismiss this notice"
+                        on:click=move |_| lib.notices.update(|n| { if i < n.len() { n.remove(i); } })>"✕"</button>
+                </p>
+            }).collect_view()}
+        </div>
+    }
+    .into_any()
 }
 
 /// The standing notice on what the numbers are and are not.

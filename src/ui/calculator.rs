@@ -6,7 +6,7 @@ use std::cell::RefCell;
 use leptos::prelude::*;
 
 use super::advice::AdviceView;
-use super::case_io::CaseToolbar;
+use super::case_io::CaseBar;
 use super::charts::PlotList;
 use super::diagrams::{LineStrip, PartTable, SlugView, line_of, slugs_of};
 use super::field::{FieldErrors, FieldState, QuantityField};
@@ -97,6 +97,17 @@ impl FormState {
         entries
     }
 
+    /// Subscribes the running effect to every entry.
+    fn track(&self) {
+        for (_, st) in &self.fields {
+            st.text.track();
+            st.unit.track();
+        }
+        for (_, sel) in &self.choices {
+            sel.track();
+        }
+    }
+
     /// A copy with fresh signals holding the same entries.
     fn duplicate(&self) -> Self {
         let fields = self
@@ -142,6 +153,12 @@ pub struct CalculatorForm {
     next_id: RwSignal<u32>,
     /// Case title.
     pub title: RwSignal<String>,
+    /// Free-text notes of the case.
+    pub notes: RwSignal<String>,
+    /// The reactive owner of every signal of the form, the page's own: signals of elements made
+    /// later (a loaded case, an added element) live as long as the form, not as long as the
+    /// component whose click made them.
+    owner: Owner,
 }
 
 impl CalculatorForm {
@@ -153,6 +170,8 @@ impl CalculatorForm {
             elements: RwSignal::new(Vec::new()),
             next_id: RwSignal::new(0),
             title: RwSignal::new(String::new()),
+            notes: RwSignal::new(String::new()),
+            owner: Owner::current().unwrap_or_default(),
         };
         if let Ok(demo) = CaseFile::from_json(calculator.demo_json()) {
             form.load(&demo);
@@ -170,13 +189,14 @@ impl CalculatorForm {
     /// show their error at the field.
     pub fn load(&self, case: &CaseFile) {
         self.title.set(case.title.clone());
+        self.notes.set(case.notes.clone());
         self.main.load(&case.inputs);
         if let Some(layout) = self.calculator.element_layout() {
             let elements = case
                 .elements
                 .iter()
                 .map(|entries| {
-                    let state = FormState::new(layout);
+                    let state = self.owner.with(|| FormState::new(layout));
                     state.load(entries);
                     self.new_element(state)
                 })
@@ -203,7 +223,17 @@ impl CalculatorForm {
         }
         let mut case = CaseFile::new(self.calculator, inputs, elements);
         case.title = self.title.get_untracked();
+        case.notes = self.notes.get_untracked();
         Ok(case)
+    }
+
+    /// Subscribes the running effect to every entry, element, title and notes of the form, so
+    /// that it runs again after any edit (autosave).
+    pub fn track_all(&self) {
+        self.main.track();
+        self.elements.with(|list| list.iter().for_each(|e| e.state.track()));
+        self.title.track();
+        self.notes.track();
     }
 }
 
@@ -402,8 +432,7 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
             <div class="panel-head">
                 <h2>{calculator.title()}</h2>
                 <p class="lead">{calculator.summary()}</p>
-                <CaseToolbar form=form.clone() />
-                <p class="case-title" data-testid="case-title">{move || form.title.get()}</p>
+                <CaseBar form=form.clone() report=report />
             </div>
             <div class="workspace">
                 <div class="summary-area">
@@ -514,8 +543,10 @@ fn ElementList(form: CalculatorForm) -> impl IntoView {
     let add = {
         let form = form.clone();
         move |_| {
-            let last = form.elements.with_untracked(|e| e.last().map(|e| e.state.duplicate()));
-            let state = last.unwrap_or_else(|| FormState::new(form.calculator.element_layout().unwrap_or_default()));
+            let state = form.owner.with(|| {
+                let last = form.elements.with_untracked(|e| e.last().map(|e| e.state.duplicate()));
+                last.unwrap_or_else(|| FormState::new(form.calculator.element_layout().unwrap_or_default()))
+            });
             let element = form.new_element(state);
             form.elements.update(|e| e.push(element));
         }

@@ -55,6 +55,20 @@ fn PlotView(plot: Signal<Option<Plot>>, key: &'static str) -> impl IntoView {
             }
         }
     };
+    let data = move |_| {
+        let (Some(p), Some(bench)) = (plot.get_untracked(), super::workbench::use_workbench()) else { return };
+        let Some(form) = bench.form(bench.active.get_untracked()) else { return };
+        let Ok(case) = form.to_case() else {
+            failure.set(Some("The chart's data need valid entries.".to_owned()));
+            return;
+        };
+        let date = super::library::now_iso();
+        let header = crate::export::Header { case: &case, date: &date, significant: super::display::use_display().sig.get_untracked() };
+        let sheet = crate::export::plot(header, &p);
+        if download(&case.file_name(&format!("{key}.csv")), &sheet.to_csv(), "text/csv").is_err() {
+            failure.set(Some("The browser refused the download.".to_owned()));
+        }
+    };
     view! {
         <figure class="chart" data-testid=format!("plot-{key}")>
             <canvas node_ref=canvas style=format!("width: 100%; height: {HEIGHT}px;") role="img"
@@ -62,6 +76,7 @@ fn PlotView(plot: Signal<Option<Plot>>, key: &'static str) -> impl IntoView {
             <figcaption>
                 {move || failure.get().map(|f| view! { <span class="failure">{f}</span> })}
                 <button type="button" class="small no-print" data-testid=format!("svg-{key}") on:click=save>"Download SVG"</button>
+                <button type="button" class="small no-print" data-testid=format!("csv-{key}") on:click=data>"Data (CSV)"</button>
             </figcaption>
         </figure>
     }

@@ -1,17 +1,21 @@
-//! The workbench: one form per calculator, kept for the whole visit, and which one is shown.
-//! Shared by context so that opening a case file can switch to its calculator.
+//! The workbench: one form per calculator, kept for the whole visit, which one is shown, and the
+//! library of cases behind them (restored from this browser's storage, saved after every edit).
+//! Shared by context so that opening a case file or a link can switch to its calculator.
 
 use leptos::prelude::*;
 
 use super::calculator::CalculatorForm;
+use super::library::Library;
 use crate::case::{Calculator, CaseFile};
 
-/// Every calculator's form and the one on screen.
+/// Every calculator's form, the one on screen, and the cases behind them.
 #[derive(Debug, Clone)]
 pub struct Workbench {
     /// The calculator shown.
     pub active: RwSignal<Calculator>,
     forms: Vec<CalculatorForm>,
+    /// The cases kept in this browser.
+    pub library: Library,
 }
 
 impl Workbench {
@@ -20,23 +24,85 @@ impl Workbench {
         self.forms.iter().find(|f| f.calculator == calculator).cloned()
     }
 
-    /// Loads a case into its calculator's form and shows that calculator.
-    pub fn open(&self, case: &CaseFile) {
-        if let Some(form) = self.form(case.calculator) {
-            form.load(case);
-            self.active.set(case.calculator);
-        }
+    /// Opens `case` as a new case of the library and shows it; returns its id.
+    pub fn open_new(&self, case: CaseFile) -> u64 {
+        self.library.add_and_open(case, &self.forms, self.active)
+    }
+
+    /// Shows the stored case with this id.
+    pub fn open(&self, id: u64) {
+        self.library.open(id, &self.forms, self.active);
+    }
+
+    /// Shows the stored case with this id in its calculator's form, the tab unchanged.
+    pub fn bind(&self, id: u64) {
+        self.library.bind(id, &self.forms);
     }
 }
 
-/// Creates the forms (each loaded with its demo case) and provides the workbench.
+/// Creates the forms, restores the cases (or starts with the demos), opens a case carried by
+/// the page's address, saves after every edit, and provides the workbench.
 pub fn provide_workbench() -> Workbench {
-    let bench = Workbench {
-        active: RwSignal::new(Calculator::TubularReactor),
-        forms: Calculator::ALL.iter().map(|c| CalculatorForm::new(*c)).collect(),
+    let forms: Vec<CalculatorForm> = Calculator::ALL.iter().map(|c| CalculatorForm::new(*c)).collect();
+    let (library, shown) = Library::start(&forms);
+    let bench = Workbench { active: RwSignal::new(shown.unwrap_or(Calculator::TubularReactor)), forms, library };
+    open_from_address(&bench);
+    // A link pasted into the address bar of an open page changes only the fragment: no reload.
+    let on_hash = {
+        let bench = bench.clone();
+        window_event_listener(leptos::ev::hashchange, move |_| open_from_address(&bench))
     };
+    on_cleanup(move || on_hash.remove());
+    for form in bench.forms.clone() {
+        Effect::new(move |_| {
+            form.track_all();
+            library.autosave(&form);
+        });
+    }
+    // The tab shown is remembered with the workspace.
+    let active = bench.active;
+    Effect::new(move |_| {
+        let calculator = active.get();
+        if let Some(id) = library.shown(calculator)
+            && library.workspace.with_untracked(|w| w.active != Some(id))
+        {
+            library.workspace.update(|w| w.active = Some(id));
+            library.persist();
+        }
+    });
     provide_context(bench.clone());
     bench
+}
+
+/// A case carried in the address (`#c1=…`) opens as a new case, stored from its first edit; the
+/// fragment is then removed from the address (without any request), so that a reload does not
+/// open it twice. Stored work is never overwritten.
+fn open_from_address(bench: &Workbench) {
+    let Some(window) = web_sys::window() else { return };
+    let hash = window.location().hash().unwrap_or_default();
+    if hash.len() < 2 {
+        return;
+    }
+    match CaseFile::from_link(&hash) {
+        Ok(mut case) => {
+            // Marked as from a link before it is shown, so that showing it stores nothing.
+            case.created.get_or_insert_with(super::library::now_iso);
+            let id = bench.library.workspace.try_update(|w| w.add(case)).unwrap_or(0);
+            bench.library.ephemeral.set(Some(id));
+            bench.open(id);
+            bench.library.say(
+                "Opened a case from a link as a new case. It is kept in this browser from your first edit; nothing you had \
+                 stored was changed."
+                    .to_owned(),
+            );
+        }
+        Err(e) => bench.library.say(format!("This link does not open a case: {e}.")),
+    }
+    if let Ok(history) = window.history() {
+        let path = window.location().pathname().unwrap_or_default() + &window.location().search().unwrap_or_default();
+        // Dropping the fragment only rewrites the address bar; nothing is loaded or sent.
+        let _ = history.replace_state_with_url(&wasm_bindgen::JsValue::NULL, "", Some(&path));
+    }
 }
 
 /// The workbench provided by [`provide_workbench`].
