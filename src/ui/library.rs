@@ -234,7 +234,19 @@ impl Library {
 
     /// Shows the case with `id` in its calculator's form and makes it the active one.
     pub fn open(&self, id: u64, forms: &[CalculatorForm], active: RwSignal<Calculator>) {
-        let Some(case) = self.workspace.with_untracked(|w| w.get(id).cloned()) else { return };
+        let Some(calculator) = self.bind(id, forms) else { return };
+        self.workspace.update(|w| w.active = Some(id));
+        // Setting the same tab again would redraw the panel for nothing.
+        if active.get_untracked() != calculator {
+            active.set(calculator);
+        }
+        self.persist();
+    }
+
+    /// Shows the case with `id` in its calculator's form without making it the active case (a
+    /// form whose case was deleted shows another); returns its calculator.
+    pub fn bind(&self, id: u64, forms: &[CalculatorForm]) -> Option<Calculator> {
+        let case = self.workspace.with_untracked(|w| w.get(id).cloned())?;
         if let Some(form) = forms.iter().find(|f| f.calculator == case.calculator) {
             // Bind first, so that the load's own change is not taken for an edit of another case.
             self.bound.update(|b| {
@@ -245,27 +257,7 @@ impl Library {
             form.load(&case);
             self.workspace.update(|w| normalise(w, id, form));
         }
-        self.workspace.update(|w| w.active = Some(id));
-        // Setting the same tab again would redraw the panel for nothing.
-        if active.get_untracked() != case.calculator {
-            active.set(case.calculator);
-        }
-        self.persist();
-    }
-
-    /// Shows the case with `id` in its calculator's form without making it the active case (a
-    /// form whose case was deleted shows another).
-    pub fn bind(&self, id: u64, forms: &[CalculatorForm]) {
-        let Some(case) = self.workspace.with_untracked(|w| w.get(id).cloned()) else { return };
-        if let Some(form) = forms.iter().find(|f| f.calculator == case.calculator) {
-            self.bound.update(|b| {
-                if let Some(slot) = b.get_mut(index(case.calculator)) {
-                    *slot = Some(id);
-                }
-            });
-            form.load(&case);
-            self.workspace.update(|w| normalise(w, id, form));
-        }
+        Some(case.calculator)
     }
 
     /// Adds `case` as a new case and shows it; returns its id.
