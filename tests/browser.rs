@@ -286,13 +286,23 @@ async fn gas_liquid_demo_shows_equivalents_spreads_and_the_oxygen_caution() {
     // Several slug-length and kLa correlations, each shown with the spread.
     assert!(b.exists("[data-testid=spread-bubble_length]").await);
     assert!(b.exists("[data-testid=spread-kla_per_s]").await);
-    // 9 % O₂ over acetonitrile at 60 °C is above its estimated LOC (8.04 vol %): a problem, with
-    // the oxygen fraction that would be within the margin beside it.
-    assert!(b.text("[data-testid=verdict-gas_hazard]").await.to_lowercase().contains("problem"));
-    assert!(b.text("[data-testid=caution-gas_hazard]").await.contains("at most 4.83 % O₂"));
+    // 4.5 % O₂ over acetonitrile at 60 °C stays below 4.83 vol %, 60 % of its estimated LOC
+    // (8.04 vol %): fine, with the note on the outlet beside it.
+    assert!(b.text("[data-testid=verdict-gas_hazard]").await.to_lowercase().contains("fine"));
+    assert!(b.text("[data-testid=check-gas_hazard]").await.contains("8.04 vol %"));
     b.screenshot("gas-liquid-demo").await;
-    // A measured LOC entered for the solvent replaces the estimate: at 12 % the 9 % O₂ feed is
-    // below it but above the 60 % margin (7.2 %), a caution.
+    // Air over the same hot solvent: the verdict turns red, with what to feed instead beside it.
+    b.choose("choice-gas", "air").await;
+    b.text_when("[data-testid=verdict-gas_hazard]", |t| t.to_lowercase().contains("problem")).await;
+    assert!(b.text("[data-testid=caution-gas_hazard]").await.contains("at most 4.83 % O₂"));
+    assert!(b.text("[data-testid=overall-verdict]").await.to_lowercase().contains("problem"));
+    b.screenshot("gas-liquid-air").await;
+    // Pure oxygen is a problem too; a measured LOC entered for the solvent replaces the estimate:
+    // 9 % O₂ below a 12 % LOC but above its 60 % margin (7.2 %) is a caution.
+    b.choose("choice-gas", "oxygen").await;
+    b.type_into("gas_mole_fraction", "100").await;
+    b.text_when("[data-testid=verdict-gas_hazard]", |t| t.to_lowercase().contains("problem")).await;
+    b.type_into("gas_mole_fraction", "9").await;
     assert!(!b.exists("[data-testid=input-limiting_oxygen]").await);
     b.click("[data-testid=option-loc_source-entered]").await;
     b.type_into("limiting_oxygen", "12").await;
@@ -490,5 +500,37 @@ async fn a_browser_that_cannot_run_the_app_shows_why_instead_of_a_blank_page() {
     b.wait_for("[data-testid=boot-error]").await;
     assert!(b.text("[data-testid=boot-error]").await.contains("could not start"));
     b.screenshot("boot-error").await;
+    b.close().await;
+}
+
+#[tokio::test]
+async fn entries_that_disagree_are_refused_at_the_field_that_breaks_them() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    b.click("[data-testid=tab-slurry_line]").await;
+    b.wait_for("[data-testid=panel-slurry_line]").await;
+    assert!(!b.exists("[data-testid=stale-notice]").await);
+    // d50 below d10: the message sits at d50, which is red, and only then the notice says so.
+    b.type_into("d50", "5").await;
+    let msg = b.text_when("[data-testid=error-d50]", |t| !t.is_empty()).await;
+    assert!(msg.contains("must be above d10 (8.000 µm)"), "{msg}");
+    assert_eq!(b.js("return document.querySelector('[data-testid=input-d50]').getAttribute('aria-invalid');").await, "true");
+    assert!(b.text("[data-testid=stale-notice]").await.contains("marked in red"));
+    assert!(!b.exists("[data-testid=error-d10]").await && !b.exists("[data-testid=error-d90]").await);
+    b.type_into("d50", "25").await;
+    b.text_when("[data-testid=summary]", |t| !t.is_empty()).await;
+    for _ in 0..40 {
+        if !b.exists("[data-testid=stale-notice]").await {
+            break;
+        }
+        tokio::time::sleep(std::time::Duration::from_millis(50)).await;
+    }
+    assert!(!b.exists("[data-testid=stale-notice]").await, "no notice once no field is red");
+    // 1e30 in a flow: refused at the field with its range, never a result.
+    b.type_into("flow", "1e30").await;
+    let msg = b.text_when("[data-testid=error-flow]", |t| !t.is_empty()).await;
+    assert!(msg.contains("allowed") && msg.contains("1000 mL/min"), "{msg}");
+    assert!(b.text("[data-testid=stale-notice]").await.contains("marked in red"));
+    b.assert_clean().await;
     b.close().await;
 }

@@ -95,9 +95,9 @@ fn pressure_falls_along_the_coil_to_the_regulator_setting() {
     let p = r.plots.iter().find(|p| p.key == "pressure_profile").unwrap();
     let pressure = line(p, "Pressure");
     assert!(pressure.windows(2).all(|w| w[1].0 > w[0].0 && w[1].1 < w[0].1), "falls from junction to regulator");
-    // Outlet: 8 bar(g) back-pressure + 1 atm ambient.
+    // Outlet: 15 bar(g) back-pressure + 1 atm ambient.
     let (_, outlet) = pressure[pressure.len() - 1];
-    assert!((outlet - (8e5 + 101_325.0)).abs() < 1.0, "{outlet}");
+    assert!((outlet - (15e5 + 101_325.0)).abs() < 1.0, "{outlet}");
     let inlet = r.figure("inlet_pressure").unwrap().value.get();
     assert!((pressure[0].1 - inlet).abs() < 1.0, "{} vs {inlet}", pressure[0].1);
     let f = r.plots.iter().find(|p| p.key == "fraction_profile").unwrap();
