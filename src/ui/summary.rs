@@ -24,7 +24,8 @@ struct ActOn {
     key: &'static str,
     topic: &'static str,
     verdict: Verdict,
-    /// The first remedy, else the statement that none exists, else the first alternative.
+    /// The first remedy, else the statement that none exists, else the first alternative, else
+    /// the check's safety caution.
     what_to_do: Option<String>,
 }
 
@@ -40,7 +41,11 @@ fn act_on(report: &Report) -> Vec<ActOn> {
                 key: c.key,
                 topic: c.topic,
                 verdict: c.verdict,
-                what_to_do: pick(AdviceKind::Remedy).or_else(|| pick(AdviceKind::NoneExists)).or_else(|| pick(AdviceKind::Alternative)),
+                // A hazard without advice says what to do in its caution.
+                what_to_do: pick(AdviceKind::Remedy)
+                    .or_else(|| pick(AdviceKind::NoneExists))
+                    .or_else(|| pick(AdviceKind::Alternative))
+                    .or_else(|| c.caution.clone().map(|t| format!("⚠ {t}"))),
             }
         })
         .collect();
