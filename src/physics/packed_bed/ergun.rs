@@ -7,8 +7,12 @@
 //! Equivalently f_v = 150 + 1.75 Re_m with Re_m = ρ u_s d_p / (μ (1 − ε)). At Re_m ≪ 1 (lab
 //! cartridges) the first term (Blake–Kozeny) is all that matters.
 //!
-//! Validity: 1 < Re_m < 2300, over-predicting above Re_m ≈ 700 (range shown by Jones & Krier 1983,
-//! as quoted in `fluids` 1.3.1). Fitted on spheres, sand and pulverised coke with gases. Variants of
+//! Validity: up to Re_m = 2300, over-predicting above Re_m ≈ 700 (range shown by Jones & Krier
+//! 1983, as quoted in `fluids` 1.3.1). No lower bound is carried: below Re_m ≈ 1, where lab
+//! cartridges run, the inertial term is under 1 % and the viscous term is the Blake–Kozeny law of
+//! creeping flow through packed beds (Carman 1937, the [`super::kozeny_carman`] and
+//! [`super::carman`] entries of the spread), so a warning there would fire on nearly every lab
+//! case without meaning anything. Jones & Krier's lower end of 1 is where their data began. Fitted on spheres, sand and pulverised coke with gases. Variants of
 //! the constants exist: Macdonald et al. (1979) use 180 and 1.8 for smooth particles (from memory:
 //! Ind. Eng. Chem. Fundam. 18, 199–208); see also [`super::kozeny_carman`].
 //!
@@ -50,7 +54,7 @@ pub const INFO: ModelInfo = ModelInfo {
     name: "Ergun",
     formula: "ΔP/L = 150 μ u_s (1−ε)²/(ε³ d_p²) + 1.75 ρ u_s² (1−ε)/(ε³ d_p)",
     source: "Ergun (1952) Chem. Eng. Prog. 48, 89–94; range from Jones & Krier (1983) J. Fluids Eng. 105, 168–172, as quoted in fluids 1.3.1",
-    validity: &[ValidityBound { quantity: MODIFIED_REYNOLDS, dimension: Dimension::Number, low: Some(1.0), high: Some(2300.0) }],
+    validity: &[ValidityBound { quantity: MODIFIED_REYNOLDS, dimension: Dimension::Number, low: None, high: Some(2300.0) }],
 };
 
 /// Viscous friction factor f_v = 150 + 1.75 Re_m.
