@@ -534,3 +534,49 @@ async fn entries_that_disagree_are_refused_at_the_field_that_breaks_them() {
     b.assert_clean().await;
     b.close().await;
 }
+
+#[tokio::test]
+async fn hot_fep_tubing_shows_its_lower_rating_and_where_it_comes_from() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    // The tubular demo runs at 60 °C in 1/16″ × 0.030″ PFA; FEP of the same size is rated lower
+    // hot (its published tensile strength falls faster with temperature).
+    let pfa = b.text("[data-testid=check-tubing_rating]").await;
+    b.choose("choice-tubing_material", "fep").await;
+    let fep = b.text_when("[data-testid=check-tubing_rating]", |t| t.contains("FEP")).await;
+    let rating = |t: &str| -> f64 {
+        let at = t.find("working pressure ").unwrap() + "working pressure ".len();
+        t[at..].split(' ').next().unwrap().parse().unwrap()
+    };
+    assert!(rating(&fep) < rating(&pfa), "FEP {fep} vs PFA {pfa}");
+    assert!(fep.contains("temperature factor") && fep.contains("source"), "{fep}");
+    // At 150 °C the FEP factor is about a third of PFA's (0.18: 32 bar(g) cold, 5.8 bar(g) hot):
+    // the check shows it and turns red for 6 bar of back-pressure.
+    b.type_into("back_pressure", "6").await;
+    b.type_into("temperature", "150").await;
+    b.text_when("[data-testid=check-tubing_rating]", |t| t.contains("150 °C")).await;
+    let hot = b.text("[data-testid=check-tubing_rating]").await;
+    assert!(hot.contains("0.18"), "{hot}");
+    assert!(b.text("[data-testid=verdict-tubing_rating]").await.to_lowercase().contains("problem"));
+    assert!(b.exists("[data-testid=caution-tubing_rating]").await);
+    b.close().await;
+}
+
+#[tokio::test]
+async fn models_that_rest_on_recall_are_marked_in_the_spread() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    b.click("[data-testid=tab-segmented_flow]").await;
+    b.wait_for("[data-testid=result-kla_per_s]").await;
+    // Open the k_L a row's details: Vandu and Yue 2007 rest on recall, van Baten–Krishna does not.
+    b.js("document.querySelector('[data-testid=spread-kla_per_s]').closest('details').open = true;").await;
+    let marks = b
+        .js("return [...document.querySelectorAll('[data-testid=spread-kla_per_s] tr')].map(tr => [tr.cells[0].textContent, !!tr.querySelector('.recalled')]);")
+        .await;
+    let rows = marks.as_array().unwrap();
+    let marked = |name: &str| rows.iter().find(|r| r[0].as_str().unwrap().starts_with(name)).map(|r| r[1].as_bool().unwrap());
+    assert_eq!(marked("van Baten"), Some(false), "{marks}");
+    assert_eq!(marked("Vandu"), Some(true), "{marks}");
+    assert!(rows.iter().any(|r| r[0].as_str().unwrap().contains("2007") && r[1] == true), "{marks}");
+    b.close().await;
+}
