@@ -258,12 +258,26 @@ impl FieldSource for Watcher<'_> {
 /// Runs the calculator on the form and returns the result and the keys of the calculator-level
 /// fields and choices it read (those that apply with the current choices).
 fn run_watched(form: &CalculatorForm) -> (Result<Report, CaseError>, Vec<&'static str>) {
+    let (result, asked, _) = run_watched_all(form);
+    (result, asked)
+}
+
+/// As [`run_watched`], also returning for each line element the keys the physics read of it
+/// (a stage of a setup reads only the fields of its kind).
+fn run_watched_all(form: &CalculatorForm) -> (Result<Report, CaseError>, Vec<&'static str>, Vec<Vec<&'static str>>) {
     let watcher = Watcher { inner: &form.main, asked: RefCell::new(Vec::new()) };
     let elements = form.elements.get();
-    let sources: Vec<&dyn FieldSource> = elements.iter().map(|e| &e.state as &dyn FieldSource).collect();
+    let watched: Vec<Watcher> = elements.iter().map(|e| Watcher { inner: &e.state, asked: RefCell::new(Vec::new()) }).collect();
+    let sources: Vec<&dyn FieldSource> = watched.iter().map(|w| w as &dyn FieldSource).collect();
     let result = form.calculator.evaluate(&watcher, &sources);
-    (result, watcher.asked.into_inner())
+    let per_element = watched.into_iter().map(|w| w.asked.into_inner()).collect();
+    (result, watcher.asked.into_inner(), per_element)
 }
+
+/// For each line element (by its stable id), the keys of the fields the physics read; an
+/// element whose fields were not read (an error elsewhere stopped the reading) shows them all.
+#[derive(Debug, Clone, Copy)]
+struct ElementFieldsShown(Memo<Vec<(u32, Vec<&'static str>)>>);
 
 /// What the results area shows: the latest valid report and whether the entries changed since.
 #[derive(Debug, Clone, PartialEq)]
@@ -277,6 +291,8 @@ struct Outcome {
     errors: Vec<InputError>,
     /// Keys of the fields and choices the calculator read.
     applicable: Vec<&'static str>,
+    /// Per line element (by stable id), the keys read of it.
+    element_keys: Vec<(u32, Vec<&'static str>)>,
 }
 
 /// Whether a check belongs to one element of a line (shown in that element's detail).
@@ -296,18 +312,21 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
     let source = form.clone();
     let outcome = Memo::new(move |prev: Option<&Outcome>| {
         let last = prev.and_then(|p| p.report.clone());
-        let (result, applicable) = run_watched(&source);
+        let (result, applicable, per_element) = run_watched_all(&source);
+        let ids: Vec<u32> = source.elements.with(|e| e.iter().map(|e| e.id).collect());
+        let element_keys = ids.into_iter().zip(per_element).collect();
         match result {
-            Ok(report) => Outcome { report: Some(report), stale: false, failure: None, errors: Vec::new(), applicable },
+            Ok(report) => Outcome { report: Some(report), stale: false, failure: None, errors: Vec::new(), applicable, element_keys },
             Err(e @ (CaseError::Numerical(_) | CaseError::Calculation(_))) => {
-                Outcome { report: last, stale: true, failure: Some(e.to_string()), errors: Vec::new(), applicable }
+                Outcome { report: last, stale: true, failure: Some(e.to_string()), errors: Vec::new(), applicable, element_keys }
             }
-            Err(CaseError::Inputs(errors)) => Outcome { report: last, stale: true, failure: None, errors, applicable },
-            Err(e) => Outcome { report: last, stale: true, failure: Some(e.to_string()), errors: Vec::new(), applicable },
+            Err(CaseError::Inputs(errors)) => Outcome { report: last, stale: true, failure: None, errors, applicable, element_keys },
+            Err(e) => Outcome { report: last, stale: true, failure: Some(e.to_string()), errors: Vec::new(), applicable, element_keys },
         }
     });
     let errors = Memo::new(move |_| outcome.with(|o| o.errors.clone()));
     provide_context(FieldErrors(errors));
+    provide_context(ElementFieldsShown(Memo::new(move |_| outcome.with(|o| o.element_keys.clone()))));
     let report = Signal::derive(move || outcome.with(|o| o.report.clone()));
     let applicable = Memo::new(move |_| outcome.with(|o| o.applicable.clone()));
     let calculator = form.calculator;
@@ -540,6 +559,12 @@ fn ChoicePicker(spec: ChoiceSpec, selected: RwSignal<usize>) -> impl IntoView {
 #[component]
 fn ElementList(form: CalculatorForm) -> impl IntoView {
     let elements = form.elements;
+    let read = use_context::<ElementFieldsShown>();
+    // A field shows when the physics read it for this element, or when nothing of the element
+    // was read yet.
+    let shown = move |id: u32, key: &'static str| {
+        read.is_none_or(|r| r.0.with(|all| all.iter().find(|(i, _)| *i == id).is_none_or(|(_, keys)| keys.is_empty() || keys.contains(&key))))
+    };
     let add = {
         let form = form.clone();
         move |_| {
@@ -572,15 +597,22 @@ fn ElementList(form: CalculatorForm) -> impl IntoView {
                     <li class="element" data-testid=format!("element-{n}")>
                         <div class="element-head">
                             <strong>{format!("{n}.")}</strong>
-                            {items.choices.iter().map(|(spec, sel)| view! {
-                                <ChoiceSelect spec=*spec selected=*sel name=format!("element_{n}_{}", spec.key) />
+                            {items.choices.iter().map(|(spec, sel)| {
+                                let (spec, sel) = (*spec, *sel);
+                                move || shown(id, spec.key).then(|| view! {
+                                    <ChoiceSelect spec=spec selected=sel name=format!("element_{n}_{}", spec.key) />
+                                })
                             }).collect_view()}
                             <button type="button" class="small" title="Move up" aria-label=format!("Move element {n} up") on:click=raise disabled=n == 1>"↑"</button>
                             <button type="button" class="small" title="Remove" aria-label=format!("Remove element {n}") data-testid=format!("remove-element-{n}") on:click=remove>"✕"</button>
                         </div>
                         <div class="element-fields">
-                            {items.fields.iter().map(|(spec, st)| view! {
-                                <QuantityField spec=*spec state=*st name=format!("element_{n}_{}", spec.key) />
+                            {items.fields.iter().map(|(spec, st)| {
+                                let (spec, st) = (*spec, *st);
+                                let key = spec.key;
+                                move || shown(id, key).then(|| view! {
+                                    <QuantityField spec=spec state=st name=format!("element_{n}_{}", spec.key) />
+                                })
                             }).collect_view()}
                         </div>
                     </li>
