@@ -106,3 +106,22 @@ fn display_units_follow_the_size_of_the_value() {
     assert_eq!(Dimension::Length.display_unit(1e-12).symbol, "µm");
     assert_eq!(Dimension::Number.show(41.0, 3), "41.0");
 }
+
+#[test]
+fn ranges_are_read_in_every_written_form() {
+    use clearbore::physics::units::{TypedRange, parse_range};
+    let r = |t: &str| parse_range(t).unwrap().unwrap();
+    assert_eq!(r("0.36–0.42"), TypedRange { nominal: 0.39, low: 0.36, high: 0.42 });
+    assert_eq!(r("0.36 to 0.42").low, 0.36);
+    assert_eq!(r("0.36-0.42").high, 0.42);
+    assert_eq!(r("1e-3-2e-3"), TypedRange { nominal: 1.5e-3, low: 1e-3, high: 2e-3 });
+    assert_eq!(r("25 ± 20 %"), TypedRange { nominal: 25.0, low: 20.0, high: 30.0 });
+    assert_eq!(r("25 +- 5"), TypedRange { nominal: 25.0, low: 20.0, high: 30.0 });
+    // Plain numbers, negative numbers and exponents are not ranges.
+    for plain in ["25", "-3", "1e-3", "-1e-3", "abc"] {
+        assert!(parse_range(plain).is_none(), "{plain}");
+    }
+    // A reversed range or a bad part is an error.
+    assert!(parse_range("0.42–0.36").unwrap().is_err());
+    assert!(parse_range("0.36–x").unwrap().is_err());
+}

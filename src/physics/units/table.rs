@@ -344,3 +344,54 @@ pub fn parse_number(text: &str) -> Result<f64, NumberError> {
     let v: f64 = t.parse().map_err(|_| NumberError::NotANumber)?;
     if v.is_finite() { Ok(v) } else { Err(NumberError::NotFinite) }
 }
+
+/// A range typed for an entry (in the entry's unit): `0.36–0.42`, `0.36 to 0.42`, `0.36..0.42`,
+/// `25 ± 20 %` (relative), `25 ± 5` (absolute). The nominal value is the midpoint of a from–to
+/// range and the centre of a ± range.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct TypedRange {
+    /// The value the main results use.
+    pub nominal: f64,
+    /// Lowest value.
+    pub low: f64,
+    /// Highest value.
+    pub high: f64,
+}
+
+
+/// Reads `text` as a range: `None` when it is not written as one (a plain number, or anything
+/// else, is for [`parse_number`]); `Some(Err)` when it is a range with a bad part or its ends
+/// reversed.
+pub fn parse_range(text: &str) -> Option<Result<TypedRange, NumberError>> {
+    let t = text.trim();
+    for sep in ["±", "+/-", "+-"] {
+        if let Some((centre, spread)) = t.split_once(sep) {
+            let relative = spread.trim_end().ends_with('%');
+            let spread = spread.trim().trim_end_matches('%');
+            return Some((|| {
+                let c = parse_number(centre)?;
+                let d = parse_number(spread)?;
+                let half = if relative { (c * d / 100.0).abs() } else { d.abs() };
+                if !half.is_finite() {
+                    return Err(NumberError::NotFinite);
+                }
+                Ok(TypedRange { nominal: c, low: c - half, high: c + half })
+            })());
+        }
+    }
+    let split = ["–", "—", " to ", ".."].iter().find_map(|sep| t.split_once(sep)).or_else(|| {
+        // A hyphen between two numbers: not a leading sign, not an exponent's sign.
+        let bytes = t.as_bytes();
+        (1..bytes.len())
+            .find(|&i| bytes[i] == b'-' && !matches!(bytes[i - 1], b'e' | b'E') && bytes[..i].iter().any(u8::is_ascii_digit))
+            .map(|i| (&t[..i], &t[i + 1..]))
+    })?;
+    Some((|| {
+        let low = parse_number(split.0)?;
+        let high = parse_number(split.1)?;
+        if high < low {
+            return Err(NumberError::NotANumber);
+        }
+        Ok(TypedRange { nominal: 0.5 * (low + high), low, high })
+    })())
+}
