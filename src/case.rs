@@ -24,6 +24,7 @@ use crate::physics::tubular::{self, TubularInput};
 
 mod format;
 pub mod link;
+pub mod ranges;
 pub mod workspace;
 
 pub use format::{FormatProblem, is_iso_8601};
@@ -452,7 +453,7 @@ impl Added {
     /// The entry it stands for.
     pub fn entry(self) -> Entry {
         match self {
-            Added::Quantity(value, unit) => Entry::Quantity { value, unit: unit.to_owned() },
+            Added::Quantity(value, unit) => Entry::Quantity { value, unit: unit.to_owned(), range: None },
             Added::Choice(key) => Entry::Choice(key.to_owned()),
         }
     }
@@ -468,6 +469,10 @@ pub enum Entry {
         value: f64,
         /// Unit symbol, one of the field's units.
         unit: String,
+        /// Lowest and highest value in the same unit, when the entry is a range (`"range": [0.36,
+        /// 0.42]`); the results use `value`, the range gives their band.
+        #[serde(skip_serializing_if = "Option::is_none")]
+        range: Option<[f64; 2]>,
     },
     /// An option key, e.g. `"single_pass"`.
     Choice(String),
@@ -631,7 +636,7 @@ pub struct EntrySource<'a>(pub &'a Entries);
 impl FieldSource for EntrySource<'_> {
     fn quantity(&self, spec: &FieldSpec) -> Result<f64, InputError> {
         match self.0.get(spec.key) {
-            Some(Entry::Quantity { value, unit }) => spec.accept(*value, spec.unit(unit)?),
+            Some(Entry::Quantity { value, unit, range }) => spec.accept_range(*value, *range, spec.unit(unit)?),
             Some(Entry::Choice(text)) => Err(InputError {
                 field: spec.key,
                 label: spec.label,
@@ -650,7 +655,7 @@ impl FieldSource for EntrySource<'_> {
     fn choice(&self, spec: &ChoiceSpec) -> Result<usize, InputError> {
         match self.0.get(spec.key) {
             Some(Entry::Choice(key)) => spec.index_of(key),
-            Some(Entry::Quantity { value, unit }) => Err(InputError {
+            Some(Entry::Quantity { value, unit, .. }) => Err(InputError {
                 field: spec.key,
                 label: spec.label,
                 given: format!("{value} {unit}"),

@@ -60,6 +60,32 @@ pub fn text_report(case: &CaseFile, report: &Report, sig: usize) -> String {
             out.push_str(&format!("    caution: {caution}\n"));
         }
     }
+    if let Some(spread) = crate::case::ranges::spread(case) {
+        out.push_str(&ranges_text(&spread, sig));
+    }
+    out
+}
+
+/// The bands over the entries given as ranges, the checks they straddle and each band's driver.
+fn ranges_text(spread: &crate::case::ranges::Spread, sig: usize) -> String {
+    let mut out = String::from("\nOver the ranges entered (");
+    let entered: Vec<String> =
+        spread.inputs.iter().map(|i| format!("{} {}–{} {}", i.label, format_significant(i.low, sig), format_significant(i.high, sig), i.unit).trim_end().to_owned()).collect();
+    out.push_str(&format!("{}; {} runs):\n", entered.join("; "), spread.points.len()));
+    for v in spread.straddling() {
+        let seen: Vec<&str> = v.seen.iter().map(|x| x.word()).collect();
+        out.push_str(&format!("[{}] {}: {} inside the ranges\n", v.worst().word(), v.topic, seen.join(", then ")));
+    }
+    for b in spread.bands.iter().filter(|b| b.moves()) {
+        let unit = b.dimension.default_unit();
+        let show = |si: f64| format_significant(unit.from_si(si), sig);
+        let band = format!("{} to {} {}", show(b.low), show(b.high), unit.symbol);
+        let driver = b.driver.map(|(i, _)| format!("  (moved most by {})", spread.inputs[i].label)).unwrap_or_default();
+        out.push_str(&format!("{:<44} {}{driver}\n", b.label, band.trim_end()));
+    }
+    for p in spread.failures().take(1) {
+        out.push_str(&format!("{} runs could not be computed; the first: {}\n", spread.failures().count(), p.failure.as_deref().unwrap_or_default()));
+    }
     out
 }
 

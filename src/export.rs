@@ -141,7 +141,7 @@ pub fn elements(header: Header<'_>, report: &Report) -> Option<Sheet> {
                 columns.push(heading(spec.label, unit));
                 for (row, entries) in cells.iter_mut().zip(&case.elements) {
                     let si = match entries.get(spec.key) {
-                        Some(Entry::Quantity { value, unit: symbol }) => unit_by_symbol(spec.dimension, symbol).map(|u| u.to_si(*value)),
+                        Some(Entry::Quantity { value, unit: symbol, .. }) => unit_by_symbol(spec.dimension, symbol).map(|u| u.to_si(*value)),
                         _ => None,
                     };
                     row.push(si.map_or(Cell::Empty, |si| Cell::Number(unit.from_si(si))));

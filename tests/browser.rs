@@ -7,7 +7,7 @@ mod support;
 
 use clearbore::case::{Calculator, CaseFile};
 use clearbore::physics::units::format_significant;
-use serde_json::Value;
+use serde_json::{Value, json};
 use support::Browser;
 
 /// Label, value and unit of every result row of the table with this test id.
@@ -578,5 +578,41 @@ async fn models_that_rest_on_recall_are_marked_in_the_spread() {
     assert_eq!(marked("van Baten"), Some(false), "{marks}");
     assert_eq!(marked("Vandu"), Some(true), "{marks}");
     assert!(rows.iter().any(|r| r[0].as_str().unwrap().contains("2007") && r[1] == true), "{marks}");
+    b.close().await;
+}
+
+#[tokio::test]
+async fn a_range_entry_gives_bands_names_the_entry_that_drives_them_and_a_straddled_limit() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    b.click("[data-testid=tab-packed_bed]").await;
+    b.wait_for("[data-testid=panel-packed_bed]").await;
+    assert!(!b.exists("[data-testid=ranges]").await, "no ranges, no band section");
+    // Voidage 36–42 % (entered) and flow 1 ± 10 %: the bed's pressure drop moves most with the
+    // voidage ((1−ε)²/ε³ in Ergun's viscous term), the residence time with the flow.
+    b.click("[data-testid=option-voidage_source-entered]").await;
+    b.type_into("voidage", "36-42").await;
+    b.type_into("flow", "1 ± 10 %").await;
+    b.wait_for("[data-testid=band-bed_pressure_drop]").await;
+    assert!(b.text("[data-testid=driver-bed_pressure_drop]").await.starts_with("Bed voidage"));
+    assert_eq!(b.text("[data-testid=driver-residence_time]").await, "Flow");
+    // The page's band equals the command line's for the same case.
+    let mut case: Value = serde_json::from_str(Calculator::PackedBed.demo_json()).unwrap();
+    case["inputs"]["voidage_source"] = json!("entered");
+    case["inputs"]["voidage"] = json!({"value": 39, "unit": "%", "range": [36, 42]});
+    case["inputs"]["flow"] = json!({"value": 1, "unit": "mL/min", "range": [0.9, 1.1]});
+    let case = CaseFile::from_json(&case.to_string()).unwrap();
+    let band = clearbore::case::ranges::spread(&case).unwrap().band("bed_pressure_drop").cloned().unwrap();
+    let shown = b.text("[data-testid=band-bed_pressure_drop]").await;
+    let expected = format!("{} to {}", band.dimension.show(band.low, 3), band.dimension.show(band.high, 3));
+    assert!(shown.contains(&expected), "{shown} vs {expected}");
+    // A back-pressure range that crosses the 20 bar rating: the budget check is said to straddle.
+    b.type_into("back_pressure", "10-25").await;
+    let straddle = b.text_when("[data-testid=range-verdict-pressure_budget]", |t| t.contains("problem")).await;
+    assert!(straddle.contains("straddle"), "{straddle}");
+    // The main results stay those of the nominal entries (17.5 bar), shown as usual.
+    assert!(b.exists("[data-testid=result-bed_pressure_drop]").await);
+    b.screenshot("ranges").await;
+    assert_clean(&b).await;
     b.close().await;
 }

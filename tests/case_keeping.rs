@@ -24,7 +24,7 @@ fn quantity(spec: FieldSpec) -> BoxedStrategy<Entry> {
             }
             let value = unit.from_si(si);
             spec.accept(value, unit).ok()?;
-            Some(Entry::Quantity { value, unit: unit.symbol.to_owned() })
+            Some(Entry::Quantity { value, unit: unit.symbol.to_owned(), range: None })
         })
         .boxed()
 }

@@ -239,8 +239,8 @@ fn read_quantity(v: &Value, at: &str, unit: Option<&str>, problems: &mut Problem
         return None;
     };
     let mut ok = true;
-    for key in map.keys().filter(|k| *k != "value" && *k != "unit") {
-        problems.add(format!("{at}.{key}"), "not part of a quantity, which has only \"value\" and \"unit\"");
+    for key in map.keys().filter(|k| !["value", "unit", "range"].contains(&k.as_str())) {
+        problems.add(format!("{at}.{key}"), "not part of a quantity, which has only \"value\", \"unit\" and an optional \"range\"");
         ok = false;
     }
     let mut part = |name: &str, what: &str, expected: &str, is: fn(&Value) -> bool| match map.get(name) {
@@ -256,9 +256,28 @@ fn read_quantity(v: &Value, at: &str, unit: Option<&str>, problems: &mut Problem
     };
     let value = part("value", "number", "a number (without quotes)", Value::is_number).and_then(Value::as_f64);
     let symbol = part("unit", "unit", "a unit symbol in quotes", Value::is_string).and_then(Value::as_str).map(str::to_owned);
-    match (value, symbol) {
-        (Some(value), Some(unit)) if ok => Some(Entry::Quantity { value, unit }),
+    let range = match map.get("range") {
+        None => Ok(None),
+        Some(r) => read_range(r, value).map(Some).map_err(|problem| problems.add(format!("{at}.range"), problem)),
+    };
+    match (value, symbol, range) {
+        (Some(value), Some(unit), Ok(range)) if ok => Some(Entry::Quantity { value, unit, range }),
         _ => None,
+    }
+}
+
+/// A quantity's range: two numbers, low end first, around the value.
+fn read_range(r: &Value, value: Option<f64>) -> Result<[f64; 2], String> {
+    let ends = r.as_array().filter(|a| a.len() == 2).and_then(|a| Some([a[0].as_f64()?, a[1].as_f64()?]));
+    let Some([low, high]) = ends else {
+        return Err(format!("expected the range's two ends as numbers, low end first, like [0.36, 0.42]; found {}", describe(r)));
+    };
+    if low >= high {
+        return Err(format!("the low end ({low}) must be below the high end ({high})"));
+    }
+    match value {
+        Some(v) if !(low..=high).contains(&v) => Err(format!("the value {v} must lie within the range [{low}, {high}]")),
+        _ => Ok([low, high]),
     }
 }
 

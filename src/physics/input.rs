@@ -3,7 +3,7 @@
 
 use serde::Serialize;
 
-use super::units::{Dimension, NumberError, Unit, format_significant, parse_number, unit_by_symbol};
+use super::units::{Dimension, NumberError, Unit, format_significant, parse_entry, unit_by_symbol};
 
 /// The physically possible values of a field, in SI.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
@@ -209,16 +209,49 @@ impl FieldSpec {
         Ok(si)
     }
 
-    /// Reads typed text in `unit`; returns the SI value.
+    /// Reads typed text in `unit`; returns the SI value (of the nominal value, for a range).
     pub fn read(&self, text: &str, unit: Unit) -> Result<f64, InputError> {
-        match parse_number(text) {
-            Ok(v) => self.accept(v, unit),
+        self.read_typed(text, unit).map(|t| t.si)
+    }
+
+    /// Reads typed text in `unit`: a number, or a range (`0.36–0.42`, `50 ± 20 %`) whose ends
+    /// must both be allowed.
+    pub fn read_typed(&self, text: &str, unit: Unit) -> Result<Typed, InputError> {
+        match parse_entry(text) {
+            Ok((value, range)) => Ok(Typed { value, range, si: self.accept_range(value, range, unit)? }),
             Err(e) => {
                 let shown = if text.trim().is_empty() { "(empty)".to_owned() } else { format!("\"{}\"", text.trim()) };
                 Err(self.error(shown, e.to_string()))
             }
         }
     }
+
+    /// Validates a value with an optional range `[low, high]` around it, all in `unit`: each end
+    /// must be allowed and the value must lie between them. Returns the value in SI.
+    pub fn accept_range(&self, value: f64, range: Option<[f64; 2]>, unit: Unit) -> Result<f64, InputError> {
+        if let Some([low, high]) = range {
+            for (end, v) in [("low", low), ("high", high)] {
+                self.accept(v, unit).map_err(|e| InputError { problem: format!("the range's {end} end: {}", e.problem), ..e })?;
+            }
+            if !(low <= value && value <= high) {
+                let show = |v: f64| format!("{} {}", format_significant(v, 4), unit.symbol).trim_end().to_owned();
+                return Err(self.error(show(value), format!("must lie within its range, {}–{}", show(low), show(high))));
+            }
+        }
+        self.accept(value, unit)
+    }
+}
+
+/// A typed entry read in its unit: the value used for the main results, and the range around it
+/// when one was given.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Typed {
+    /// The nominal value, in the entry's unit.
+    pub value: f64,
+    /// Lowest and highest value, in the entry's unit, when a range was typed.
+    pub range: Option<[f64; 2]>,
+    /// The nominal value in SI.
+    pub si: f64,
 }
 
 /// Entries that must rise in the order given (d10 < d50 < d90): an error at each entry that is

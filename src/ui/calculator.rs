@@ -12,12 +12,13 @@ use super::diagrams::{LineStrip, PartTable, SlugView, line_of, slugs_of};
 use super::field::{FieldErrors, FieldState, QuantityField};
 use super::results::{CheckList, ResultTable};
 use super::print::{PrintRecord, Printing, entry_rows, entry_text};
+use super::ranges::{RangeBands, follow_ranges};
 use super::summary::AnswerSummary;
 use crate::case::{Calculator, CaseError, CaseFile, Entries, Entry, FormItem};
 use crate::physics::form::{ChoiceSpec, FieldSource};
 use crate::physics::input::{FieldSpec, InputError};
 use crate::physics::report::{Advice, Report, Verdict};
-use crate::physics::units::parse_number;
+use crate::physics::units::{parse_entry, parse_range};
 
 /// The editable state of one set of entries (a calculator's, or one element's): a state per
 /// field and a selected index per choice.
@@ -55,8 +56,11 @@ impl FormState {
     fn load(&self, entries: &Entries) {
         for (spec, state) in &self.fields {
             match entries.get(spec.key) {
-                Some(Entry::Quantity { value, unit }) => {
-                    state.text.set(value.to_string());
+                Some(Entry::Quantity { value, unit, range }) => {
+                    state.text.set(match range {
+                        Some([low, high]) => format!("{low}–{high}"),
+                        None => value.to_string(),
+                    });
                     state.unit.set(unit.clone());
                 }
                 _ => state.text.set(String::new()),
@@ -77,9 +81,9 @@ impl FormState {
         let mut entries = Entries::new();
         for (spec, state) in &self.fields {
             let text = state.text.get_untracked();
-            match parse_number(&text) {
-                Ok(value) => {
-                    entries.insert(spec.key.to_owned(), Entry::Quantity { value, unit: state.unit.get_untracked() });
+            match parse_entry(&text) {
+                Ok((value, range)) => {
+                    entries.insert(spec.key.to_owned(), Entry::Quantity { value, unit: state.unit.get_untracked(), range });
                 }
                 Err(e) if needed.contains(&spec.key) => errors.push(InputError {
                     field: spec.key,
@@ -227,6 +231,12 @@ impl CalculatorForm {
         Ok(case)
     }
 
+    /// Whether any quantity, of the calculator or of an element, is typed as a range.
+    fn has_ranges(&self) -> bool {
+        let ranged = |state: &FormState| state.fields.iter().any(|(_, st)| st.text.with(|t| parse_range(t).is_some()));
+        ranged(&self.main) || self.elements.with(|list| list.iter().any(|e| ranged(&e.state)))
+    }
+
     /// Subscribes the running effect to every entry, element, title and notes of the form, so
     /// that it runs again after any edit (autosave).
     pub fn track_all(&self) {
@@ -349,6 +359,16 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                 .collect::<Vec<_>>()
         })
     });
+    // The case over its ranges, only when some entry is a range (each costs a few dozen runs).
+    let spread = RwSignal::new(None);
+    {
+        let form = form.clone();
+        let ranged = Memo::new(move |_| {
+            form.track_all();
+            if form.has_ranges() { form.to_case().ok() } else { None }
+        });
+        follow_ranges(ranged, spread);
+    }
     let line = Memo::new(move |_| report.with(|r| r.as_ref().and_then(line_of)));
     let slugs = Memo::new(move |_| report.with(|r| r.as_ref().and_then(slugs_of)));
     // The element whose detail is open: the worst one when the report changes, or the one picked.
@@ -472,6 +492,7 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                         <p class="failure" role="alert" data-testid="numerical-failure">{f}</p>
                     })}
                     <AnswerSummary calculator=calculator report=report select=select />
+                    <RangeBands spread=spread />
                 </div>
                 <form class="inputs" on:submit=|ev| ev.prevent_default() aria-label=format!("{} inputs", calculator.title())>
                     <For each=inputs key=|(i, _, _)| *i let:entry>

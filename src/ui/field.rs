@@ -5,7 +5,7 @@
 use leptos::prelude::*;
 
 use crate::physics::input::{FieldSpec, InputError};
-use crate::physics::units::{format_significant, parse_number, unit_by_symbol};
+use crate::physics::units::{format_significant, parse_entry, unit_by_symbol};
 
 /// The editable state of one quantity field: the text as typed and the chosen unit symbol.
 #[derive(Debug, Clone, Copy, PartialEq)]
@@ -61,8 +61,12 @@ pub fn QuantityField(spec: FieldSpec, state: FieldState, #[prop(optional, into)]
     let on_unit = move |new_symbol: String| {
         let old = unit_by_symbol(spec.dimension, &state.unit.get_untracked());
         let new = unit_by_symbol(spec.dimension, &new_symbol);
-        if let (Some(old), Some(new), Ok(v)) = (old, new, parse_number(&state.text.get_untracked())) {
-            state.text.set(plain(new.from_si(old.to_si(v))));
+        if let (Some(old), Some(new), Ok((v, range))) = (old, new, parse_entry(&state.text.get_untracked())) {
+            let convert = |v: f64| plain(new.from_si(old.to_si(v)));
+            state.text.set(match range {
+                Some([low, high]) => format!("{}–{}", convert(low), convert(high)),
+                None => convert(v),
+            });
         }
         state.unit.set(new_symbol);
     };

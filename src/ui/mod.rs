@@ -13,6 +13,7 @@ mod field;
 mod library;
 mod panic_banner;
 mod print;
+mod ranges;
 mod results;
 mod summary;
 mod workbench;

@@ -162,7 +162,8 @@ pub fn entry_rows(layout: &[FormItem], applicable: &[&'static str], inputs: &cra
 /// An entry as typed: number and unit, or the option key.
 pub fn entry_text(e: &Entry) -> String {
     match e {
-        Entry::Quantity { value, unit } => format!("{value} {unit}").trim_end().to_owned(),
+        Entry::Quantity { value, unit, range: None } => format!("{value} {unit}").trim_end().to_owned(),
+        Entry::Quantity { range: Some([low, high]), unit, .. } => format!("{low}–{high} {unit}").trim_end().to_owned(),
         Entry::Choice(k) => k.clone(),
     }
 }

@@ -8,4 +8,4 @@ mod table;
 pub use format::format_significant;
 pub use quantities::*;
 pub(crate) use quantities::si_quantity;
-pub use table::{Dimension, NumberError, TypedRange, Unit, parse_number, parse_range, unit_by_symbol};
+pub use table::{Dimension, NumberError, TypedRange, Unit, parse_entry, parse_number, parse_range, unit_by_symbol};

@@ -315,6 +315,8 @@ pub enum NumberError {
     Comma,
     /// The number overflows a double (for example `1e400`).
     NotFinite,
+    /// A range written high end first (`0.42–0.36`).
+    Reversed,
 }
 
 impl std::fmt::Display for NumberError {
@@ -324,6 +326,7 @@ impl std::fmt::Display for NumberError {
             NumberError::NotANumber => "not a number",
             NumberError::Comma => "use a decimal point, not a comma",
             NumberError::NotFinite => "number too large to use",
+            NumberError::Reversed => "a range is written low end first, e.g. 0.36–0.42",
         })
     }
 }
@@ -390,8 +393,17 @@ pub fn parse_range(text: &str) -> Option<Result<TypedRange, NumberError>> {
         let low = parse_number(split.0)?;
         let high = parse_number(split.1)?;
         if high < low {
-            return Err(NumberError::NotANumber);
+            return Err(NumberError::Reversed);
         }
         Ok(TypedRange { nominal: 0.5 * (low + high), low, high })
     })())
+}
+
+/// Reads an entry as typed: a plain number, or a range (see [`parse_range`]). Returns the nominal
+/// value and, for a range of some width, its ends `[low, high]`.
+pub fn parse_entry(text: &str) -> Result<(f64, Option<[f64; 2]>), NumberError> {
+    match parse_range(text) {
+        Some(r) => r.map(|r| (r.nominal, (r.high > r.low).then_some([r.low, r.high]))),
+        None => parse_number(text).map(|v| (v, None)),
+    }
 }
