@@ -154,6 +154,10 @@ impl Browser {
                     if engine != Engine::Chromium {
                         let _ = client.set_window_size(1280, 1400).await;
                     }
+                    // Scripts that walk every choice of every tab run for tens of seconds on a
+                    // loaded two-core machine; WebDriver's default script timeout is 30 s.
+                    let timeouts = fantoccini::wd::TimeoutConfiguration::new(Some(std::time::Duration::from_secs(180)), None, None);
+                    client.update_timeouts(timeouts).await.expect("script timeout set");
                     return Browser { client, _driver: driver, _display: display, _profile: tempdir::Dir(profile) };
                 }
                 Err(e) => last_error = e.to_string(),
