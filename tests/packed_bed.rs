@@ -797,3 +797,25 @@ fn minimum_fluidisation_matches_chemics() {
     }
     assert_eq!(compared, 30 * 10);
 }
+
+#[test]
+fn no_sizing_remedy_asks_for_a_bed_longer_than_a_lab_cartridge() {
+    // 20 µm particles at 5 mL/min in 4.6 mm for 5 min between the particles: the bed for the
+    // target is metres long. Coarser particles in this cartridge would still need that bed, so
+    // they are not offered; the wider cartridge (≤ 300 mm of bed, common practice) is.
+    let mut c = case();
+    for (k, v) in [("tube_diameter", (4.6, "mm")), ("particle_diameter", (20.0, "µm")), ("flow", (5.0, "mL/min")), ("target_residence_time", (5.0, "min"))] {
+        c.quantities.insert(k, v);
+    }
+    let r = run(&c);
+    let sizing = r.check("sizing").unwrap();
+    assert!(sizing.reason.contains("longer than a lab cartridge"), "{}", sizing.reason);
+    let remedies: Vec<&str> = r.advice_for("sizing").filter(|a| a.kind == AdviceKind::Remedy).map(|a| a.text.as_str()).collect();
+    assert!(!remedies.is_empty(), "a practical cartridge is offered");
+    for text in remedies {
+        for (at, _) in text.match_indices(" mm bed") {
+            let number: f64 = text[..at].rsplit(' ').next().unwrap().parse().unwrap();
+            assert!(number <= 300.0, "{text}");
+        }
+    }
+}

@@ -797,7 +797,9 @@ fn sizing_figures_and_check(
                     mm(s.length.si()),
                     format_significant(s.voidage.si(), 3)
                 ));
-                if s.particle_diameter.si() > input.particle_diameter.si() {
+                if s.length.si() > l_high {
+                    text.push_str(&format!(" That bed is longer than a lab cartridge ({} mm).", mm(l_high)));
+                } else if s.particle_diameter.si() > input.particle_diameter.si() {
                     advice.add(key, AdviceKind::Remedy, format!(
                         "Use particles of {} µm or more in this cartridge (sieve off the fines): its {} mm bed then stays within the limit.",
                         format_significant(s.particle_diameter.si() * 1e6, 3),
