@@ -11,20 +11,25 @@ use clearbore::physics::input::FieldSpec;
 use proptest::prelude::*;
 use serde_json::{Value, json};
 
-/// A quantity entry: a value inside the field's allowed range, in one of its units.
+/// A quantity entry: a value inside the field's allowed range, in one of its units, sometimes
+/// with a range around it (both ends allowed).
 fn quantity(spec: FieldSpec) -> BoxedStrategy<Entry> {
     let units = spec.dimension.units();
-    (0..units.len(), 0.0f64..=1.0)
-        .prop_filter_map("inside the allowed range", move |(u, t)| {
+    (0..units.len(), 0.0f64..=1.0, proptest::option::of((0.0f64..=1.0, 0.0f64..=1.0)))
+        .prop_filter_map("inside the allowed range", move |(u, t, spread)| {
             let unit = units[u];
             let allowed = spec.allowed;
-            let mut si = allowed.low + t * (allowed.high? - allowed.low);
+            let high = allowed.high?;
+            let mut si = allowed.low + t * (high - allowed.low);
             if allowed.whole {
                 si = si.round();
             }
             let value = unit.from_si(si);
             spec.accept(value, unit).ok()?;
-            Some(Entry::Quantity { value, unit: unit.symbol.to_owned(), range: None })
+            let range = spread
+                .map(|(a, b)| [unit.from_si(si - a * (si - allowed.low)), unit.from_si(si + b * (high - si))])
+                .filter(|[low, high]| low < high && *low <= value && value <= *high && spec.accept_range(value, Some([*low, *high]), unit).is_ok());
+            Some(Entry::Quantity { value, unit: unit.symbol.to_owned(), range })
         })
         .boxed()
 }
