@@ -412,6 +412,24 @@ impl Calculator {
         layout_has(self.layout(), key)
     }
 
+    /// Whether [`Calculator::map`] gives a map for this calculator.
+    pub const fn has_map(self) -> bool {
+        matches!(self, Calculator::PackedBed)
+    }
+
+    /// The operating map of the case, for a calculator that has one: its verdict over a grid of
+    /// two entries (`None` for the others; the inputs' errors when they are invalid).
+    pub fn map(self, src: &dyn FieldSource) -> Option<Result<crate::physics::map::Map, CaseError>> {
+        match self {
+            Calculator::PackedBed => Some(
+                PackedBedInput::from_source(src)
+                    .map(|input| bed::map::cartridge_map(&input, bed::map::CELLS))
+                    .map_err(CaseError::Inputs),
+            ),
+            Calculator::TubularReactor | Calculator::SlurryLine | Calculator::SegmentedFlow | Calculator::GasLiquidBed => None,
+        }
+    }
+
     /// Validates the inputs from `src` (and, for a line, one source per element) and runs the
     /// calculator.
     pub fn evaluate(self, src: &dyn FieldSource, elements: &[&dyn FieldSource]) -> Result<Report, CaseError> {

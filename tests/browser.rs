@@ -616,3 +616,74 @@ async fn a_range_entry_gives_bands_names_the_entry_that_drives_them_and_a_stradd
     assert_clean(&b).await;
     b.close().await;
 }
+
+/// Sends a mouse event of `kind` to the cartridge map at the fractions (`fx` from the left, `fy`
+/// from the top) of its canvas.
+async fn map_event(b: &Browser, kind: &str, fx: f64, fy: f64) {
+    b.js(&format!(
+        "const c = document.querySelector('[data-testid=map-canvas-cartridge_map]'); const r = c.getBoundingClientRect();
+         c.dispatchEvent(new MouseEvent('{kind}', {{ bubbles: true, clientX: r.left + {fx} * r.width, clientY: r.top + {fy} * r.height }}));"
+    ))
+    .await;
+}
+
+/// The map marker's distance from the left (% of the map) once `ok` holds for it (5 s at most).
+async fn marker_left_when(b: &Browser, ok: impl Fn(f64) -> bool) -> f64 {
+    for _ in 0..50 {
+        let now = b.js("return parseFloat(document.querySelector('[data-testid=map-marker-cartridge_map]').style.left);").await.as_f64().unwrap();
+        if ok(now) {
+            return now;
+        }
+        tokio::time::sleep(std::time::Duration::from_millis(100)).await;
+    }
+    panic!("the map marker did not move as expected");
+}
+
+#[tokio::test]
+async fn the_cartridge_map_renders_reads_out_a_cell_moves_the_case_and_follows_the_entries() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    b.click("[data-testid=tab-packed_bed]").await;
+    b.wait_for("[data-testid=map-canvas-cartridge_map]").await;
+    b.wait_for("[data-testid=map-marker-cartridge_map]").await;
+    // Drawn: fine (green) at the lowest flow with ~100 µm particles, caution (amber) for the
+    // coarsest (D_t/d_p below 10: wall effect), problem (red) at the finest particles and the
+    // pump's largest flow (5 µm fines past the 20 bar limit).
+    let pixel = |x: &str, y: &str| {
+        format!("const c = document.querySelector('[data-testid=map-canvas-cartridge_map]'); return Array.from(c.getContext('2d').getImageData({x}, {y}, 1, 1).data);")
+    };
+    let green = b.js(&pixel("0", "Math.round(0.46 * c.height)")).await;
+    let amber = b.js(&pixel("0", "0")).await;
+    let red = b.js(&pixel("c.width - 1", "c.height - 1")).await;
+    assert_eq!(green, json!([0xb9, 0xdf, 0xc4, 255]), "lowest flow, about 100 µm");
+    assert_eq!(amber, json!([0xf3, 0xd9, 0x8b, 255]), "top left: lowest flow, coarsest particles");
+    assert_eq!(red, json!([0xec, 0xa5, 0x9f, 255]), "bottom right: the pump's largest flow, the finest particles");
+    // The read-out names this case until the pointer is on the map, then the cell under it.
+    let own = b.text("[data-testid=map-readout-cartridge_map]").await;
+    assert!(own.starts_with("This case: Flow 1"), "{own}");
+    map_event(&b, "mousemove", 0.99, 0.99).await;
+    let cell = b.text_when("[data-testid=map-readout-cartridge_map]", |t| t.starts_with("Flow")).await;
+    assert!(cell.contains("problem") && cell.contains("Bed pressure drop (Ergun)"), "{cell}");
+    // A click moves the case: the flow field takes the cell's flow (3 significant figures).
+    let before = b.js("return document.querySelector('[data-testid=map-marker-cartridge_map]').style.left;").await;
+    map_event(&b, "click", 0.9, 0.1).await;
+    let mut typed = String::new();
+    for _ in 0..50 {
+        typed = b.js("return document.querySelector('[data-testid=input-flow]').value;").await.as_str().unwrap_or_default().to_owned();
+        if typed != "1" {
+            break;
+        }
+        tokio::time::sleep(std::time::Duration::from_millis(100)).await;
+    }
+    let q: f64 = typed.parse().unwrap();
+    assert!(q > 3.0 && q <= 10.0, "flow now {q} mL/min");
+    // The marker follows the entry: after the click it sits at the chosen flow, right of where
+    // it was; a lower flow typed moves it left again.
+    let start = before.as_str().unwrap().trim_end_matches('%').parse::<f64>().unwrap();
+    let clicked = marker_left_when(&b, |x| x > start + 10.0).await;
+    b.type_into("flow", "0.1").await;
+    marker_left_when(&b, |x| x < clicked - 10.0).await;
+    b.screenshot("cartridge-map").await;
+    assert_clean(&b).await;
+    b.close().await;
+}

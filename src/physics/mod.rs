@@ -8,6 +8,7 @@ pub mod form;
 pub mod gas_liquid_bed;
 pub mod gases;
 pub mod hazards;
+pub mod map;
 pub mod input;
 pub mod numeric;
 pub mod ode;

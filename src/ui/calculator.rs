@@ -12,6 +12,7 @@ use super::diagrams::{LineStrip, PartTable, SlugView, line_of, slugs_of};
 use super::field::{FieldErrors, FieldState, QuantityField};
 use super::results::{CheckList, ResultTable};
 use super::print::{PrintRecord, Printing, entry_rows, entry_text};
+use super::maps::MapView;
 use super::ranges::{RangeBands, follow_ranges};
 use super::summary::AnswerSummary;
 use crate::case::{Calculator, CaseError, CaseFile, Entries, Entry, FormItem};
@@ -99,6 +100,16 @@ impl FormState {
             entries.insert(spec.key.to_owned(), Entry::Choice(key.to_owned()));
         }
         entries
+    }
+
+    /// Writes an SI value into a quantity field in the field's present unit (3 significant
+    /// figures, as a map cell's value is no more precise than that).
+    fn set_si(&self, key: &str, si: f64) {
+        if let Some((spec, state)) = self.fields.iter().find(|(s, _)| s.key == key)
+            && let Some(unit) = crate::physics::units::unit_by_symbol(spec.dimension, &state.unit.get_untracked())
+        {
+            state.text.set(crate::physics::units::format_significant(unit.from_si(si), 3));
+        }
     }
 
     /// Subscribes the running effect to every entry.
@@ -369,6 +380,39 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
         });
         follow_ranges(ranged, spread);
     }
+    // The operating map, for a calculator that has one: recomputed a moment after the last edit
+    // that gave a valid report (a map is tens of thousands of cells).
+    let map = RwSignal::new(None);
+    let pick = {
+        let main = form.main.clone();
+        Callback::new(move |(x, y): (f64, f64)| {
+            let fields = map.with_untracked(|m: &Option<crate::physics::map::Map>| m.as_ref().map(|m| (m.x.field, m.y.field)));
+            if let Some((fx, fy)) = fields {
+                let shown = applicable.get_untracked();
+                for (key, si) in [(fx, x), (fy, y)] {
+                    if shown.contains(&key) {
+                        main.set_si(key, si);
+                    }
+                }
+            }
+        })
+    };
+    if calculator.has_map() {
+        let main = form.main.clone();
+        let pending: StoredValue<Option<TimeoutHandle>, LocalStorage> = StoredValue::new_local(None);
+        Effect::new(move |_| {
+            if outcome.with(|o| o.stale) {
+                return;
+            }
+            report.track();
+            if let Some(handle) = pending.try_update_value(Option::take).flatten() {
+                handle.clear();
+            }
+            let main = main.clone();
+            let work = move || map.set(untrack(|| calculator.map(&main).and_then(Result::ok)));
+            pending.set_value(set_timeout_with_handle(work, std::time::Duration::from_millis(150)).ok());
+        });
+    }
     let line = Memo::new(move |_| report.with(|r| r.as_ref().and_then(line_of)));
     let slugs = Memo::new(move |_| report.with(|r| r.as_ref().and_then(slugs_of)));
     // The element whose detail is open: the worst one when the report changes, or the one picked.
@@ -515,6 +559,7 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                     <h3>"Checks"</h3>
                     <CheckList report=report wanted=main_checks />
                     <AdviceView report=report wanted=shared_advice select=select />
+                    <MapView map=map pick=pick />
                     <h3>"Results"</h3>
                     <ResultTable report=report keys=main_figures />
                     <PlotList report=report />

@@ -11,6 +11,7 @@ mod diagrams;
 mod display;
 mod field;
 mod library;
+mod maps;
 mod panic_banner;
 mod print;
 mod ranges;

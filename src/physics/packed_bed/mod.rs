@@ -14,6 +14,7 @@ pub mod harrison_brunner_hecker;
 pub mod kozeny_carman;
 pub mod kta;
 pub mod kunii_levenspiel;
+pub mod map;
 pub mod mehta_hawley;
 pub mod minimum_fluidisation;
 pub mod montillet_akkari_comiti;
@@ -532,11 +533,16 @@ pub fn voidage_figure(voidage: &Voidage, shape: ParticleShape, particle_diameter
     }
 }
 
+/// The pressure budget's verdict: the inlet pressure by the recommended correlation, and the
+/// back-pressure plus the highest correlation's drop, against the rating (SI, gauge).
+pub fn pressure_verdict(inlet: f64, back: f64, worst_dp: f64, rating: f64) -> Verdict {
+    budget_verdict(inlet / rating, (back + worst_dp) / rating)
+}
+
 fn pressure_check(inlet: f64, dp: &Figure, back: f64, rating: f64, rating_part: &str, size_note: &str) -> Check {
     let ratio = inlet / rating;
     let (_, worst_dp) = dp.spread();
-    let worst_ratio = (back + worst_dp) / rating;
-    let verdict = budget_verdict(ratio, worst_ratio);
+    let verdict = pressure_verdict(inlet, back, worst_dp, rating);
     let note = match verdict {
         Verdict::Problem => ": over the rating".to_owned(),
         Verdict::Caution if ratio > PRESSURE_MARGIN => ": less than 20 % margin (common practice, no source)".to_owned(),
@@ -561,6 +567,23 @@ fn pressure_check(inlet: f64, dp: &Figure, back: f64, rating: f64, rating_part: 
             bar(rating),
         ),
         caution,
+    }
+}
+
+/// The lifting verdict for an upward superficial velocity `u` (SI) and the minimum fluidisation
+/// velocity by the recommended and the lowest correlation (`None`: particles not denser than the
+/// liquid). Down-flow is fine; a bed held between frits is at most a caution.
+pub fn lifting_verdict(direction: FlowDirection, u: f64, umf: Option<(f64, f64)>) -> Verdict {
+    let lifted = match direction {
+        FlowDirection::Down => return Verdict::Fine,
+        FlowDirection::UpConfined => Verdict::Caution,
+        FlowDirection::UpFree => Verdict::Problem,
+    };
+    match umf {
+        None => lifted,
+        Some((recommended, _)) if u > recommended => lifted,
+        Some((_, lowest)) if u > lowest => Verdict::Caution,
+        Some(_) => Verdict::Fine,
     }
 }
 
@@ -600,12 +623,13 @@ fn lifting_check(input: &PackedBedInput, u_s: Velocity, umf: Option<&Figure>) ->
     let recommended = umf.value.get();
     let (lowest, _) = umf.spread();
     let mm_s = |v: f64| format_significant(v * 1e3, 3);
-    let (verdict, what) = if u > recommended {
-        (lifted, "above the minimum fluidisation velocity (Wen–Yu)")
+    let verdict = lifting_verdict(input.direction, u, Some((recommended, lowest)));
+    let what = if u > recommended {
+        "above the minimum fluidisation velocity (Wen–Yu)"
     } else if u > lowest {
-        (Verdict::Caution, "below the Wen–Yu minimum fluidisation velocity but above the lowest correlation")
+        "below the Wen–Yu minimum fluidisation velocity but above the lowest correlation"
     } else {
-        (Verdict::Fine, "below the minimum fluidisation velocity by every correlation")
+        "below the minimum fluidisation velocity by every correlation"
     };
     Check {
         key,

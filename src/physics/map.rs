@@ -1,0 +1,76 @@
+//! Operating maps: a calculator's verdict over a grid of two of its entries (e.g. flow × particle
+//! size), with the values behind it per cell, so that the page can show where a setup works and
+//! move the case to a chosen cell. Each cell is computed by the same functions as a point
+//! evaluation (tested at sampled cells); a map is built only on request, never by `evaluate`.
+
+use serde::Serialize;
+
+use super::report::Verdict;
+use super::units::Dimension;
+
+/// One axis: an entry of the case, swept over log-spaced values.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct MapAxis {
+    /// The field the axis sweeps (the page sets it when a cell is chosen).
+    pub field: &'static str,
+    /// Label with what the values mean.
+    pub label: &'static str,
+    /// Kind of quantity.
+    pub dimension: Dimension,
+    /// Cell centres, SI, rising.
+    pub values: Vec<f64>,
+}
+
+impl MapAxis {
+    /// `n` log-spaced values from `low` to `high` (SI, both positive).
+    pub fn log(field: &'static str, label: &'static str, dimension: Dimension, low: f64, high: f64, n: usize) -> Self {
+        let step = if n > 1 { (high / low).ln() / (n - 1) as f64 } else { 0.0 };
+        Self { field, label, dimension, values: (0..n).map(|i| low * (step * i as f64).exp()).collect() }
+    }
+
+    /// The index of the cell whose centre is nearest `value` on the log scale.
+    pub fn nearest(&self, value: f64) -> usize {
+        let at = |i: usize| (self.values[i].ln() - value.ln()).abs();
+        (0..self.values.len()).min_by(|&a, &b| at(a).total_cmp(&at(b))).unwrap_or(0)
+    }
+}
+
+/// A quantity shown for each cell (on hover).
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct MapLayer {
+    /// Label.
+    pub label: &'static str,
+    /// Kind of quantity.
+    pub dimension: Dimension,
+    /// One value per cell, SI, in the order of [`Map::verdicts`] (NaN where not computed).
+    pub values: Vec<f64>,
+}
+
+/// A verdict map over two entries.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Map {
+    /// Stable key (`data-testid`).
+    pub key: &'static str,
+    /// Title.
+    pub title: &'static str,
+    /// What decides a cell's colour, in words, with the sources.
+    pub basis: String,
+    /// Horizontal axis.
+    pub x: MapAxis,
+    /// Vertical axis.
+    pub y: MapAxis,
+    /// One verdict per cell, row by row from the lowest y value, each row from the lowest x
+    /// (`None` where the cell could not be computed).
+    pub verdicts: Vec<Option<Verdict>>,
+    /// Values behind the verdicts, per cell.
+    pub layers: Vec<MapLayer>,
+    /// The case's own entries (SI): where it sits on the map.
+    pub current: (f64, f64),
+}
+
+impl Map {
+    /// The cell index of column `ix` and row `iy`.
+    pub fn index(&self, ix: usize, iy: usize) -> usize {
+        iy * self.x.values.len() + ix
+    }
+}
