@@ -167,8 +167,9 @@ fn eval<const N: usize, F: FnMut(f64, &[f64; N]) -> Option<[f64; N]>>(f: &mut F,
 /// cannot evaluate (reported as [`OdeError::NotFinite`]).
 ///
 /// Step-size control: h_new = h · min(5, max(0.2, 0.9 · err^(−1/5))), the standard controller of
-/// Hairer, Nørsett & Wanner (1993), §II.4; initial step from their starting-step algorithm in
-/// simplified form (h₀ = 0.01 · ‖y₀‖/‖f₀‖, capped by the interval).
+/// Hairer, Nørsett & Wanner (1993), §II.4; initial step from their starting-step algorithm
+/// (h₀ = 0.01 · ‖y₀‖/‖f₀‖, then h₁ = (0.01 / max(‖f₀‖, ‖f′‖))^(1/5) with f′ estimated by one
+/// explicit Euler step of h₀, and h = h₁ capped by the interval).
 ///
 /// ```
 /// use clearbore::physics::ode::{dormand_prince, OdeTolerance};
@@ -307,9 +308,27 @@ where
     let norm = |v: &[f64; N], y: &[f64; N]| {
         (v.iter().enumerate().map(|(i, x)| (x / scale(y, i)).powi(2)).sum::<f64>() / N.max(1) as f64).sqrt()
     };
+    // Starting step (Hairer, Nørsett & Wanner 1993, §II.4, "Starting Step Size"): a first guess
+    // from ‖y₀‖/‖f₀‖, then one explicit Euler step to estimate the second derivative, and h₁ from
+    // both. Their min(100 h₀, h₁) is not applied: a state starting at zero (an integral
+    // accumulating from nothing) makes h₀ tiny, and the cap then costs a ramp-up of a dozen steps
+    // growing fivefold each; a first step too long is rejected by the error control instead.
     let d0 = norm(&y, &y);
     let d1 = norm(&k1, &y);
-    let mut h = if d0 > 1e-5 && d1 > 1e-5 { 0.01 * d0 / d1 } else { 1e-6 * span };
+    let h0 = (if d0 > 1e-5 && d1 > 1e-5 { 0.01 * d0 / d1 } else { 1e-6 * span }).clamp(min_step, span);
+    let mut h = match f(t + h0, &combine(&y, h0, &[(1.0, &k1)])) {
+        Some(f1) if f1.iter().all(|v| v.is_finite()) => {
+            let mut diff = f1;
+            for (d, k) in diff.iter_mut().zip(&k1) {
+                *d -= k;
+            }
+            let d2 = norm(&diff, &y) / h0;
+            let h1 = if d1.max(d2) <= 1e-15 { (h0 * 1e-3).max(1e-6 * span) } else { (0.01 / d1.max(d2)).powf(0.2) };
+            h1
+        }
+        // The Euler trial left the states the right-hand side accepts: keep the first guess.
+        _ => h0,
+    };
     h = h.clamp(min_step, span);
     let mut sol = OdeSolution { t: vec![t], y: vec![y], accepted: 0, rejected: 0 };
     let mut steps = 0u32;
