@@ -424,11 +424,14 @@ fn reynolds_tables_stay_within_their_bound_over_the_whole_range_and_polish_to_th
     for model in [SettlingModel::SchillerNaumann, SettlingModel::HaiderLevenspielSphere] {
         let t = table::table(model).unwrap_or_else(|| panic!("{model:?} has no table"));
         let mut worst: f64 = 0.0;
+        let mut previous = 0.0;
         let n = 4000;
         for i in 0..=n {
             let ar = AR_MIN * (AR_MAX / AR_MIN).powf((i as f64 + 0.37) / (n as f64 + 1.0));
             let full = table::solve_reynolds(model, ar).unwrap();
             let tabulated = t.reynolds(ar).unwrap();
+            assert!(tabulated > previous, "{model:?}: Re_t must rise with Ar (Ar {ar})");
+            previous = tabulated;
             worst = worst.max((tabulated / full - 1.0).abs());
             if let Some(polished) = table::reynolds(model, ar) {
                 assert!((polished / full - 1.0).abs() < 1e-10, "{model:?} Ar {ar}: {polished} vs {full}");
