@@ -63,6 +63,13 @@ build() {
   rm -rf target/web && mkdir -p target/web dist
   wasm-bindgen --target web --no-typescript --out-dir target/web \
     target/wasm32-unknown-unknown/release/clearbore.wasm
+  # Debian's binaryen (apt-get install binaryen) optimises the wasm further for speed when present;
+  # its version 108 needs --all-features to accept the features rustc emits.
+  if command -v wasm-opt >/dev/null; then
+    say "wasm-opt -O3 ($(wasm-opt --version))"
+    wasm-opt -O3 --all-features target/web/clearbore_bg.wasm -o target/web/clearbore_bg.opt.wasm
+    mv target/web/clearbore_bg.opt.wasm target/web/clearbore_bg.wasm
+  fi
   python3 - <<'PY'
 # Inline the CSS, the JS glue and the wasm (gzip, then base64) into one self-contained HTML file.
 import base64, gzip, pathlib
