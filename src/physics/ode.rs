@@ -323,8 +323,7 @@ where
                 *d -= k;
             }
             let d2 = norm(&diff, &y) / h0;
-            let h1 = if d1.max(d2) <= 1e-15 { (h0 * 1e-3).max(1e-6 * span) } else { (0.01 / d1.max(d2)).powf(0.2) };
-            h1
+            if d1.max(d2) <= 1e-15 { (h0 * 1e-3).max(1e-6 * span) } else { (0.01 / d1.max(d2)).powf(0.2) }
         }
         // The Euler trial left the states the right-hand side accepts: keep the first guess.
         _ => h0,

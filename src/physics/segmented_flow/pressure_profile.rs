@@ -286,6 +286,15 @@ impl Profile {
     }
 }
 
+/// One integration of the coil: the state at the inlet end, and the recorded states and their
+/// distances from the outlet (empty unless recorded). State: absolute pressure, Pa; dry gas flow,
+/// mol/s; residence time, s.
+struct March {
+    last: [f64; 3],
+    states: Vec<[f64; 3]>,
+    xs: Vec<f64>,
+}
+
 impl Coil {
     /// Gas flow at distance `x` upstream of the outlet, mol/s.
     fn gas_at(&self, x: f64) -> f64 {
@@ -329,7 +338,7 @@ impl Coil {
     /// Integrates from the outlet to the inlet at bubble frequency `frequency`; with `record`,
     /// also the states at the ends of the [`SEGMENTS`] equal segments (outlet first), read from
     /// the integrator's dense output of the same integration.
-    fn march(&self, frequency: f64, record: bool) -> Result<([f64; 3], Vec<[f64; 3]>, Vec<f64>), SegmentedFlowError> {
+    fn march(&self, frequency: f64, record: bool) -> Result<March, SegmentedFlowError> {
         let l = self.length.si();
         let rate = self.consumption.si() / l;
         let rhs = |x: f64, y: &[f64; 3]| -> Option<[f64; 3]> {
@@ -346,7 +355,7 @@ impl Coil {
         let xs: Vec<f64> = if record { (0..=SEGMENTS).map(|i| if i == SEGMENTS { l } else { l * i as f64 / SEGMENTS as f64 }).collect() } else { Vec::new() };
         let (sol, states) = dormand_prince_dense(rhs, 0.0, l, y, tol, &xs)?;
         let last = *sol.last().ok_or(SegmentedFlowError::Profile(crate::physics::ode::OdeError::InvalidInitialState))?;
-        Ok((last, states, xs))
+        Ok(March { last, states, xs })
     }
 
     /// The fixed point on the inlet pressure, started from `guess` (Pa absolute; the outlet
@@ -364,8 +373,7 @@ impl Coil {
         let mut iterations = 0;
         loop {
             iterations += 1;
-            let (last, _, _) = self.march(frequency, false)?;
-            let next = last[0];
+            let next = self.march(frequency, false)?.last[0];
             let settled = (next - p_in).abs() <= 1e-9 * next;
             p_in = next;
             frequency = self.junction_cell(p_in)?.frequency();
@@ -384,14 +392,13 @@ impl Coil {
     /// one reached from the outlet pressure.
     pub fn pressure_drop(&self, guess: Option<f64>) -> Result<f64, SegmentedFlowError> {
         let (frequency, _) = self.settle(guess)?;
-        let (last, _, _) = self.march(frequency, false)?;
-        Ok(last[0] - self.outlet_pressure.pascals())
+        Ok(self.march(frequency, false)?.last[0] - self.outlet_pressure.pascals())
     }
 
     /// Integrates the profile: fixed point on the inlet pressure, then the recorded march.
     pub fn profile(&self) -> Result<Profile, SegmentedFlowError> {
         let (frequency, iterations) = self.settle(None)?;
-        let (last, states, xs) = self.march(frequency, true)?;
+        let March { last, states, xs } = self.march(frequency, true)?;
         let l = self.length.si();
         let mut profile = Profile {
             position: Vec::new(),
