@@ -64,13 +64,9 @@ build() {
   rm -rf target/web && mkdir -p target/web dist
   wasm-bindgen --target web --no-typescript --out-dir target/web \
     target/wasm32-unknown-unknown/release/clearbore.wasm
-  # Debian's binaryen (apt-get install binaryen) optimises the wasm further for speed when present;
-  # its version 108 needs --all-features to accept the features rustc emits.
-  if command -v wasm-opt >/dev/null; then
-    say "wasm-opt -O3 ($(wasm-opt --version))"
-    wasm-opt -O3 --all-features target/web/clearbore_bg.wasm -o target/web/clearbore_bg.opt.wasm
-    mv target/web/clearbore_bg.opt.wasm target/web/clearbore_bg.wasm
-  fi
+  # No wasm-opt: Debian's binaryen 108 (wasm-opt -O3, with --all-features or with only the
+  # features rustc emits) rewrites the externref table that wasm-bindgen's glue fills, and the
+  # page then fails to start ("WebAssembly.Table.set(): function-typed object must be null").
   python3 - <<'PY'
 # Inline the CSS, the JS glue and the wasm (gzip, then base64) into one self-contained HTML file.
 import base64, gzip, pathlib
@@ -127,9 +123,9 @@ case "${1:-}" in
     say "page budgets and the sweep in wasm (headless Chromium)"
     status=0
     CLEARBORE_WASM_SWEEP_OUT="$PWD/target/sweep-wasm.json" cargo test --features e2e --test page_budget || status=1
-    say "native timings and the sweep against fluids (release)"
+    say "native timings and the sweep against fluids (bench profile: release at opt-level 3)"
     CLEARBORE_WASM_SWEEP_OUT="$PWD/target/sweep-wasm.json" CLEARBORE_FLUIDS_PYTHON="$PWD/target/bench-venv/bin/python" \
-      cargo test --release --test sweep_bench || status=1
+      cargo test --profile bench --test sweep_bench || status=1
     exit "$status"
     ;;
   *)

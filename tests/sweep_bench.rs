@@ -1,7 +1,8 @@
 //! Speed benchmark, measured (not asserted as a test): the native time of every calculator's demo
 //! case, and the sweep of `clearbore::sweep` natively, in wasm (the figure the page benchmark
 //! wrote) and in Python `fluids` 1.3.1, with the ratios and the agreement of the values.
-//! `./task.sh bench` runs it in release after the page benchmark; figures go in the README.
+//! `./task.sh bench` runs it (`cargo test --profile bench`: release at opt-level 3) after the page
+//! benchmark; figures go in the README.
 //! It exits 1 only if the values disagree with `fluids` or with the wasm run.
 #![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
 
@@ -37,7 +38,7 @@ fn rel(a: f64, b: f64) -> f64 {
 
 fn main() {
     let mut ok = true;
-    let profile = if cfg!(debug_assertions) { "DEBUG build: not representative, use --release" } else { "release" };
+    let profile = if cfg!(debug_assertions) { "DEBUG build: not representative, use --profile bench" } else { "optimised build" };
     println!("Clearbore speed benchmark (native, {profile}; this machine)");
     println!("  evaluate, demo case of each tab (200 runs):");
     for c in Calculator::ALL {
