@@ -10,7 +10,7 @@ use crate::physics::report::NumericalError;
 use crate::physics::settling::Particle;
 use crate::physics::settling::drag::{SOLVE_FAILURE, SettlingModel};
 use crate::physics::settling::table;
-use crate::physics::units::{Density, DynamicViscosity, Fraction, Length, Temperature, Velocity};
+use crate::physics::units::{Density, DynamicViscosity, Fraction, Length, STANDARD_GRAVITY, Temperature, Velocity};
 
 /// Particle sizes on the grid, log-spaced from [`SMALLEST`] to [`LARGEST`].
 pub const SIZES: usize = 256;
@@ -74,8 +74,14 @@ pub fn cell(d: f64, rho_p: f64, rho: Density, mu: DynamicViscosity) -> Result<(f
         Some(re) => re * mu.si() / (rho.si() * d),
         None => MODEL.terminal_velocity(&p).map_err(|_| SOLVE_FAILURE)?.si(),
     };
+    Ok((v, ergun_gradient(d, rho, mu)))
+}
+
+/// Ergun pressure gradient, Pa/m, of a bed of particles of diameter `d` (m) at the sweep's
+/// voidage and superficial velocity.
+pub fn ergun_gradient(d: f64, rho: Density, mu: DynamicViscosity) -> f64 {
     let bed = BedFlow {
-        particle_diameter: diameter,
+        particle_diameter: Length::from_si(d),
         voidage: Fraction::from_si(VOIDAGE),
         superficial_velocity: Velocity::from_si(SUPERFICIAL_VELOCITY),
         density: rho,
@@ -83,16 +89,26 @@ pub fn cell(d: f64, rho_p: f64, rho: Density, mu: DynamicViscosity) -> Result<(f
         length: Length::from_si(1.0),
         tube_diameter: Length::from_si(1.0),
     };
-    Ok((v, ergun::pressure_drop(&bed).si()))
+    ergun::pressure_drop(&bed).si()
 }
 
-/// Runs the sweep in a liquid of density `rho` and viscosity `mu`.
+/// Runs the sweep in a liquid of density `rho` and viscosity `mu`: every cell as [`cell`]
+/// computes it, with ln Ar = ln(ρ g / μ²) + 3 ln d + ln |ρ_p − ρ| summed from a row's and a
+/// column's logarithms instead of taken per cell (the same Ar to rounding; tested).
 pub fn run(rho: Density, mu: DynamicViscosity) -> Result<Sweep, NumericalError> {
     let mut sweep = Sweep { terminal_velocity: Vec::with_capacity(SIZES * DENSITIES), ergun_gradient: Vec::with_capacity(SIZES * DENSITIES) };
+    let tab = table::table(MODEL);
+    let ln_k = (rho.si() * STANDARD_GRAVITY / (mu.si() * mu.si())).ln();
+    let ln_drho: Vec<f64> = (0..DENSITIES).map(|j| (particle_density(j) - rho.si()).abs().ln()).collect();
     for i in 0..SIZES {
         let d = diameter(i);
-        for j in 0..DENSITIES {
-            let (v, dpdz) = cell(d, particle_density(j), rho, mu)?;
+        let ln_row = ln_k + 3.0 * d.ln();
+        let scale = mu.si() / (rho.si() * d);
+        for (j, ln_c) in ln_drho.iter().enumerate() {
+            let (v, dpdz) = match tab.and_then(|t| t.reynolds_at_ln(ln_row + ln_c)) {
+                Some(re) => (re * scale, ergun_gradient(d, rho, mu)),
+                None => cell(d, particle_density(j), rho, mu)?,
+            };
             sweep.terminal_velocity.push(v);
             sweep.ergun_gradient.push(dpdz);
         }

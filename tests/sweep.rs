@@ -65,6 +65,10 @@ fn every_cell_stays_within_the_table_bound_of_the_full_solve() {
             };
             let full = MODEL.terminal_velocity(&p).unwrap().si();
             let v = s.terminal_velocity[i * sweep::DENSITIES + j];
+            // The grid sums row and column logarithms for ln Ar; the single cell takes ln Ar.
+            let (v_cell, dpdz_cell) = sweep::cell(sweep::diameter(i), sweep::particle_density(j), rho, mu).unwrap();
+            assert!(rel(v, v_cell) < 1e-12, "cell ({i}, {j}): {v} vs {v_cell}");
+            assert_eq!(s.ergun_gradient[i * sweep::DENSITIES + j], dpdz_cell);
             // The full solve (table + secant step, or Brent) is itself within 1e-12 of the root.
             assert!(rel(v, full) < TABLE_BOUND + 1e-12, "cell ({i}, {j}): {v} vs {full}");
         }

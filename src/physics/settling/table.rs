@@ -86,8 +86,17 @@ impl Table {
         if !(AR_MIN..=AR_MAX).contains(&ar) {
             return None;
         }
+        self.reynolds_at_ln(ar.ln())
+    }
+
+    /// Interpolated Re_t at ln Ar = `ln_ar` (for grids, where ln Ar is a sum of a row's and a
+    /// column's logarithms); `None` outside the table.
+    pub fn reynolds_at_ln(&self, ln_ar: f64) -> Option<f64> {
+        if !(ln_ar >= ln_ar_min() && ln_ar <= AR_MAX.ln()) {
+            return None;
+        }
         let h = step();
-        let s = (ar.ln() - ln_ar_min()) / h;
+        let s = (ln_ar - ln_ar_min()) / h;
         let i = (s.floor() as usize).min(self.ln_re.len() - 2);
         let t = s - i as f64;
         let (y0, y1, d0, d1) = (self.ln_re[i], self.ln_re[i + 1], self.slope[i] * h, self.slope[i + 1] * h);
