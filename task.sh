@@ -3,7 +3,8 @@
 #   ./task.sh app    build dist/clearbore.html and serve dist/ on http://127.0.0.1:${CLEARBORE_PORT:-8765}
 #   ./task.sh test   every test: lints, native tests (physics, CLI), browser end-to-end tests
 #   ./task.sh build  build dist/clearbore.html only
-#   ./task.sh bench  measure the page budgets (size, load time, recompute time) in headless Chromium
+#   ./task.sh bench  measure the page budgets (size, load time, edit time on every tab) in headless Chromium,
+#                    and the settling/Ergun sweep natively, in wasm and in Python fluids
 set -euo pipefail
 cd "$(dirname "$0")"
 
@@ -63,6 +64,9 @@ build() {
   rm -rf target/web && mkdir -p target/web dist
   wasm-bindgen --target web --no-typescript --out-dir target/web \
     target/wasm32-unknown-unknown/release/clearbore.wasm
+  # No wasm-opt: Debian's binaryen 108 (wasm-opt -O3, with --all-features or with only the
+  # features rustc emits) rewrites the externref table that wasm-bindgen's glue fills, and the
+  # page then fails to start ("WebAssembly.Table.set(): function-typed object must be null").
   python3 - <<'PY'
 # Inline the CSS, the JS glue and the wasm (gzip, then base64) into one self-contained HTML file.
 import base64, gzip, pathlib
@@ -111,10 +115,21 @@ case "${1:-}" in
   bench)
     setup_browser
     build
-    cargo test --features e2e --test page_budget
+    if [ ! -x target/bench-venv/bin/python ] || ! target/bench-venv/bin/python -c 'import fluids' 2>/dev/null; then
+      say "installing Python fluids 1.3.1 into target/bench-venv (for the sweep's comparison)"
+      python3 -m venv target/bench-venv
+      target/bench-venv/bin/pip install -q fluids==1.3.1
+    fi
+    say "page budgets and the sweep in wasm (headless Chromium)"
+    status=0
+    CLEARBORE_WASM_SWEEP_OUT="$PWD/target/sweep-wasm.json" cargo test --features e2e --test page_budget || status=1
+    say "native timings and the sweep against fluids (bench profile: release at opt-level 3)"
+    CLEARBORE_WASM_SWEEP_OUT="$PWD/target/sweep-wasm.json" CLEARBORE_FLUIDS_PYTHON="$PWD/target/bench-venv/bin/python" \
+      cargo test --profile bench --test sweep_bench || status=1
+    exit "$status"
     ;;
   *)
-    sed -n '2,7p' "$0"
+    sed -n '2,8p' "$0"
     exit 2
     ;;
 esac

@@ -688,3 +688,22 @@ fn total_holdup_is_dynamic_plus_static() {
     let wammes_dynamic = dynamic.estimates.iter().find(|e| e.model.name.starts_with("Wammes")).unwrap().value.get();
     assert!((wammes_total - (wammes_dynamic + fixed)).abs() < 1e-15);
 }
+
+#[test]
+fn chart_points_stay_within_their_stated_bound_of_the_tight_integration() {
+    // The chart integrates at CHART_TOLERANCE (relative 1e-7 per step): each point's friction
+    // drop must stay within 1e-6 of the tight integration, over the chart's two decades of gas
+    // flow, for every correlation.
+    let case = CaseFile::from_json(Calculator::GasLiquidBed.demo_json()).unwrap();
+    let input = GasLiquidBedInput::from_source(&EntrySource(&case.inputs)).unwrap();
+    let a = assess(&input).unwrap();
+    for factor in [0.1, 0.3, 1.0, 3.0, 10.0] {
+        let mut cond = a.conditions;
+        cond.gas_feed = MolarFlow::from_si(a.conditions.gas_feed.si() * factor);
+        for model in TwoPhaseModel::ALL {
+            let tight = profile::integrate(&cond, model).unwrap().friction_drop;
+            let chart = profile::chart_friction_drop(&cond, model).unwrap();
+            assert!(rel(chart, tight) < 1e-6, "{model:?} at {factor}× the gas: {chart} vs {tight}");
+        }
+    }
+}

@@ -7,12 +7,80 @@ mod support;
 
 use std::process::{Command, Stdio};
 
+use clearbore::case::Calculator;
+use serde_json::Value;
 use support::{Browser, page_path};
 
-const SIZE_BUDGET: usize = 1_000_000;
-const GZIP_BUDGET: usize = 400_000;
+// Raised from 1 MB / 400 KB for issue 14 (speed over size for the physics; see README, Budgets).
+const SIZE_BUDGET: usize = 2_000_000;
+const GZIP_BUDGET: usize = 800_000;
 const LOAD_BUDGET_MS: f64 = 300.0;
 const EDIT_BUDGET_MS: f64 = 16.0;
+/// The goal on this machine, leaving margin for slower ones (issue 14).
+const EDIT_TARGET_MS: f64 = 8.0;
+const FLOW_EDITS: u32 = 60;
+const FIELD_EDITS: u32 = 10;
+
+/// The field each tab's main edit goes to: the liquid flow.
+fn flow_field(c: Calculator) -> &'static str {
+    match c {
+        Calculator::TubularReactor | Calculator::PackedBed | Calculator::SlurryLine => "flow",
+        Calculator::SegmentedFlow | Calculator::GasLiquidBed => "liquid_flow",
+    }
+}
+
+fn sorted_times(v: &Value) -> Vec<f64> {
+    let mut t: Vec<f64> = v.as_array().unwrap().iter().map(|x| x.as_f64().unwrap()).collect();
+    t.sort_by(f64::total_cmp);
+    t
+}
+
+/// Arguments: tab key, flow field key, flow edits, edits per other field. Returns the times, ms.
+const EDIT_SCRIPT: &str = r#"const [tab, flowKey, flowEdits, fieldEdits, done] = arguments;
+const panel = document.querySelector(`[data-testid=panel-${tab}]`);
+const summary = panel.querySelector('[data-testid=summary]');
+const nextTask = () => new Promise(r => { const c = new MessageChannel(); c.port1.onmessage = () => r(); c.port2.postMessage(0); });
+const edit = async (input, value) => {
+  input.value = String(value);
+  const t0 = performance.now();
+  input.dispatchEvent(new Event('input', { bubbles: true }));
+  await nextTask();
+  return performance.now() - t0;
+};
+(async () => {
+  await nextTask();
+  const visible = [...panel.querySelectorAll('input[data-testid^=input-]')].filter(i => i.offsetParent !== null && i.type !== 'checkbox');
+  const flow = panel.querySelector(`[data-testid=input-${flowKey}]`);
+  const original = flow.value;
+  const base = parseFloat(original);
+  const times = [];
+  let unchanged = 0;
+  for (let i = 0; i < flowEdits; i++) {
+    const before = summary.textContent;
+    times.push(await edit(flow, base * (1 + 0.002 * (i + 1))));
+    if (summary.textContent === before) unchanged++;
+  }
+  await edit(flow, original);
+  const fields = {};
+  for (const input of visible) {
+    const key = input.dataset.testid.slice('input-'.length);
+    const v = parseFloat(input.value);
+    if (input === flow || !(Number.isFinite(v) && v !== 0 && String(v) === input.value.trim())) continue;
+    const t = [];
+    for (let i = 0; i < fieldEdits; i++) t.push(await edit(input, v * (1 - 0.001 * (i + 1))));
+    await edit(input, v);
+    fields[key] = t;
+  }
+  done({ flow: times, unchanged, fields });
+})();"#;
+
+/// Runs the page's sweep benchmark (if the page has one) a few times; returns the best time.
+const SWEEP_SCRIPT: &str = r#"const done = arguments[arguments.length - 1];
+if (typeof window.__clearboreSweep !== 'function') { done({}); } else {
+  const runs = 5; let best = Infinity; let out = null;
+  for (let i = 0; i < runs; i++) { out = window.__clearboreSweep(); best = Math.min(best, out.ms); }
+  done({ ms: best, runs, checksum: out.checksum });
+}"#;
 
 fn percentile(sorted: &[f64], p: f64) -> f64 {
     let i = ((sorted.len() as f64 - 1.0) * p).round() as usize;
@@ -44,48 +112,65 @@ async fn main() {
     loads.remove(0);
     loads.sort_by(f64::total_cmp);
 
-    // Editing: set the flow field, dispatch the input event, wait one task (the reactive update
-    // runs as a microtask) and confirm the residence time changed. 200 edits.
-    let edits = b
-        .client
-        .execute_async(
-            r#"const done = arguments[arguments.length - 1];
-            const input = document.querySelector('[data-testid=input-flow]');
-            const out = document.querySelector('[data-testid=result-residence_time]');
-            const nextTask = () => new Promise(r => { const c = new MessageChannel(); c.port1.onmessage = () => r(); c.port2.postMessage(0); });
-            (async () => {
-              const times = [];
-              let unchanged = 0;
-              for (let i = 0; i < 200; i++) {
-                const before = out.textContent;
-                input.value = String(0.5 + 0.01 * (i + 1));
-                const t0 = performance.now();
-                input.dispatchEvent(new Event('input', { bubbles: true }));
-                await nextTask();
-                times.push(performance.now() - t0);
-                if (out.textContent === before) unchanged++;
-              }
-              done({ times, unchanged });
-            })();"#,
-            vec![],
-        )
-        .await
-        .unwrap();
-    let unchanged = edits["unchanged"].as_u64().unwrap();
-    let mut times: Vec<f64> = edits["times"].as_array().unwrap().iter().map(|v| v.as_f64().unwrap()).collect();
-    times.sort_by(f64::total_cmp);
+    // Editing, on every tab: set a field, dispatch the input event, wait one task (the reactive
+    // update and the effects that draw the charts run before it) and time it. The flow field gets
+    // FLOW_EDITS edits, each of which must change the answer summary; every other visible number
+    // field FIELD_EDITS edits within 1 % below its demo value (any field may be the heaviest).
+    let mut tabs = Vec::new();
+    for calculator in Calculator::ALL {
+        b.click(&format!("[data-testid=tab-{}]", calculator.key())).await;
+        let result = b
+            .client
+            .execute_async(EDIT_SCRIPT, vec![Value::from(calculator.key()), Value::from(flow_field(calculator)), Value::from(FLOW_EDITS), Value::from(FIELD_EDITS)])
+            .await
+            .unwrap();
+        tabs.push((calculator, result));
+    }
+    let sweep = b.client.execute_async(SWEEP_SCRIPT, vec![]).await.unwrap();
     b.close().await;
 
     let load_p50 = percentile(&loads, 0.5);
     let load_max = percentile(&loads, 1.0);
-    let edit_p50 = percentile(&times, 0.5);
-    let edit_p95 = percentile(&times, 0.95);
     println!("Clearbore page budget (headless Chromium, this machine)");
     println!("  single file      {:>9} bytes   budget {SIZE_BUDGET}   {}", bytes.len(), verdict(bytes.len() <= SIZE_BUDGET));
     println!("  gzip -9          {:>9} bytes   budget {GZIP_BUDGET}   {}", gz, verdict(gz <= GZIP_BUDGET));
     println!("  open→interactive {load_p50:>9.1} ms median, {load_max:.1} ms max of 10   budget {LOAD_BUDGET_MS} ms   {}", verdict(load_max < LOAD_BUDGET_MS));
-    println!("  edit→updated     {edit_p50:>9.2} ms median, {edit_p95:.2} ms p95 of 200   budget {EDIT_BUDGET_MS} ms   {}", verdict(edit_p95 < EDIT_BUDGET_MS));
-    println!("  edits that left the result unchanged: {unchanged} (must be 0)");
-    let ok = bytes.len() <= SIZE_BUDGET && gz <= GZIP_BUDGET && load_max < LOAD_BUDGET_MS && edit_p95 < EDIT_BUDGET_MS && unchanged == 0;
+    println!("  edit→updated, per tab (budget {EDIT_BUDGET_MS} ms p95, target {EDIT_TARGET_MS} ms):");
+    let mut ok = bytes.len() <= SIZE_BUDGET && gz <= GZIP_BUDGET && load_max < LOAD_BUDGET_MS;
+    for (calculator, result) in &tabs {
+        let flow = sorted_times(&result["flow"]);
+        let unchanged = result["unchanged"].as_u64().unwrap();
+        let (p50, p95) = (percentile(&flow, 0.5), percentile(&flow, 0.95));
+        let mut heaviest = ("", 0.0, 0);
+        for (field, times) in result["fields"].as_object().unwrap() {
+            let t = sorted_times(times);
+            let p = percentile(&t, 0.95);
+            if p > heaviest.1 {
+                heaviest = (field.as_str(), p, t.len());
+            }
+        }
+        let fields = result["fields"].as_object().unwrap().len();
+        println!(
+            "    {:<22} {:<13} {p50:>6.2} ms median, {p95:>6.2} ms p95 of {}   heaviest of {fields} fields: {:<24} {:>6.2} ms p95 of {}   {}",
+            calculator.title(),
+            flow_field(*calculator),
+            flow.len(),
+            heaviest.0,
+            heaviest.1,
+            heaviest.2,
+            verdict(p95.max(heaviest.1) < EDIT_BUDGET_MS)
+        );
+        if unchanged > 0 {
+            println!("      {unchanged} flow edits left the summary unchanged (must be 0)");
+        }
+        ok &= p95.max(heaviest.1) < EDIT_BUDGET_MS && unchanged == 0;
+    }
+    match sweep.get("ms") {
+        Some(ms) => println!("  sweep in wasm (256 × 256 settling + Ergun): {:.1} ms best of {} runs", ms.as_f64().unwrap(), sweep["runs"]),
+        None => println!("  sweep in wasm: the page has no window.__clearboreSweep"),
+    }
+    if let Some(path) = std::env::var_os("CLEARBORE_WASM_SWEEP_OUT") {
+        std::fs::write(path, sweep.to_string()).unwrap();
+    }
     std::process::exit(if ok { 0 } else { 1 });
 }

@@ -377,6 +377,35 @@ fn pressure_drop_rises_with_flow_for_every_model() {
     }
 }
 
+#[test]
+fn pressure_drop_alone_matches_the_profile_for_every_model_and_start() {
+    // The spread runs the fixed point without the series, started from the recommended model's
+    // inlet pressure: it must land on the profile's pressure drop within the fixed point's own
+    // tolerance (1e-9 of the inlet pressure), here checked at 1e-8 of the drop.
+    let base = coil(2.0, 3.0, GasExpansion::Isothermal);
+    let guess = base.profile().unwrap().inlet_pressure;
+    for m in PressureDropModel::ALL {
+        let c = Coil { pressure_model: m, ..base };
+        let full = c.profile().unwrap().pressure_drop();
+        for start in [None, Some(guess), Some(2.0 * guess)] {
+            let alone = c.pressure_drop(start).unwrap();
+            assert!(rel(alone, full) < 1e-8, "{m:?} from {start:?}: {alone} vs {full}");
+        }
+    }
+}
+
+#[test]
+fn profile_series_end_at_the_integrated_ends_and_run_monotone() {
+    // The series come from the dense output of the integration that gives the inlet pressure.
+    let p = coil(2.0, 3.0, GasExpansion::Isothermal).profile().unwrap();
+    assert_eq!(p.position.len(), sf::pressure_profile::SEGMENTS + 1);
+    assert_eq!(p.pressure[0], p.inlet_pressure);
+    assert_eq!(*p.pressure.last().unwrap(), p.outlet_pressure);
+    assert_eq!(p.position[0], 0.0);
+    assert_eq!(*p.position.last().unwrap(), 2.0);
+    assert!(p.pressure.windows(2).all(|w| w[0] > w[1]), "pressure falls towards the outlet");
+}
+
 // ------------------------------------------------------------- the calculator
 
 

@@ -413,3 +413,35 @@ fn spread_warns_when_stokes_is_near_its_edge_and_drops_it_beyond() {
     let beyond = terminal_velocity_spread(&particle(100e-6, 2600.0, 1000.0, 1e-3, 1.0), "v", "v").unwrap();
     assert!(beyond.estimates.iter().all(|e| e.model.name != "Stokes"));
 }
+
+#[test]
+fn reynolds_tables_stay_within_their_bound_over_the_whole_range_and_polish_to_the_full_solve() {
+    use clearbore::physics::settling::table::{self, AR_MAX, AR_MIN, POLISHED_RESIDUAL, TABLE_BOUND};
+    // 4001 points log-spaced over the whole table, off the nodes (the table's own nodes are 32
+    // per decade; these are 20 per decade with an offset): the interpolated Re_t against the full
+    // solve, then the polished value against the full solve.
+    assert!(table::table(SettlingModel::CliftGraceWeber).is_none() && table::table(SettlingModel::Barati).is_none(), "full solve only");
+    for model in [SettlingModel::SchillerNaumann, SettlingModel::HaiderLevenspielSphere] {
+        let t = table::table(model).unwrap_or_else(|| panic!("{model:?} has no table"));
+        let mut worst: f64 = 0.0;
+        let mut previous = 0.0;
+        let n = 4000;
+        for i in 0..=n {
+            let ar = AR_MIN * (AR_MAX / AR_MIN).powf((i as f64 + 0.37) / (n as f64 + 1.0));
+            let full = table::solve_reynolds(model, ar).unwrap();
+            let tabulated = t.reynolds(ar).unwrap();
+            assert!(tabulated > previous, "{model:?}: Re_t must rise with Ar (Ar {ar})");
+            previous = tabulated;
+            worst = worst.max((tabulated / full - 1.0).abs());
+            if let Some(polished) = table::reynolds(model, ar) {
+                assert!((polished / full - 1.0).abs() < 1e-10, "{model:?} Ar {ar}: {polished} vs {full}");
+                let cd = model.drag_coefficient(polished, 1.0).unwrap();
+                assert!((cd * polished * polished / (4.0 * ar / 3.0) - 1.0).abs() <= POLISHED_RESIDUAL);
+            }
+        }
+        assert!(worst < TABLE_BOUND, "{model:?}: worst table error {worst}");
+        println!("{model:?}: worst relative table error {worst:.2e}");
+        // Outside the table the full solve runs.
+        assert!(t.reynolds(AR_MAX * 10.0).is_none() && table::reynolds(model, AR_MIN / 10.0).is_none());
+    }
+}

@@ -348,7 +348,9 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
     let errors = Memo::new(move |_| outcome.with(|o| o.errors.clone()));
     provide_context(FieldErrors(errors));
     provide_context(ElementFieldsShown(Memo::new(move |_| outcome.with(|o| o.element_keys.clone()))));
-    let report = Signal::derive(move || outcome.with(|o| o.report.clone()));
+    // One copy of the report per change, which every view borrows (a derived signal would copy the
+    // whole report for each of the many views that read it).
+    let report: Signal<Option<Report>> = Memo::new(move |_| outcome.with(|o| o.report.clone())).into();
     let applicable = Memo::new(move |_| outcome.with(|o| o.applicable.clone()));
     let calculator = form.calculator;
     // Errors at entries that are not on the page (the list of elements as a whole) are said in
@@ -545,10 +547,10 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                     {calculator.element_layout().map(|_| view! { <ElementList form=form.clone() /> })}
                 </form>
                 <div class="detail-area">
-                    <SlugView strip=Signal::derive(move || slugs.get()) />
+                    <SlugView strip=slugs.into() />
                     {move || line.with(Option::is_some).then(|| view! {
-                        <LineStrip line=Signal::derive(move || line.get()) selected=selected />
-                        <PartTable line=Signal::derive(move || line.get()) selected=selected />
+                        <LineStrip line=line.into() selected=selected />
+                        <PartTable line=line.into() selected=selected />
                         <section class="element-detail" data-testid="element-detail">
                             <h3>{move || line.with(|l| l.as_ref().and_then(|l| l.parts.get(selected.get()).map(|p| format!("Element {}: {}", selected.get() + 1, p.kind))).unwrap_or_default())}</h3>
                             {move || { selected.track(); view! { <CheckList report=report wanted=element_checks testid="element-checks" /> } }}

@@ -21,7 +21,8 @@ pub fn PlotList(report: Signal<Option<Report>>) -> impl IntoView {
     });
     view! {
         <For each=move || keys.get() key=|k| *k let:key>
-            <PlotView plot=Signal::derive(move || report.with(|r| r.as_ref().and_then(|r| r.plots.iter().find(|p| p.key == key).cloned()))) key=key />
+            // A memo: a chart whose data did not change is not drawn again.
+            <PlotView plot=Memo::new(move |_| report.with(|r| r.as_ref().and_then(|r| r.plots.iter().find(|p| p.key == key).cloned()))).into() key=key />
         </For>
     }
 }

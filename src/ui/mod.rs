@@ -35,7 +35,39 @@ pub(crate) fn scroll_to(id: String) {
 pub fn mount() {
     panic_banner::install();
     leptos::mount::mount_to_body(app::App);
+    expose_sweep();
     mark_ready();
+}
+
+/// Sets `window.__clearboreSweep`, which runs the speed benchmark's sweep ([`crate::sweep`]) and
+/// returns `{ ms, checksum, cells }` (or `{ error }`): `./task.sh bench` times the physics in wasm
+/// with it. It touches nothing on the page.
+fn expose_sweep() {
+    let Some(window) = web_sys::window() else { return };
+    let run = wasm_bindgen::closure::Closure::<dyn Fn() -> JsValue>::new(|| {
+        let out = js_sys::Object::new();
+        let performance = web_sys::window().and_then(|w| w.performance());
+        let now = || performance.as_ref().map(|p| p.now()).unwrap_or(f64::NAN);
+        let start = now();
+        let result = crate::sweep::water().map(|(rho, mu)| crate::sweep::run(rho, mu));
+        let ms = now() - start;
+        // Writing to a fresh plain object cannot fail.
+        let set = |key: &str, value: JsValue| {
+            let _ = js_sys::Reflect::set(&out, &JsValue::from_str(key), &value);
+        };
+        match result {
+            Some(Ok(sweep)) => {
+                set("ms", JsValue::from_f64(ms));
+                set("checksum", JsValue::from_f64(sweep.checksum()));
+                set("cells", JsValue::from_f64(sweep.terminal_velocity.len() as f64));
+            }
+            Some(Err(e)) => set("error", JsValue::from_str(&e.to_string())),
+            None => set("error", JsValue::from_str("no water properties at 25 °C")),
+        }
+        out.into()
+    });
+    // A failed property write only loses the benchmark hook.
+    let _ = js_sys::Reflect::set(&window, &JsValue::from_str("__clearboreSweep"), &run.into_js_value());
 }
 
 /// Sets `window.__clearboreReady` to `performance.now()` once mounted: the page-load budget reads it.

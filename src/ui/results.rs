@@ -47,6 +47,9 @@ pub fn ResultTable(report: Signal<Option<Report>>, #[prop(into)] keys: Signal<Ve
 fn ResultRow(key: &'static str, report: Signal<Option<Report>>) -> impl IntoView {
     let sig = use_display().sig;
     let figure = Memo::new(move |_| report.with(|r| r.as_ref().and_then(|r| r.figure(key)).cloned()));
+    // The details are rebuilt only when what they say changes (models, warnings), not on every
+    // new value: the numbers in them follow `figure` in place, and an open fold stays open.
+    let basis = Memo::new(move |_| figure.with(|f| f.as_ref().map(Basis::of)));
     let dimension = figure.with_untracked(|f| f.as_ref().map(|f| f.dimension)).unwrap_or(Dimension::Number);
     let label = figure.with_untracked(|f| f.as_ref().map(|f| f.label)).unwrap_or("");
     // The user's pick wins; until then the unit follows the value.
@@ -81,7 +84,7 @@ fn ResultRow(key: &'static str, report: Signal<Option<Report>>) -> impl IntoView
             <td class="value" data-testid=format!("result-{key}")>{value}</td>
             <td class="unit-cell">{unit_view}</td>
             <td class="basis">
-                {move || figure.get().map(|f| view! { <ModelDetails figure=f unit=Signal::derive(current_unit) /> })}
+                {move || basis.get().map(|b| view! { <ModelDetails basis=b figure=figure unit=Signal::derive(current_unit) /> })}
             </td>
         </tr>
     }
@@ -95,56 +98,92 @@ fn recalled_tag(model: &ModelInfo, testid: String) -> Option<impl IntoView + use
     })
 }
 
+/// What a figure's details say apart from its numbers.
+#[derive(Debug, Clone, PartialEq)]
+struct Basis {
+    key: &'static str,
+    /// Every estimate's model and whether it is the recommended one, in report order.
+    models: Vec<(ModelInfo, bool)>,
+    warnings: Vec<String>,
+    recommendation: &'static str,
+}
+
+impl Basis {
+    fn of(figure: &Figure) -> Basis {
+        Basis {
+            key: figure.key,
+            models: figure.estimates.iter().map(|e| (e.model, e.recommended)).collect(),
+            warnings: figure.estimates.iter().flat_map(|e| e.warnings.iter().map(warning_text)).collect(),
+            recommendation: figure.recommendation,
+        }
+    }
+
+    fn recommended(&self) -> Option<ModelInfo> {
+        self.models.iter().find(|(_, r)| *r).or(self.models.first()).map(|(m, _)| *m)
+    }
+}
+
 /// The model, formula, source and range warnings of a figure, folded away until asked for.
 #[component]
-fn ModelDetails(figure: Figure, unit: Signal<Unit>) -> impl IntoView {
-    let recommended = figure.estimates.iter().find(|e| e.recommended).or(figure.estimates.first()).cloned();
-    let warnings: Vec<String> = figure.estimates.iter().flat_map(|e| e.warnings.iter().map(warning_text)).collect();
-    let several = figure.estimates.len() > 1;
-    let tag = recommended.as_ref().and_then(|e| recalled_tag(&e.model, format!("recalled-{}", figure.key)));
+fn ModelDetails(basis: Basis, figure: Memo<Option<Figure>>, unit: Signal<Unit>) -> impl IntoView {
+    let recommended = basis.recommended();
+    let tag = recommended.as_ref().and_then(|m| recalled_tag(m, format!("recalled-{}", basis.key)));
+    let several = basis.models.len() > 1;
+    let warned = !basis.warnings.is_empty();
     view! {
         <details>
-            <summary>{recommended.as_ref().map(|e| e.model.name).unwrap_or("")}{tag}{(!warnings.is_empty()).then_some(" ⚠")}</summary>
-            {recommended.map(|e| view! {
-                <p class="formula">{e.model.formula}</p>
-                <p class="source">"Source: " {e.model.source}</p>
+            <summary>{recommended.map(|m| m.name).unwrap_or("")}{tag}{warned.then_some(" ⚠")}</summary>
+            {recommended.map(|m| view! {
+                <p class="formula">{m.formula}</p>
+                <p class="source">"Source: " {m.source}</p>
             })}
-            {several.then(|| view! { <ModelSpread figure=figure.clone() unit=unit /> })}
-            <ul class="warnings">{warnings.into_iter().map(|w| view! { <li>{w}</li> }).collect_view()}</ul>
+            {several.then(|| view! { <ModelSpread basis=basis.clone() figure=figure unit=unit /> })}
+            <ul class="warnings">{basis.warnings.into_iter().map(|w| view! { <li>{w}</li> }).collect_view()}</ul>
         </details>
     }
 }
 
-/// The value of every applicable correlation, the recommended one marked, and the spread.
+/// The value of every applicable correlation, the recommended one marked, and the spread; the
+/// values follow `figure` as it changes.
 #[component]
-pub fn ModelSpread(figure: Figure, unit: Signal<Unit>) -> impl IntoView {
+fn ModelSpread(basis: Basis, figure: Memo<Option<Figure>>, unit: Signal<Unit>) -> impl IntoView {
     let sig = use_display().sig;
-    let (lo, hi) = figure.spread();
-    let mid = figure.value.get();
-    let rel = if mid != 0.0 { 100.0 * (hi - lo) / mid.abs() } else { 0.0 };
-    let rows = figure.estimates.clone();
-    let key = figure.key;
+    let key = basis.key;
+    let spread = move || {
+        figure.with(|f| {
+            f.as_ref().map_or_else(String::new, |f| {
+                let (lo, hi) = f.spread();
+                let mid = f.value.get();
+                let rel = if mid != 0.0 { 100.0 * (hi - lo) / mid.abs() } else { 0.0 };
+                format!("{} %", format_significant(rel, 2))
+            })
+        })
+    };
     view! {
-        <table class="spread" data-testid=format!("spread-{}", figure.key)>
-            {rows
+        <table class="spread" data-testid=format!("spread-{key}")>
+            {basis
+                .models
                 .into_iter()
                 .enumerate()
-                .map(|(i, e)| {
-                    let tag = recalled_tag(&e.model, format!("recalled-{key}-{i}"));
+                .map(|(i, (model, recommended))| {
+                    let tag = recalled_tag(&model, format!("recalled-{key}-{i}"));
+                    let value = move || {
+                        figure.with(|f| f.as_ref().and_then(|f| f.estimates.get(i)).map(|e| shown(e.value.get(), unit.get(), sig.get())).unwrap_or_default())
+                    };
                     view! {
-                        <tr class:recommended=e.recommended>
-                            <td>{e.model.name}{tag}{e.recommended.then_some(" (recommended)")}</td>
-                            <td>{move || shown(e.value.get(), unit.get(), sig.get())}</td>
+                        <tr class:recommended=recommended>
+                            <td>{model.name}{tag}{recommended.then_some(" (recommended)")}</td>
+                            <td>{value}</td>
                         </tr>
                     }
                 })
                 .collect_view()}
             <tr>
                 <td>"Spread (max − min) / recommended"</td>
-                <td>{format!("{} %", format_significant(rel, 2))}</td>
+                <td>{spread}</td>
             </tr>
         </table>
-        <p class="help">{figure.recommendation}</p>
+        <p class="help">{basis.recommendation}</p>
     }
 }
 

@@ -30,8 +30,9 @@ pub fn pressure_drop_vs_gas_flow(input: &GasLiquidBedInput, a: &Assessment) -> R
         cond.gas_feed = ReferenceFlow { flow: VolumetricFlow::from_si(q), state: input.gas_flow.state }.molar_flow();
         let mut lo = f64::INFINITY;
         let mut hi = f64::NEG_INFINITY;
-        for model in TwoPhaseModel::ALL {
-            let dp = profile::integrate(&cond, model)?.friction_drop;
+        for (model, integrated) in TwoPhaseModel::ALL.into_iter().zip(&a.profiles) {
+            // The middle point is this case: its profiles are already integrated.
+            let dp = if cond == a.conditions { integrated.friction_drop } else { profile::chart_friction_drop(&cond, model)? };
             lo = lo.min(dp);
             hi = hi.max(dp);
             if model == RECOMMENDED {

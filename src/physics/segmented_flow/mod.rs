@@ -439,7 +439,7 @@ pub fn evaluate_with_profile(input: &SegmentedFlowInput) -> Result<SegmentedFlow
         let dp = if model == pressure_profile::RECOMMENDED {
             profile.pressure_drop()
         } else {
-            Coil { pressure_model: model, ..coil }.profile()?.pressure_drop()
+            Coil { pressure_model: model, ..coil }.pressure_drop(Some(profile.inlet_pressure))?
         };
         let mut warnings = model.warnings(&outlet);
         for w in model.warnings(&junction) {

@@ -32,7 +32,7 @@ use super::separated_flow;
 use crate::physics::fluids::Liquid;
 use crate::physics::gases::MolarFlow;
 use crate::physics::gases::reference_state::{GAS_CONSTANT, ideal_gas_density};
-use crate::physics::ode::{OdeTolerance, dormand_prince};
+use crate::physics::ode::{OdeTolerance, dormand_prince_dense};
 use crate::physics::report::{ModelInfo, RangeWarning, ValidityBound};
 use crate::physics::units::{Density, Dimension, DynamicViscosity, Length, MolarMass, Pressure, Temperature, VolumetricFlow};
 
@@ -286,6 +286,15 @@ impl Profile {
     }
 }
 
+/// One integration of the coil: the state at the inlet end, and the recorded states and their
+/// distances from the outlet (empty unless recorded). State: absolute pressure, Pa; dry gas flow,
+/// mol/s; residence time, s.
+struct March {
+    last: [f64; 3],
+    states: Vec<[f64; 3]>,
+    xs: Vec<f64>,
+}
+
 impl Coil {
     /// Gas flow at distance `x` upstream of the outlet, mol/s.
     fn gas_at(&self, x: f64) -> f64 {
@@ -326,7 +335,10 @@ impl Coil {
         UnitCell::at_junction(self.flow_at(p_in, self.gas_feed.si()), self.length_model)
     }
 
-    fn march(&self, frequency: f64, record: bool) -> Result<(Vec<[f64; 3]>, Vec<f64>), SegmentedFlowError> {
+    /// Integrates from the outlet to the inlet at bubble frequency `frequency`; with `record`,
+    /// also the states at the ends of the [`SEGMENTS`] equal segments (outlet first), read from
+    /// the integrator's dense output of the same integration.
+    fn march(&self, frequency: f64, record: bool) -> Result<March, SegmentedFlowError> {
         let l = self.length.si();
         let rate = self.consumption.si() / l;
         let rhs = |x: f64, y: &[f64; 3]| -> Option<[f64; 3]> {
@@ -338,48 +350,55 @@ impl Coil {
             let cell = UnitCell::with_frequency(self.flow_at(p, n), frequency).ok()?;
             Some([self.pressure_model.gradient(&cell), rate, 1.0 / cell.bubble.velocity])
         };
-        let mut y = [self.outlet_pressure.pascals(), self.gas_at(0.0), 0.0];
-        let mut states = vec![y];
-        let mut xs = vec![0.0];
-        let segments = if record { SEGMENTS } else { 1 };
+        let y = [self.outlet_pressure.pascals(), self.gas_at(0.0), 0.0];
         let tol = OdeTolerance { relative: 1e-10, absolute: 1e-12, max_steps: 100_000, min_step_fraction: 1e-12 };
-        for i in 0..segments {
-            let a = l * i as f64 / segments as f64;
-            let b = l * (i + 1) as f64 / segments as f64;
-            let sol = dormand_prince(rhs, a, b, y, tol)?;
-            y = *sol.last().ok_or(SegmentedFlowError::Profile(crate::physics::ode::OdeError::InvalidInitialState))?;
-            states.push(y);
-            xs.push(b);
-        }
-        Ok((states, xs))
+        let xs: Vec<f64> = if record { (0..=SEGMENTS).map(|i| if i == SEGMENTS { l } else { l * i as f64 / SEGMENTS as f64 }).collect() } else { Vec::new() };
+        let (sol, states) = dormand_prince_dense(rhs, 0.0, l, y, tol, &xs)?;
+        let last = *sol.last().ok_or(SegmentedFlowError::Profile(crate::physics::ode::OdeError::InvalidInitialState))?;
+        Ok(March { last, states, xs })
     }
 
-    /// Integrates the profile: fixed point on the inlet pressure, then the recorded march.
-    pub fn profile(&self) -> Result<Profile, SegmentedFlowError> {
+    /// The fixed point on the inlet pressure, started from `guess` (Pa absolute; the outlet
+    /// pressure when `None`): the inlet pressure sets the bubble frequency at the junction, the
+    /// frequency the pressure drop. Returns the settled frequency and the iterations taken.
+    fn settle(&self, guess: Option<f64>) -> Result<(f64, u32), SegmentedFlowError> {
         if self.gas_at(0.0) <= 0.0 {
             return Err(SegmentedFlowError::GasExhausted);
         }
         if self.vapour_pressure() >= self.outlet_pressure.pascals() {
             return Err(SegmentedFlowError::Boils);
         }
-        let mut p_in = self.outlet_pressure.pascals();
+        let mut p_in = guess.filter(|p| p.is_finite() && *p >= self.outlet_pressure.pascals()).unwrap_or(self.outlet_pressure.pascals());
         let mut frequency = self.junction_cell(p_in)?.frequency();
         let mut iterations = 0;
         loop {
             iterations += 1;
-            let (states, _) = self.march(frequency, false)?;
-            let next = states.last().map(|s| s[0]).ok_or(SegmentedFlowError::NoConvergence { quantity: "inlet pressure", iterations })?;
+            let next = self.march(frequency, false)?.last[0];
             let settled = (next - p_in).abs() <= 1e-9 * next;
             p_in = next;
             frequency = self.junction_cell(p_in)?.frequency();
             if settled {
-                break;
+                return Ok((frequency, iterations));
             }
             if iterations >= MAX_INLET_ITERATIONS {
                 return Err(SegmentedFlowError::NoConvergence { quantity: "inlet pressure", iterations });
             }
         }
-        let (states, xs) = self.march(frequency, true)?;
+    }
+
+    /// Pressure drop over the coil, Pa: the same fixed point and final integration as
+    /// [`Coil::profile`] without the series, started from `guess` (e.g. another model's inlet
+    /// pressure); the fixed point ends within its tolerance (10⁻⁹ of the inlet pressure) of the
+    /// one reached from the outlet pressure.
+    pub fn pressure_drop(&self, guess: Option<f64>) -> Result<f64, SegmentedFlowError> {
+        let (frequency, _) = self.settle(guess)?;
+        Ok(self.march(frequency, false)?.last[0] - self.outlet_pressure.pascals())
+    }
+
+    /// Integrates the profile: fixed point on the inlet pressure, then the recorded march.
+    pub fn profile(&self) -> Result<Profile, SegmentedFlowError> {
+        let (frequency, iterations) = self.settle(None)?;
+        let March { last, states, xs } = self.march(frequency, true)?;
         let l = self.length.si();
         let mut profile = Profile {
             position: Vec::new(),
@@ -405,7 +424,6 @@ impl Coil {
             profile.holdup.push(cell.holdup);
             profile.bubble_velocity.push(cell.bubble.velocity);
         }
-        let last = states.last().ok_or(SegmentedFlowError::NoConvergence { quantity: "pressure profile", iterations })?;
         profile.inlet_pressure = last[0];
         profile.residence_time = last[2];
         Ok(profile)

@@ -97,7 +97,9 @@ impl SettlingModel {
 
     /// Terminal settling speed (magnitude; see [`Particle::drift`] for the direction).
     ///
-    /// Stokes and the explicit form are closed-form. The drag laws are solved for
+    /// Stokes and the explicit form are closed-form. For the sphere drag laws Re_t is read from
+    /// the law's Re_t(Ar) table and polished by one secant step (see [`super::table`]); otherwise,
+    /// or when that does not meet its residual, the drag laws are solved for
     /// C_D(Re(v)) v² = 4 g d |ρ_p − ρ| / (3 ρ) with Brent's method on (10⁻⁹ v_S, 2 v_S], v_S the
     /// Stokes speed: every law here has C_D ≥ 24/Re, which puts the root at or below v_S; the
     /// factor 2 covers fits that dip slightly below Stokes drag at tiny Re (Barati's, by 0.01 % at
@@ -111,6 +113,9 @@ impl SettlingModel {
             SettlingModel::Stokes => return Ok(v_stokes),
             SettlingModel::HaiderLevenspielExplicit => return Ok(haider_levenspiel_explicit::terminal_velocity(p)),
             _ => {}
+        }
+        if let Some(re) = super::table::reynolds(self, p.archimedes()) {
+            return Ok(Velocity::from_si(re * p.viscosity.si() / (p.density.si() * p.diameter.si())));
         }
         let residual = |v: f64| self.force_balance_residual(p, Velocity::from_si(v)).unwrap_or(f64::NAN);
         let v = brent(residual, 1e-9 * v_stokes.si(), 2.0 * v_stokes.si(), Tolerance::TIGHT)?;

@@ -13,6 +13,7 @@ pub mod richardson_zaki;
 pub mod rowe;
 pub mod schiller_naumann;
 pub mod stokes;
+pub mod table;
 
 use serde::Serialize;
 
