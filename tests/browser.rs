@@ -644,6 +644,9 @@ async fn the_cartridge_map_renders_reads_out_a_cell_moves_the_case_and_follows_t
     let b = Browser::start().await;
     b.open_page().await;
     b.click("[data-testid=tab-packed_bed]").await;
+    // Folded (and not computed) until opened.
+    assert!(!b.exists("[data-testid=map-canvas-cartridge_map]").await);
+    b.click("[data-testid=panel-packed_bed] [data-testid=map-toggle]").await;
     b.wait_for("[data-testid=map-canvas-cartridge_map]").await;
     b.wait_for("[data-testid=map-marker-cartridge_map]").await;
     // Drawn: fine (green) at the lowest flow with ~100 µm particles, caution (amber) for the

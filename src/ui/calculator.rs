@@ -385,6 +385,7 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
     // The operating map, for a calculator that has one: recomputed a moment after the last edit
     // that gave a valid report (a map is tens of thousands of cells).
     let map = RwSignal::new(None);
+    let map_open = RwSignal::new(false);
     let pick = {
         let main = form.main.clone();
         Callback::new(move |(x, y): (f64, f64)| {
@@ -403,7 +404,7 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
         let main = form.main.clone();
         let pending: StoredValue<Option<TimeoutHandle>, LocalStorage> = StoredValue::new_local(None);
         Effect::new(move |_| {
-            if outcome.with(|o| o.stale) {
+            if !map_open.get() || outcome.with(|o| o.stale) {
                 return;
             }
             report.track();
@@ -561,7 +562,7 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                     <h3>"Checks"</h3>
                     <CheckList report=report wanted=main_checks />
                     <AdviceView report=report wanted=shared_advice select=select />
-                    <MapView map=map pick=pick />
+                    {calculator.has_map().then(|| view! { <MapView map=map pick=pick open=map_open title="Operating map: where this cartridge works (flow × particle size)" /> })}
                     <h3>"Results"</h3>
                     <ResultTable report=report keys=main_figures />
                     <PlotList report=report />

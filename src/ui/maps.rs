@@ -60,10 +60,10 @@ fn fraction(values: &[f64], v: f64) -> f64 {
     ((v / values[0]).ln() / step + 0.5) / n
 }
 
-/// The map with its axes, legend, marker and read-out. `pick` receives the chosen cell's (x, y)
-/// values, SI.
+/// The map, folded under `title` until opened (it is computed only while open), with its axes,
+/// legend, marker and read-out. `pick` receives the chosen cell's (x, y) values, SI.
 #[component]
-pub fn MapView(map: RwSignal<Option<Map>>, pick: Callback<(f64, f64)>) -> impl IntoView {
+pub fn MapView(map: RwSignal<Option<Map>>, pick: Callback<(f64, f64)>, open: RwSignal<bool>, title: &'static str) -> impl IntoView {
     let canvas: NodeRef<Canvas> = NodeRef::new();
     let hover = RwSignal::new(None::<(usize, usize)>);
     Effect::new(move |_| {
@@ -101,7 +101,7 @@ pub fn MapView(map: RwSignal<Option<Map>>, pick: Callback<(f64, f64)>) -> impl I
             })
         })
     };
-    move || {
+    let body = move || {
         map.with(|m| {
             m.as_ref().map(|m| {
                 let (left, bottom) = (fraction(&m.x.values, m.current.0), fraction(&m.y.values, m.current.1));
@@ -110,8 +110,7 @@ pub fn MapView(map: RwSignal<Option<Map>>, pick: Callback<(f64, f64)>) -> impl I
                 let y_ends = (m.y.dimension.show(m.y.values[0], 2), m.y.dimension.show(*m.y.values.last().unwrap_or(&0.0), 2));
                 let key = m.key;
                 view! {
-                    <section class="map" data-testid=format!("map-{key}") aria-labelledby=format!("map-title-{key}")>
-                        <h3 id=format!("map-title-{key}")>{m.title}</h3>
+                    <div class="map-body" data-testid=format!("map-{key}")>
                         <div class="map-frame">
                             <div class="map-y-label">{format!("{} ↑ ({} to {}, log scale)", m.y.label, y_ends.0, y_ends.1)}</div>
                             <div class="map-plot">
@@ -145,9 +144,16 @@ pub fn MapView(map: RwSignal<Option<Map>>, pick: Callback<(f64, f64)>) -> impl I
                         </p>
                         <p class="map-readout" data-testid=format!("map-readout-{key}") aria-live="polite">{readout}</p>
                         <p class="note">{m.basis.clone()}</p>
-                    </section>
+                    </div>
                 }
             })
         })
+    };
+    view! {
+        <details class="map" data-testid="map" prop:open=move || open.get() on:toggle:target=move |ev| open.set(ev.target().open())>
+            <summary data-testid="map-toggle"><h3>{title}</h3></summary>
+            {move || (open.get() && map.with(Option::is_none)).then(|| view! { <p class="note">"Computing the map…"</p> })}
+            {body}
+        </details>
     }
 }

@@ -40,6 +40,9 @@ impl Workbench {
     }
 }
 
+/// How long after the last edit the workspace is saved.
+const SAVE_AFTER: std::time::Duration = std::time::Duration::from_millis(250);
+
 /// Creates the forms, restores the cases (or starts with the demos), opens a case carried by
 /// the page's address, saves after every edit, and provides the workbench.
 pub fn provide_workbench() -> Workbench {
@@ -53,12 +56,42 @@ pub fn provide_workbench() -> Workbench {
         window_event_listener(leptos::ev::hashchange, move |_| open_from_address(&bench))
     };
     on_cleanup(move || on_hash.remove());
+    // Saved a moment after the last edit (saving evaluates and stores the whole workspace, which
+    // would otherwise double the time of every keystroke), and at once when the page is hidden
+    // or closed, so that nothing typed is lost.
     for form in bench.forms.clone() {
-        Effect::new(move |_| {
+        let pending: StoredValue<Option<TimeoutHandle>, LocalStorage> = StoredValue::new_local(None);
+        Effect::new(move |first: Option<()>| {
             form.track_all();
-            library.autosave(&form);
+            // The first run (the page opening) saves at once, as the stored record is checked then.
+            if first.is_none() {
+                library.autosave(&form);
+                return;
+            }
+            if let Some(handle) = pending.try_update_value(Option::take).flatten() {
+                handle.clear();
+            }
+            let form = form.clone();
+            pending.set_value(set_timeout_with_handle(move || library.autosave(&form), SAVE_AFTER).ok());
         });
     }
+    let save_all = {
+        let forms = bench.forms.clone();
+        move || forms.iter().for_each(|f| library.autosave(f))
+    };
+    let on_hide = {
+        let save_all = save_all.clone();
+        window_event_listener(leptos::ev::pagehide, move |_| save_all())
+    };
+    let on_hidden = window_event_listener(leptos::ev::visibilitychange, move |_| {
+        if document().hidden() {
+            save_all();
+        }
+    });
+    on_cleanup(move || {
+        on_hide.remove();
+        on_hidden.remove();
+    });
     // The tab shown is remembered with the workspace.
     let active = bench.active;
     Effect::new(move |_| {
