@@ -62,7 +62,8 @@ const SONICATION: &str = "Immerse the line, or its narrowest part, in an ultraso
 const STIRRED_FEED: &str = "Keep the feed stirred and the line short and steep where you can; flush with clean solvent before \
 stopping the flow, since deposits grow fastest when the flow stops (common practice, no source).";
 
-const PLUG_CAUTION: &str = "A plug here stops the flow while a positive-displacement pump keeps pushing: the pressure \
+/// The caution beside a clogging or settling problem: what a plug does with a positive-displacement pump.
+pub const PLUG_CAUTION: &str = "A plug here stops the flow while a positive-displacement pump keeps pushing: the pressure \
 rises to the pump limit or until the weakest part fails, spraying hot, possibly toxic liquid. \
 Set a pump pressure limit or relief, watch the pressure trend, keep a flush and bypass ready, \
 and follow local codes and institutional rules.";

@@ -4,7 +4,7 @@
 
 mod reactor;
 
-pub use reactor::{LOOP_INFO, PRODUCTIVITY_INFO, RESIDENCE_TIME_INFO, VOLUME_INFO};
+pub use reactor::{LOOP_INFO, PRODUCTIVITY_INFO, RESIDENCE_TIME_INFO, VOLUME_INFO, internal_volume, residence_time, single_pass};
 
 use serde::Serialize;
 
