@@ -427,6 +427,7 @@ fn line_diagram(
     Ok(LineDiagram {
         key: "setup",
         title: "The setup, in flow order",
+        part_word: "Stage",
         parts,
         node_pressures: nodes.to_vec(),
         narrowest,

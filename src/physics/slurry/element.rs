@@ -185,6 +185,7 @@ fn line_diagram(input: &SlurryInput, results: &[ElementResult], figures: &[Figur
     Ok(LineDiagram {
         key: "line",
         title: "The line, in flow order",
+        part_word: "Element",
         parts,
         node_pressures: node_pressures(outlet, &drops)?,
         narrowest,
