@@ -4,12 +4,10 @@
 //! and a narrower fitting is named where it sits.
 #![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
 
-use std::cell::RefCell;
-
 use clearbore::case::{Calculator, CaseError, CaseFile, EntrySource};
 use clearbore::physics::diagram::Diagram;
-use clearbore::physics::form::{ChoiceSpec, FieldSource};
-use clearbore::physics::input::{FieldSpec, InputError};
+use clearbore::physics::form::{FieldSource, Watcher};
+use clearbore::physics::input::InputError;
 use clearbore::physics::report::{Report, Verdict};
 use serde_json::{Value, json};
 
@@ -266,23 +264,6 @@ fn order_errors_are_named_at_the_stage_kind() {
     assert_eq!(fields(&c), vec!["stage_2_length"]);
 }
 
-/// A source that remembers which keys were asked for.
-struct Watcher<'a> {
-    inner: &'a dyn FieldSource,
-    asked: RefCell<Vec<&'static str>>,
-}
-
-impl FieldSource for Watcher<'_> {
-    fn quantity(&self, spec: &FieldSpec) -> Result<f64, InputError> {
-        self.asked.borrow_mut().push(spec.key);
-        self.inner.quantity(spec)
-    }
-    fn choice(&self, spec: &ChoiceSpec) -> Result<usize, InputError> {
-        self.asked.borrow_mut().push(spec.key);
-        self.inner.choice(spec)
-    }
-}
-
 #[test]
 fn each_stage_kind_reads_only_its_own_entries() {
     let mut bed = passage("cartridge", 4.6, 0.1, 50.0);
@@ -293,10 +274,10 @@ fn each_stage_kind_reads_only_its_own_entries() {
         vec![syringe(200.0, 14.5, 50.0), piston(1.0, 100.0, 0.0), passage("junction", 0.5, 0.01, 50.0), passage("coil", 1.0, 1.0, 50.0), bed, regulator(3.0, 50.0)],
     );
     let sources: Vec<EntrySource> = c.elements.iter().map(EntrySource).collect();
-    let watched: Vec<Watcher> = sources.iter().map(|s| Watcher { inner: s, asked: RefCell::new(Vec::new()) }).collect();
+    let watched: Vec<Watcher> = sources.iter().map(|s| Watcher::new(s)).collect();
     let dyns: Vec<&dyn FieldSource> = watched.iter().map(|w| w as &dyn FieldSource).collect();
     Calculator::Setup.evaluate(&EntrySource(&c.inputs), &dyns).unwrap();
-    let mut asked: Vec<Vec<&str>> = watched.into_iter().map(|w| w.asked.into_inner()).collect();
+    let mut asked: Vec<Vec<&str>> = watched.into_iter().map(Watcher::into_asked).collect();
     for a in &mut asked {
         a.sort_unstable();
     }

@@ -1,8 +1,6 @@
 //! `CalculatorPanel`: one calculator's form, the report derived from it, and its layout. Generic
 //! over [`Calculator`]: which fields apply is learnt by watching which ones the physics reads.
 
-use std::cell::RefCell;
-
 use leptos::prelude::*;
 
 use super::advice::AdviceView;
@@ -14,7 +12,7 @@ use super::results::{CheckList, ResultTable};
 use super::print::{PrintRecord, Printing, entry_rows, entry_text};
 use super::summary::AnswerSummary;
 use crate::case::{Calculator, CaseError, CaseFile, Entries, Entry, FormItem};
-use crate::physics::form::{ChoiceSpec, FieldSource};
+use crate::physics::form::{ChoiceSpec, FieldSource, Watcher};
 use crate::physics::input::{FieldSpec, InputError};
 use crate::physics::report::{Advice, Report, Verdict};
 use crate::physics::units::parse_number;
@@ -249,35 +247,17 @@ impl CalculatorForm {
     }
 }
 
-/// A source that passes every request on and remembers which keys the physics asked for.
-struct Watcher<'a> {
-    inner: &'a dyn FieldSource,
-    asked: RefCell<Vec<&'static str>>,
-}
-
-impl FieldSource for Watcher<'_> {
-    fn quantity(&self, spec: &FieldSpec) -> Result<f64, InputError> {
-        self.asked.borrow_mut().push(spec.key);
-        self.inner.quantity(spec)
-    }
-
-    fn choice(&self, spec: &ChoiceSpec) -> Result<usize, InputError> {
-        self.asked.borrow_mut().push(spec.key);
-        self.inner.choice(spec)
-    }
-}
-
 /// Runs the calculator on the form and returns the result, the keys of the calculator-level
 /// fields and choices it read (those that apply with the current choices), and for each line
 /// element the keys the physics read of it (a stage of a setup reads only the fields of its kind).
 fn run_watched_all(form: &CalculatorForm) -> (Result<Report, CaseError>, Vec<&'static str>, Vec<Vec<&'static str>>) {
-    let watcher = Watcher { inner: &form.main, asked: RefCell::new(Vec::new()) };
+    let watcher = Watcher::new(&form.main);
     let elements = form.elements.get();
-    let watched: Vec<Watcher> = elements.iter().map(|e| Watcher { inner: &e.state, asked: RefCell::new(Vec::new()) }).collect();
+    let watched: Vec<Watcher> = elements.iter().map(|e| Watcher::new(&e.state)).collect();
     let sources: Vec<&dyn FieldSource> = watched.iter().map(|w| w as &dyn FieldSource).collect();
     let result = form.calculator.evaluate(&watcher, &sources);
-    let per_element = watched.into_iter().map(|w| w.asked.into_inner()).collect();
-    (result, watcher.asked.into_inner(), per_element)
+    let per_element = watched.into_iter().map(Watcher::into_asked).collect();
+    (result, watcher.into_asked(), per_element)
 }
 
 /// For each line element (by its stable id), the keys of the fields the physics read; an

@@ -10,7 +10,7 @@ use crate::physics::diagram::{Column, Diagram, LineDiagram, LinePart, node_press
 use crate::physics::hazards::{LineContents, over_pressure_caution};
 use crate::physics::packed_bed::{ergun, flow::BedFlow};
 use crate::physics::pipe_flow::{self, hagen_poiseuille};
-use crate::physics::report::{Check, Figure, Finite, ModelInfo, NumericalError, Report, Verdict, budget_verdict, range_warnings};
+use crate::physics::report::{Check, Figure, Finite, ModelInfo, NumericalError, Report, Verdict, budget_note, budget_verdict, range_warnings};
 use crate::physics::slurry::clogging::{self, ClogRisk};
 use crate::physics::slurry::element::PLUG_CAUTION;
 use crate::physics::slurry::viscosity::MODELS as SUSPENSION_VISCOSITY;
@@ -152,11 +152,7 @@ fn pressure_check(i: usize, stage: &Stage, inlet: f64, rating: f64, what: LineCo
             bar(inlet),
             ratio * 100.0,
             bar(rating),
-            match verdict {
-                Verdict::Problem => ": over the rating",
-                Verdict::Caution => ": less than 20 % margin (common practice, no source)",
-                Verdict::Fine => "",
-            }
+            budget_note(verdict, ": over the rating")
         ),
         caution: over_pressure_caution(verdict, what),
     }
@@ -178,11 +174,7 @@ fn pump_check(i: usize, pump: Pump, joining: f64, stages: &[Stage], what: LineCo
         bar(joining),
         ratio * 100.0,
         bar(largest),
-        match verdict {
-            Verdict::Problem => ": it cannot deliver the set flow against this pressure",
-            Verdict::Caution => ": less than 20 % margin (common practice, no source)",
-            Verdict::Fine => "",
-        }
+        budget_note(verdict, ": it cannot deliver the set flow against this pressure")
     );
     if let Pump::Syringe { barrel_rating, .. } = pump
         && barrel_rating.si() < largest

@@ -12,7 +12,7 @@ use crate::physics::numeric::{RootError, Tolerance, brent};
 use crate::physics::pipe_flow::{self, hagen_poiseuille};
 use crate::physics::diagram::{Column, Diagram, LineDiagram, LinePart, node_pressures};
 use crate::physics::practical::{FINEST_MILLED_D90, LAMINAR_REYNOLDS, SMALLEST_BORE};
-use crate::physics::report::{AdviceKind, AdviceList, Check, Estimate, Figure, Finite, ModelInfo, NumericalError, RangeWarning, Report, Verdict, budget_verdict};
+use crate::physics::report::{AdviceKind, AdviceList, Check, Estimate, Figure, Finite, ModelInfo, NumericalError, RangeWarning, Report, Verdict, budget_note, budget_verdict};
 use crate::physics::settling::drag::terminal_velocity_spread;
 use crate::physics::settling::hindered::{HinderedModel, Suspension, hindered_velocity_spread};
 use crate::physics::settling::{Drift, range_warnings};
@@ -630,11 +630,7 @@ fn pressure_check(inlet: f64, total: &Figure, back: f64, rating: f64) -> Check {
     let ratio = inlet / rating;
     let (_, worst) = total.spread();
     let verdict = budget_verdict(ratio, (back + worst) / rating);
-    let note = match verdict {
-        Verdict::Problem => ": over the rating",
-        Verdict::Caution => ": less than 20 % margin (common practice, no source)",
-        Verdict::Fine => "",
-    };
+    let note = budget_note(verdict, ": over the rating");
     Check {
         key: "pressure_budget",
         topic: "Pressure budget",
