@@ -317,15 +317,19 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
     let report = Signal::derive(move || outcome.with(|o| o.report.clone()));
     let applicable = Memo::new(move |_| outcome.with(|o| o.applicable.clone()));
     let calculator = form.calculator;
-    // Errors at entries that are not on the page (the list of elements as a whole) are said in
-    // the notice; the others show at their fields, which are then red.
+    // Errors at entries that are not on the page (the list of elements as a whole) or that show
+    // no error of their own (an element's choices) are said in the notice; the others show at
+    // their fields, which are then red.
     let element_names = {
         let form = form.clone();
         Memo::new(move |_| {
             let n = form.elements.with(Vec::len);
             let layout = calculator.element_layout().unwrap_or_default();
             let prefix = calculator.element_prefix();
-            (1..=n).flat_map(|i| layout.iter().filter_map(FormItem::key).map(move |k| format!("{prefix}_{i}_{k}"))).collect::<Vec<_>>()
+            // Quantity fields show their own errors; a choice's (a stage in the wrong place) is
+            // said in the notice.
+            let fields = layout.iter().filter_map(|item| if let FormItem::Field(f) = item { Some(f.key) } else { None });
+            (1..=n).flat_map(|i| fields.clone().map(move |k| format!("{prefix}_{i}_{k}"))).collect::<Vec<_>>()
         })
     };
     let unplaced = Memo::new(move |_| {

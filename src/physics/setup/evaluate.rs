@@ -56,8 +56,14 @@ fn fig(k: &ElementKey, dimension: Dimension, model: ModelInfo, value: f64) -> Re
     Figure::definition(k.key, k.label, dimension, model, value)
 }
 
+/// A gauge pressure in bar to 4 significant figures: a part just over its rating reads so.
 fn bar(p: f64) -> String {
-    format_significant(p / 1e5, 3)
+    format_significant(p / 1e5, 4)
+}
+
+/// A share in per cent to 4 significant figures (100.1 %, not a rounded 100 %).
+fn percent(ratio: f64) -> String {
+    format_significant(ratio * 100.0, 4)
 }
 
 /// What flows through a stage that carries flow.
@@ -146,11 +152,11 @@ fn pressure_check(i: usize, stage: &Stage, inlet: f64, rating: f64, what: LineCo
         topic: keys::PRESSURE[i].label,
         verdict,
         reason: format!(
-            "The {} at stage {} sees {} bar(g) at its inlet, {:.0} % of its {} bar(g) rating{}.",
+            "The {} at stage {} sees {} bar(g) at its inlet, {} % of its {} bar(g) rating{}.",
             stage.kind().word(),
             i + 1,
             bar(inlet),
-            ratio * 100.0,
+            percent(ratio),
             bar(rating),
             budget_note(verdict, ": over the rating")
         ),
@@ -168,11 +174,11 @@ fn pump_check(i: usize, pump: Pump, joining: f64, stages: &[Stage], what: LineCo
     let ratio = joining / largest;
     let mut verdict = budget_verdict(ratio, ratio);
     let mut reason = format!(
-        "The {} of stage {} must deliver {} bar(g) where its feed joins, {:.0} % of the {} bar(g) it can give{}.",
+        "The {} of stage {} must deliver {} bar(g) where its feed joins, {} % of the {} bar(g) it can give{}.",
         pump.word(),
         i + 1,
         bar(joining),
-        ratio * 100.0,
+        percent(ratio),
         bar(largest),
         budget_note(verdict, ": it cannot deliver the set flow against this pressure")
     );
@@ -374,11 +380,11 @@ fn budget_check(stages: &[Stage], nodes: &[Finite], what: LineContents) -> Check
         topic: "Pressure budget",
         verdict,
         reason: format!(
-            "The closest part to its rating is the {} at stage {}: {} bar(g) at its inlet, {:.0} % of {} bar(g).{lowest_words}",
+            "The closest part to its rating is the {} at stage {}: {} bar(g) at its inlet, {} % of {} bar(g).{lowest_words}",
             stages[i].kind().word(),
             i + 1,
             bar(p),
-            ratio * 100.0,
+            percent(ratio),
             bar(r)
         ),
         caution: over_pressure_caution(verdict, what),
