@@ -320,6 +320,7 @@ const SETUP_STAGE_LAYOUT: &[FormItem] = &[
     Choice(setup::KIND),
     Choice(setup::PUMP),
     Field(setup::FLOW),
+    Field(setup::PUMP_MAX_FLOW),
     Field(setup::PUMP_LIMIT),
     Field(setup::DRIVE_FORCE),
     Field(setup::BARREL_BORE),

@@ -37,7 +37,7 @@ fn water_inputs() -> Value {
 }
 
 fn piston(flow_ml_min: f64, limit_bar: f64, solids: f64) -> Value {
-    json!({ "kind": "liquid_feed", "pump": "piston", "flow": q(flow_ml_min, "mL/min"), "pump_limit": q(limit_bar, "bar"), "solids_fraction": q(solids, "fraction") })
+    json!({ "kind": "liquid_feed", "pump": "piston", "flow": q(flow_ml_min, "mL/min"), "pump_max_flow": q(10.0, "mL/min"), "pump_limit": q(limit_bar, "bar"), "solids_fraction": q(solids, "fraction") })
 }
 
 fn passage(kind: &str, bore_mm: f64, length_m: f64, rating_bar: f64) -> Value {
@@ -103,7 +103,7 @@ fn one_cartridge_gives_ergun_on_the_fluids_example() {
     // fluids 1.3.1, packed_bed.Ergun docstring: dp = 0.8 mm, voidage 0.4, vs = 1 mm/s, rho = 1000,
     // mu = 1 mPa·s, L = 1 m → 1338.8671874999995 Pa. A 10 mm cartridge at Q = vs π D²/4 gives vs.
     let flow = 1e-3 * std::f64::consts::PI * 0.01_f64.powi(2) / 4.0;
-    let feed = json!({ "kind": "liquid_feed", "pump": "piston", "flow": q(flow, "m³/s"), "pump_limit": q(100.0, "bar"), "solids_fraction": q(0.0, "fraction") });
+    let feed = json!({ "kind": "liquid_feed", "pump": "piston", "flow": q(flow, "m³/s"), "pump_max_flow": q(10.0, "mL/min"), "pump_limit": q(100.0, "bar"), "solids_fraction": q(0.0, "fraction") });
     let mut bed = passage("cartridge", 10.0, 1.0, 50.0);
     bed["particle_diameter"] = q(0.8, "mm");
     bed["voidage"] = q(0.4, "fraction");
@@ -142,7 +142,7 @@ fn node_pressures_are_the_set_point_plus_the_drops_downstream() {
 
 fn syringe(force_n: f64, bore_mm: f64, barrel_bar: f64) -> Value {
     json!({
-        "kind": "liquid_feed", "pump": "syringe", "flow": q(0.1, "mL/min"),
+        "kind": "liquid_feed", "pump": "syringe", "flow": q(0.1, "mL/min"), "pump_max_flow": q(5.0, "mL/min"),
         "drive_force": q(force_n, "N"), "barrel_bore": q(bore_mm, "mm"), "barrel_rating": q(barrel_bar, "bar"),
         "solids_fraction": q(0.0, "fraction")
     })
@@ -173,6 +173,20 @@ fn a_pump_limit_below_the_line_pressure_is_a_problem_naming_the_pump() {
     let check = r.check("stage_1_pump_check").unwrap();
     assert_eq!(check.verdict, Verdict::Problem);
     assert!(check.reason.contains("piston pump of stage 1"), "{}", check.reason);
+}
+
+#[test]
+fn a_flow_above_the_pumps_largest_is_a_problem() {
+    // A 40 bar pump on parts rated 50 bar: only the flow decides.
+    let mut feed = piston(12.0, 40.0, 0.0);
+    assert_eq!(feed["pump_max_flow"], q(10.0, "mL/min"));
+    let r = run(water_inputs(), vec![feed.clone(), passage("tubing", 1.0, 1.0, 50.0), regulator(1.0, 50.0)]);
+    let check = r.check("stage_1_pump_check").unwrap();
+    assert_eq!(check.verdict, Verdict::Problem);
+    assert!(check.reason.contains("more than the pump's largest flow"), "{}", check.reason);
+    feed["flow"] = q(8.0, "mL/min");
+    let r = run(water_inputs(), vec![feed, passage("tubing", 1.0, 1.0, 50.0), regulator(1.0, 50.0)]);
+    assert_eq!(verdict(&r, "stage_1_pump_check"), Verdict::Fine);
 }
 
 #[test]
@@ -285,8 +299,8 @@ fn each_stage_kind_reads_only_its_own_entries() {
         v.sort_unstable();
         v
     };
-    assert_eq!(asked[0], sorted(vec!["kind", "flow", "solids_fraction", "pump", "drive_force", "barrel_bore", "barrel_rating"]));
-    assert_eq!(asked[1], sorted(vec!["kind", "flow", "solids_fraction", "pump", "pump_limit"]));
+    assert_eq!(asked[0], sorted(vec!["kind", "flow", "pump_max_flow", "solids_fraction", "pump", "drive_force", "barrel_bore", "barrel_rating"]));
+    assert_eq!(asked[1], sorted(vec!["kind", "flow", "pump_max_flow", "solids_fraction", "pump", "pump_limit"]));
     assert_eq!(asked[2], sorted(vec!["kind", "inner_diameter", "length", "pressure_rating"]));
     assert_eq!(asked[3], sorted(vec!["kind", "inner_diameter", "length", "pressure_rating"]));
     assert_eq!(asked[4], sorted(vec!["kind", "inner_diameter", "length", "pressure_rating", "particle_diameter", "voidage"]));

@@ -5,7 +5,7 @@
 
 use super::keys::{self, ElementKey};
 use super::pump::Pump;
-use super::{SetupInput, Stage, StageKind};
+use super::{Feed, SetupInput, Stage, StageKind};
 use crate::physics::diagram::{Column, Diagram, LineDiagram, LinePart, node_pressures};
 use crate::physics::hazards::{LineContents, over_pressure_caution};
 use crate::physics::packed_bed::{ergun, flow::BedFlow};
@@ -14,7 +14,7 @@ use crate::physics::report::{Check, Figure, Finite, ModelInfo, NumericalError, R
 use crate::physics::slurry::clogging::{self, ClogRisk};
 use crate::physics::slurry::element::PLUG_CAUTION;
 use crate::physics::slurry::viscosity::MODELS as SUSPENSION_VISCOSITY;
-use crate::physics::tubing;
+use crate::physics::{practical, tubing};
 use crate::physics::tubular::{self, PRODUCTIVITY_INFO, RESIDENCE_TIME_INFO, VOLUME_INFO};
 use crate::physics::units::{Dimension, Length, Pressure, PressureDifference, Velocity, Volume, VolumetricFlow, format_significant};
 
@@ -169,7 +169,8 @@ fn weakest_downstream(stages: &[Stage], i: usize) -> Option<(usize, f64)> {
     stages.iter().enumerate().skip(i + 1).filter_map(|(j, s)| rating(s).map(|r| (j, r))).min_by(|a, b| a.1.total_cmp(&b.1))
 }
 
-fn pump_check(i: usize, pump: Pump, joining: f64, stages: &[Stage], what: LineContents) -> Check {
+fn pump_check(i: usize, feed: &Feed, joining: f64, stages: &[Stage], what: LineContents) -> Check {
+    let pump = feed.pump;
     let largest = pump.largest_pressure();
     let ratio = joining / largest;
     let mut verdict = budget_verdict(ratio, ratio);
@@ -204,7 +205,11 @@ fn pump_check(i: usize, pump: Pump, joining: f64, stages: &[Stage], what: LineCo
             bar(weakest)
         ));
     }
-    Check { key: keys::PUMP_CHECK[i].key, topic: keys::PUMP_CHECK[i].label, verdict, reason, caution: over_pressure_caution(verdict, what) }
+    let caution = over_pressure_caution(verdict, what);
+    let flow = practical::pump_flow_check(feed.flow, feed.max_flow);
+    reason.push(' ');
+    reason.push_str(&flow.reason);
+    Check { key: keys::PUMP_CHECK[i].key, topic: keys::PUMP_CHECK[i].label, verdict: verdict.max(flow.verdict), reason, caution }
 }
 
 fn clogging_check(i: usize, stage: &Stage, ratio: f64, phi: f64, narrowest: bool) -> Check {
@@ -285,7 +290,7 @@ pub fn evaluate(input: &SetupInput) -> Result<Report, NumericalError> {
                 stage_figures.push(fig(&keys::LIQUID_FLOW[i], Dimension::VolumetricFlow, FLOW_INFO, f.flow.si())?);
                 stage_figures.push(fig(&keys::PUMP_PRESSURE[i], Dimension::PressureDifference, f.pump.info(), f.pump.largest_pressure())?);
                 stage_figures.push(fig(&keys::INLET_PRESSURE[i], Dimension::PressureDifference, NODE_INFO, inlet(i))?);
-                add(pump_check(i, f.pump, inlet(i), stages, what), &mut verdicts, &mut stage_checks);
+                add(pump_check(i, f, inlet(i), stages, what), &mut verdicts, &mut stage_checks);
             }
             (_, Some(c)) => {
                 stage_figures.push(fig(&keys::LIQUID_FLOW[i], Dimension::VolumetricFlow, FLOW_INFO, c.flow)?);

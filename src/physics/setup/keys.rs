@@ -12,6 +12,8 @@ numbered_keys! {
     PUMP = "pump", "pump";
     /// Input: feed flow.
     FLOW = "flow", "feed flow";
+    /// Input: the pump's largest flow.
+    PUMP_MAX_FLOW = "pump_max_flow", "pump's largest flow";
     /// Input: pump pressure limit.
     PUMP_LIMIT = "pump_limit", "pump pressure limit";
     /// Input: syringe drive force.

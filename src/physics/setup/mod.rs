@@ -84,6 +84,9 @@ pub const VOIDAGE: FieldSpec = field("voidage", "Bed voidage", Dimension::Fracti
 /// Regulator set point.
 pub const SET_POINT: FieldSpec = field("set_point", "Set point (gauge)", Dimension::PressureDifference, lab::BACK_PRESSURE, "Pressure the regulator holds at its inlet, above atmosphere.");
 
+/// The pump's largest flow (the shared field of the other calculators).
+pub const PUMP_MAX_FLOW: FieldSpec = super::practical::PUMP_MAX_FLOW;
+
 /// Largest solids size (d90), read when a feed carries solids.
 pub const D90: FieldSpec = slurry::D90;
 
@@ -131,6 +134,8 @@ impl StageKind {
 pub struct Feed {
     /// Flow delivered.
     pub flow: VolumetricFlow,
+    /// The pump's largest flow.
+    pub max_flow: VolumetricFlow,
     /// The pump.
     pub pump: Pump,
     /// Solids volume fraction in the feed (0 for a clean liquid).
@@ -238,6 +243,7 @@ fn read_stage(src: &dyn FieldSource, i: usize, c: &mut Collector) -> Option<Stag
     match kind {
         StageKind::LiquidFeed => {
             let flow = q(&FLOW, &keys::FLOW);
+            let max_flow = q(&PUMP_MAX_FLOW, &keys::PUMP_MAX_FLOW);
             let solids = q(&SOLIDS, &keys::SOLIDS);
             let pump = match c.take(src.choice(&PUMP).map_err(|e| at(&keys::PUMP[i], e))) {
                 Some(1) => {
@@ -257,7 +263,12 @@ fn read_stage(src: &dyn FieldSource, i: usize, c: &mut Collector) -> Option<Stag
                 }
                 None => None,
             };
-            Some(Stage::Feed(Feed { flow: VolumetricFlow::from_si(flow?), pump: pump?, solids: Fraction::from_si(solids?) }))
+            Some(Stage::Feed(Feed {
+                flow: VolumetricFlow::from_si(flow?),
+                max_flow: VolumetricFlow::from_si(max_flow?),
+                pump: pump?,
+                solids: Fraction::from_si(solids?),
+            }))
         }
         StageKind::Regulator => {
             let set_point = q(&SET_POINT, &keys::SET_POINT);
