@@ -343,13 +343,15 @@ pub fn evaluate(input: &SetupInput) -> Result<Report, NumericalError> {
     figures.extend(stage_figures);
 
     let mut line_checks = vec![budget_check(stages, &nodes, what)];
-    if let Some(choice) = &input.tubing {
-        let highest = stages
-            .iter()
-            .enumerate()
-            .filter(|(_, s)| matches!(s.kind(), StageKind::Tubing | StageKind::Coil))
-            .map(|(i, _)| inlet(i))
-            .fold(0.0, f64::max);
+    // The tubing from the table is the line's tubing and coils: checked at the highest inlet
+    // pressure among them.
+    let highest = stages
+        .iter()
+        .enumerate()
+        .filter(|(_, s)| matches!(s.kind(), StageKind::Tubing | StageKind::Coil))
+        .map(|(i, _)| inlet(i))
+        .reduce(f64::max);
+    if let (Some(choice), Some(highest)) = (&input.tubing, highest) {
         line_checks.push(tubing::check(choice, PressureDifference::from_si(highest), &input.liquid.solvents()));
     }
     // One temperature for the whole line: the lowest pressure inside it, the regulator's inlet
