@@ -9,7 +9,7 @@ use super::charts::PlotList;
 use super::diagrams::{LineStrip, PartTable, SlugView, line_of, slugs_of};
 use super::field::{FieldErrors, FieldState, QuantityField};
 use super::results::{CheckList, ResultTable};
-use super::print::{PrintRecord, Printing, entry_rows, entry_text};
+use super::print::{PrintRecord, Printing, entry_rows};
 use super::summary::AnswerSummary;
 use crate::case::{Calculator, CaseError, CaseFile, Entries, Entry, FormItem};
 use crate::physics::form::{ChoiceSpec, FieldSource, Watcher};
@@ -412,28 +412,21 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                 let mut ignored = Vec::new();
                 let inputs = form.main.to_entries(&[], &mut ignored);
                 let entries = entry_rows(calculator.layout(), &applicable, &inputs);
+                // Each element's entries that the physics read (a stage holds only its kind's).
+                let read = outcome.with_untracked(|o| o.element_keys.clone());
+                let layout = calculator.element_layout().unwrap_or_default();
+                let all: Vec<&'static str> = layout.iter().filter_map(FormItem::key).collect();
                 let elements = form.elements.with_untracked(|list| {
                     list.iter()
                         .map(|e| {
                             let entries = e.state.to_entries(&[], &mut ignored);
-                            calculator
-                                .element_layout()
-                                .unwrap_or_default()
-                                .iter()
-                                .filter_map(|item| match item {
-                                    FormItem::Choice(c) => entries.get(c.key).map(|v| match v {
-                                        Entry::Choice(k) => c.options.iter().find(|(key, _)| key == k).map_or(k.clone(), |(_, l)| (*l).to_owned()),
-                                        other => entry_text(other),
-                                    }),
-                                    FormItem::Field(f) => Some(entries.get(f.key).map_or_else(|| "—".to_owned(), entry_text)),
-                                    FormItem::Heading(_) => None,
-                                })
-                                .collect::<Vec<_>>()
+                            let keys = read.iter().find(|(id, _)| *id == e.id).map(|(_, k)| k).filter(|k| !k.is_empty()).unwrap_or(&all);
+                            entry_rows(layout, keys, &entries).into_iter().map(|(label, value)| format!("{label}: {value}")).collect::<Vec<_>>().join("; ")
                         })
                         .collect::<Vec<_>>()
                 });
                 report.map(|report| view! {
-                    <PrintRecord calculator=calculator title=form.title.get_untracked() entries=entries elements=elements element_columns=element_columns(calculator) report=report stale=stale />
+                    <PrintRecord calculator=calculator title=form.title.get_untracked() entries=entries elements=elements report=report stale=stale />
                 })
             })
         }
@@ -499,15 +492,6 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
 /// What one entry of a line is called on the page: "Element" or "Stage".
 fn element_word(calculator: Calculator) -> &'static str {
     if calculator.element_prefix() == "stage" { "Stage" } else { "Element" }
-}
-
-/// The headings of a printed line's entry table: the labels of the element layout's entries.
-fn element_columns(calculator: Calculator) -> Vec<String> {
-    calculator.element_layout().unwrap_or_default().iter().filter_map(|item| match item {
-        FormItem::Field(f) => Some(f.label.to_owned()),
-        FormItem::Choice(c) => Some(c.label.to_owned()),
-        FormItem::Heading(_) => None,
-    }).collect()
 }
 
 /// One entry of a calculator's form: a heading, a quantity field or a choice.

@@ -23,14 +23,14 @@ fn now() -> String {
 }
 
 /// The record of `calculator`'s current case. `entries` are the inputs as they stand (label,
-/// value as typed with its unit); `report` the last valid results.
+/// value as typed with its unit); `elements` each line element's entries that apply, in words;
+/// `report` the last valid results.
 #[component]
 pub fn PrintRecord(
     calculator: Calculator,
     title: String,
     entries: Vec<(String, String)>,
-    elements: Vec<Vec<String>>,
-    element_columns: Vec<String>,
+    elements: Vec<String>,
     report: Report,
     stale: bool,
 ) -> impl IntoView {
@@ -85,9 +85,9 @@ pub fn PrintRecord(
                 </ul>
                 {(!elements.is_empty()).then(|| view! {
                     <table class="record-table">
-                        <tr><th scope="col">"#"</th>{element_columns.into_iter().map(|c| view! { <th scope="col">{c}</th> }).collect_view()}</tr>
+                        <tr><th scope="col">"#"</th><th scope="col">{if calculator.element_prefix() == "stage" { "Stage" } else { "Element" }}</th></tr>
                         {elements.into_iter().enumerate().map(|(i, e)| view! {
-                            <tr><td>{i + 1}</td>{e.into_iter().map(|v| view! { <td>{v}</td> }).collect_view()}</tr>
+                            <tr><td>{i + 1}</td><td>{e}</td></tr>
                         }).collect_view()}
                     </table>
                 })}
