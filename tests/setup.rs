@@ -258,6 +258,7 @@ fn solids_are_checked_only_downstream_of_their_feed_and_diluted_where_clean_liqu
     let relative = (1.0_f64 - 0.05 / 0.58).powf(-2.5 * 0.58);
     close(relative, 1.13965, 1e-5);
     close(value(&r, "stage_5_pressure_drop"), relative * 2.0 * 679.061, 1e-5);
+    close(value(&r, "stage_5_suspension_viscosity"), relative * 1e-3, 1e-12);
 }
 
 #[test]

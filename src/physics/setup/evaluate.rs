@@ -13,10 +13,10 @@ use crate::physics::pipe_flow::{self, hagen_poiseuille};
 use crate::physics::report::{Check, Figure, Finite, ModelInfo, NumericalError, Report, Verdict, budget_note, budget_verdict, range_warnings};
 use crate::physics::slurry::clogging::{self, ClogRisk};
 use crate::physics::slurry::element::PLUG_CAUTION;
-use crate::physics::slurry::viscosity::MODELS as SUSPENSION_VISCOSITY;
+use crate::physics::slurry::viscosity::{MODELS as SUSPENSION_VISCOSITY, suspension_viscosity_spread};
 use crate::physics::{practical, tubing};
 use crate::physics::tubular::{self, PRODUCTIVITY_INFO, RESIDENCE_TIME_INFO, VOLUME_INFO};
-use crate::physics::units::{Dimension, Length, Pressure, PressureDifference, Velocity, Volume, VolumetricFlow, format_significant};
+use crate::physics::units::{Dimension, DynamicViscosity, Length, Pressure, PressureDifference, Velocity, Volume, VolumetricFlow, format_significant};
 
 /// The flow joining at a stage.
 pub const FLOW_INFO: ModelInfo = ModelInfo {
@@ -94,7 +94,7 @@ fn stage_drop(input: &SetupInput, stage: &Stage, c: Carried) -> (f64, ModelInfo,
     match stage {
         Stage::Passage { bore, length, packing, .. } => {
             let relative = SUSPENSION_VISCOSITY[0].1(c.solids);
-            let mu = crate::physics::units::DynamicViscosity::from_si(input.viscosity.si() * relative);
+            let mu = DynamicViscosity::from_si(input.viscosity.si() * relative);
             let tube = tubular::internal_volume(*bore, *length).si();
             match packing {
                 None => {
@@ -255,7 +255,7 @@ pub fn evaluate(input: &SetupInput) -> Result<Report, NumericalError> {
     let mut stage_figures = Vec::new();
     let mut checks = Vec::new();
     let mut drops = Vec::with_capacity(stages.len());
-    let mut volumes = vec![None; stages.len()];
+    let mut volumes = Vec::with_capacity(stages.len());
     let mut models = Vec::with_capacity(stages.len());
     for (s, c) in stages.iter().zip(&flows) {
         let (dp, info, warnings, volume) = match c {
@@ -264,7 +264,7 @@ pub fn evaluate(input: &SetupInput) -> Result<Report, NumericalError> {
         };
         drops.push(dp);
         models.push((info, warnings));
-        volumes[drops.len() - 1] = volume;
+        volumes.push(volume);
     }
     let nodes = node_pressures(0.0, &drops)?;
     let inlet = |i: usize| nodes.get(i).map_or(0.0, |p| p.get());
@@ -307,6 +307,9 @@ pub fn evaluate(input: &SetupInput) -> Result<Report, NumericalError> {
                 }
                 if c.solids > 0.0 {
                     stage_figures.push(fig(&keys::SOLIDS_FRACTION[i], Dimension::Fraction, FLOW_INFO, c.solids)?);
+                    // The viscosity the stage's drop was computed with, every model beside it.
+                    let mu_s = suspension_viscosity_spread(input.viscosity, c.solids)?;
+                    stage_figures.push(Figure { key: keys::SUSPENSION_VISCOSITY[i].key, label: keys::SUSPENSION_VISCOSITY[i].label, ..mu_s });
                     if let (Some(w), Some(d90)) = (passage(stage), solids) {
                         let ratio = w / d90;
                         stage_figures.push(fig(&keys::PASSAGE_RATIO[i], Dimension::Number, clogging::INFO, ratio)?);

@@ -48,6 +48,8 @@ numbered_keys! {
     INLET_PRESSURE = "inlet_pressure", "inlet pressure (gauge)";
     /// Figure: solids volume fraction in the stage.
     SOLIDS_FRACTION = "solids_volume_fraction", "solids volume fraction";
+    /// Figure: suspension viscosity.
+    SUSPENSION_VISCOSITY = "suspension_viscosity", "suspension viscosity";
     /// Figure: passage-to-particle ratio.
     PASSAGE_RATIO = "passage_ratio", "passage-to-particle ratio (d90)";
     /// Figure: largest pressure the pump can give.
