@@ -479,6 +479,12 @@ impl Calculator {
         }
     }
 
+    /// Whether a new line element goes before the last one (a setup ends with its regulator),
+    /// rather than after it.
+    pub const fn keeps_last_element(self) -> bool {
+        matches!(self, Calculator::Setup)
+    }
+
     /// The case format version that introduced this calculator (older files cannot name it).
     pub const fn since_format(self) -> u32 {
         match self {

@@ -620,15 +620,28 @@ async fn a_setup_is_built_reordered_and_kept_across_a_reload() {
     b.text_when("[data-testid=node-0]", |t| t == node_text(&three, 0)).await;
     assert!(b.text("[data-testid=check-pressure_budget]").await.contains("coil at stage 2"));
 
-    // A fourth stage (a copy of the last) made a fitting rated just above the set point, 5.01 bar,
-    // between the coil and the regulator: it is the part closest to its rating, at stage 3.
+    // A fourth stage goes in before the regulator, a copy of the coil (a second 10 m coil).
     b.click("[data-testid=add-element]").await;
-    b.wait_for("[data-testid=element-4]").await;
-    // Two regulators: the order rule is said in the notice, naming the stage.
+    wait_for_stages(&b, 4).await;
+    assert_eq!(b.js("return document.querySelector('[data-testid=\"choice-stage_3_kind\"]').value;").await, "coil");
+    assert_eq!(b.js("return document.querySelector('[data-testid=\"choice-stage_4_kind\"]').value;").await, "regulator");
+    // A regulator moved ahead of the coil breaks the order rule, said in the notice at its stage.
+    b.click("[aria-label='Move stage 4 up']").await;
     let notice = b.text_when("[data-testid=stale-notice]", |t| t.contains("Stage 3: kind")).await;
     assert!(notice.contains("last stage"), "{notice}");
+    b.click("[aria-label='Move stage 4 up']").await;
+    for _ in 0..100 {
+        if !b.exists("[data-testid=stale-notice]").await {
+            break;
+        }
+        tokio::time::sleep(std::time::Duration::from_millis(50)).await;
+    }
+    assert!(!b.exists("[data-testid=stale-notice]").await, "the order is right again");
+    // The copy made a fitting rated just above the set point, 5.01 bar, between the coil and the
+    // regulator: it is the part closest to its rating, at stage 3.
     b.choose("choice-stage_3_kind", "fitting").await;
     b.type_into("stage_3_inner_diameter", "0.25").await;
+    b.choose("unit-stage_3_length", "mm").await;
     b.type_into("stage_3_length", "10").await;
     b.type_into("stage_3_pressure_rating", "5.01").await;
     wait_for_stages(&b, 4).await;

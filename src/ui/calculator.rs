@@ -561,12 +561,24 @@ fn ElementList(form: CalculatorForm) -> impl IntoView {
     let add = {
         let form = form.clone();
         move |_| {
+            // A copy of the last element, appended; where the line keeps its last element last
+            // (a setup's regulator), a copy of the one before it, inserted before the last.
+            let keep_last = form.calculator.keeps_last_element() && form.elements.with_untracked(Vec::len) >= 2;
             let state = form.owner.with(|| {
-                let last = form.elements.with_untracked(|e| e.last().map(|e| e.state.duplicate()));
-                last.unwrap_or_else(|| FormState::new(form.calculator.element_layout().unwrap_or_default()))
+                let copied = form.elements.with_untracked(|e| {
+                    let from = if keep_last { e.len().checked_sub(2) } else { e.len().checked_sub(1) };
+                    from.and_then(|i| e.get(i)).map(|e| e.state.duplicate())
+                });
+                copied.unwrap_or_else(|| FormState::new(form.calculator.element_layout().unwrap_or_default()))
             });
             let element = form.new_element(state);
-            form.elements.update(|e| e.push(element));
+            form.elements.update(|e| {
+                if keep_last {
+                    e.insert(e.len() - 1, element);
+                } else {
+                    e.push(element);
+                }
+            });
         }
     };
     let rows = move || {
