@@ -19,6 +19,7 @@ use crate::physics::fluids;
 use crate::physics::gas_liquid_bed::{self as gas_bed, GasLiquidBedInput};
 use crate::physics::report::{NumericalError, Report};
 use crate::physics::segmented_flow::{self as gas, SegmentedFlowInput};
+use crate::physics::setup::{self, SetupInput};
 use crate::physics::slurry::{self, SlurryInput};
 use crate::physics::tubular::{self, TubularInput};
 
@@ -50,6 +51,9 @@ pub const SEGMENTED_FLOW_DEMO_JSON: &str = include_str!("../public/cases/segment
 /// The demo gas–liquid cartridge case (an invented scenario), as shipped in `public/cases/`.
 pub const GAS_LIQUID_BED_DEMO_JSON: &str = include_str!("../public/cases/gas-liquid-bed-demo.json");
 
+/// The demo whole-setup case (an invented scenario), as shipped in `public/cases/`.
+pub const SETUP_DEMO_JSON: &str = include_str!("../public/cases/setup-demo.json");
+
 /// Which calculator a case is for.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
 #[serde(rename_all = "snake_case")]
@@ -64,6 +68,9 @@ pub enum Calculator {
     SegmentedFlow,
     /// Gas and liquid together through a packed catalyst cartridge (pressure drop, holdup, transfer).
     GasLiquidBed,
+    /// A whole setup as one line of stages: feeds with their pumps, junctions, tubing, coils,
+    /// fittings, cartridges and the regulator, with one pressure budget.
+    Setup,
 }
 
 /// One entry of a calculator's form, in page order.
@@ -289,10 +296,55 @@ const GAS_LIQUID_BED_LAYOUT: &[FormItem] = &[
     Field(gas_bed::REQUIRED_RATE),
 ];
 
+const SETUP_LAYOUT: &[FormItem] = &[
+    Heading("Liquid"),
+    Choice(fluids::selection::LIQUID),
+    Choice(fluids::selection::MIXTURE_FIRST),
+    Choice(fluids::selection::MIXTURE_SECOND),
+    Field(fluids::FIRST_VOLUME_FRACTION),
+    Field(fluids::selection::TEMPERATURE),
+    Field(tubular::DENSITY),
+    Field(tubular::VISCOSITY),
+    Heading("Solids"),
+    Field(setup::D90),
+    Heading("Product"),
+    Field(tubular::CONCENTRATION),
+    Field(tubular::YIELD),
+    Field(tubular::MOLAR_MASS),
+    Heading("Tubing and atmosphere"),
+    Field(crate::physics::ambient::AMBIENT_PRESSURE),
+    Choice(crate::physics::tubing::MATERIAL),
+    Choice(crate::physics::tubing::SIZE),
+];
+
+const SETUP_STAGE_LAYOUT: &[FormItem] = &[
+    Choice(setup::KIND),
+    Choice(setup::PUMP),
+    Field(setup::FLOW),
+    Field(setup::PUMP_MAX_FLOW),
+    Field(setup::PUMP_LIMIT),
+    Field(setup::DRIVE_FORCE),
+    Field(setup::BARREL_BORE),
+    Field(setup::BARREL_RATING),
+    Field(setup::SOLIDS),
+    Field(setup::INNER_DIAMETER),
+    Field(setup::LENGTH),
+    Field(setup::PARTICLE_DIAMETER),
+    Field(setup::VOIDAGE),
+    Field(setup::RATING),
+    Field(setup::SET_POINT),
+];
+
 impl Calculator {
     /// Every calculator, in page order.
-    pub const ALL: [Calculator; 5] =
-        [Calculator::TubularReactor, Calculator::PackedBed, Calculator::SlurryLine, Calculator::SegmentedFlow, Calculator::GasLiquidBed];
+    pub const ALL: [Calculator; 6] = [
+        Calculator::TubularReactor,
+        Calculator::PackedBed,
+        Calculator::SlurryLine,
+        Calculator::SegmentedFlow,
+        Calculator::GasLiquidBed,
+        Calculator::Setup,
+    ];
 
     /// Stable key, as in case files.
     pub const fn key(self) -> &'static str {
@@ -302,6 +354,7 @@ impl Calculator {
             Calculator::SlurryLine => "slurry_line",
             Calculator::SegmentedFlow => "segmented_flow",
             Calculator::GasLiquidBed => "gas_liquid_bed",
+            Calculator::Setup => "setup",
         }
     }
 
@@ -313,6 +366,7 @@ impl Calculator {
             Calculator::SlurryLine => "Slurry line",
             Calculator::SegmentedFlow => "Gas–liquid flow",
             Calculator::GasLiquidBed => "Gas–liquid cartridge",
+            Calculator::Setup => "Whole setup",
         }
     }
 
@@ -324,6 +378,7 @@ impl Calculator {
             Calculator::SlurryLine => &["inlet_pressure", "narrowest_passage", "total_pressure_drop"],
             Calculator::SegmentedFlow => &["gas_equivalents", "residence_time", "saturation_time", "inlet_pressure"],
             Calculator::GasLiquidBed => &["bed_pressure_drop", "liquid_residence_time", "capacity", "required_rate"],
+            Calculator::Setup => &["inlet_pressure", "residence_time", "total_pressure_drop", "narrowest_passage"],
         }
     }
 
@@ -351,6 +406,11 @@ impl Calculator {
                  bed holds and for how long, whether the gas reaches the catalyst as fast as the chemistry needs it, \
                  and what would help."
             }
+            Calculator::Setup => {
+                "The whole line at once: feeds and their pumps, junctions, tubing, coils, fittings, cartridges and the \
+                 back-pressure regulator, with the pressure at every joint against each part's rating, what each pump \
+                 must deliver, the narrowest passage the solids meet and the total residence time."
+            }
         }
     }
 
@@ -362,6 +422,7 @@ impl Calculator {
             Calculator::SlurryLine => SLURRY_LAYOUT,
             Calculator::SegmentedFlow => SEGMENTED_FLOW_LAYOUT,
             Calculator::GasLiquidBed => GAS_LIQUID_BED_LAYOUT,
+            Calculator::Setup => SETUP_LAYOUT,
         }
     }
 
@@ -369,6 +430,7 @@ impl Calculator {
     pub const fn element_layout(self) -> Option<&'static [FormItem]> {
         match self {
             Calculator::SlurryLine => Some(SLURRY_ELEMENT_LAYOUT),
+            Calculator::Setup => Some(SETUP_STAGE_LAYOUT),
             Calculator::TubularReactor | Calculator::PackedBed | Calculator::SegmentedFlow | Calculator::GasLiquidBed => None,
         }
     }
@@ -381,6 +443,7 @@ impl Calculator {
             Calculator::SlurryLine => SLURRY_DEMO_JSON,
             Calculator::SegmentedFlow => SEGMENTED_FLOW_DEMO_JSON,
             Calculator::GasLiquidBed => GAS_LIQUID_BED_DEMO_JSON,
+            Calculator::Setup => SETUP_DEMO_JSON,
         }
     }
 
@@ -392,6 +455,7 @@ impl Calculator {
             Calculator::SlurryLine => "slurry-demo.json",
             Calculator::SegmentedFlow => "segmented-flow-demo.json",
             Calculator::GasLiquidBed => "gas-liquid-bed-demo.json",
+            Calculator::Setup => "setup-demo.json",
         }
     }
 
@@ -403,7 +467,30 @@ impl Calculator {
         match self {
             Calculator::SegmentedFlow => &[("tubing_material", Added::Choice("none"))],
             Calculator::PackedBed | Calculator::SlurryLine => &[PUMP],
-            Calculator::TubularReactor | Calculator::GasLiquidBed => &[],
+            Calculator::TubularReactor | Calculator::GasLiquidBed | Calculator::Setup => &[],
+        }
+    }
+
+    /// The first word of the keys of a line's per-element inputs, figures and checks
+    /// (`element_3_length`, `stage_3_length`).
+    pub const fn element_prefix(self) -> &'static str {
+        match self {
+            Calculator::Setup => "stage",
+            _ => "element",
+        }
+    }
+
+    /// Whether a new line element goes before the last one (a setup ends with its regulator),
+    /// rather than after it.
+    pub const fn keeps_last_element(self) -> bool {
+        matches!(self, Calculator::Setup)
+    }
+
+    /// The case format version that introduced this calculator (older files cannot name it).
+    pub const fn since_format(self) -> u32 {
+        match self {
+            Calculator::Setup => 2,
+            _ => 1,
         }
     }
 
@@ -426,7 +513,7 @@ impl Calculator {
                     .map(|input| bed::map::cartridge_map(&input, bed::map::CELLS))
                     .map_err(CaseError::Inputs),
             ),
-            Calculator::TubularReactor | Calculator::SlurryLine | Calculator::SegmentedFlow | Calculator::GasLiquidBed => None,
+            Calculator::TubularReactor | Calculator::SlurryLine | Calculator::SegmentedFlow | Calculator::GasLiquidBed | Calculator::Setup => None,
         }
     }
 
@@ -453,6 +540,10 @@ impl Calculator {
             Calculator::GasLiquidBed => {
                 let input = GasLiquidBedInput::from_source(src).map_err(CaseError::Inputs)?;
                 gas_bed::evaluate(&input).map_err(|e| CaseError::Calculation(e.to_string()))
+            }
+            Calculator::Setup => {
+                let input = SetupInput::from_source(src, elements).map_err(CaseError::Inputs)?;
+                setup::evaluate(&input).map_err(CaseError::Numerical)
             }
         }
     }

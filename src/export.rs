@@ -8,9 +8,10 @@ mod sheet;
 
 pub use sheet::{Cell, Sheet, Table};
 
-use crate::case::{CaseFile, Entry, FormItem};
+use crate::case::{Calculator, CaseFile, Entry, FormItem};
 use crate::physics::plot::{Axis, Marker, Plot, Series};
 use crate::physics::report::{Figure, RangeWarning, Report, Verdict};
+use crate::physics::setup::keys as stage;
 use crate::physics::slurry::keys::{self, ElementKey};
 use crate::physics::units::{Unit, format_significant, unit_by_symbol};
 
@@ -99,9 +100,9 @@ pub fn results(header: Header<'_>, report: &Report) -> Sheet {
     sheet
 }
 
-/// The per-element figures of a line (`key` tables of the slurry calculator), with the heading
-/// each gets in the element table.
-const ELEMENT_FIGURES: [(&str, &[ElementKey; keys::MAX_ELEMENTS]); 7] = [
+/// The per-element figures of a slurry line (its `key` tables), with the heading each gets in
+/// the element table.
+const ELEMENT_FIGURES: &[(&str, &[ElementKey; keys::MAX_ELEMENTS])] = &[
     ("Mean velocity", &keys::MEAN_VELOCITY),
     ("Residence time", &keys::RESIDENCE_TIME),
     ("Settled fraction (solids reaching the wall)", &keys::DEPOSITED_FRACTION),
@@ -111,8 +112,33 @@ const ELEMENT_FIGURES: [(&str, &[ElementKey; keys::MAX_ELEMENTS]); 7] = [
     ("Pressure drop", &keys::PRESSURE_DROP),
 ];
 
-/// The per-element checks, with their headings.
-const ELEMENT_CHECKS: [(&str, &[ElementKey; keys::MAX_ELEMENTS]); 2] = [("Settling", &keys::SETTLING), ("Clogging", &keys::CLOGGING)];
+/// The per-element checks of a slurry line, with their headings.
+const ELEMENT_CHECKS: &[(&str, &[ElementKey; keys::MAX_ELEMENTS])] = &[("Settling", &keys::SETTLING), ("Clogging", &keys::CLOGGING)];
+
+/// The per-stage figures of a setup, with their headings.
+const STAGE_FIGURES: &[(&str, &[ElementKey; keys::MAX_ELEMENTS])] = &[
+    ("Liquid flow", &stage::LIQUID_FLOW),
+    ("Residence time", &stage::RESIDENCE_TIME),
+    ("Pressure drop", &stage::PRESSURE_DROP),
+    ("Inlet pressure (gauge)", &stage::INLET_PRESSURE),
+    ("Largest pump pressure", &stage::PUMP_PRESSURE),
+    ("Solids volume fraction", &stage::SOLIDS_FRACTION),
+    ("Passage-to-particle ratio (d90)", &stage::PASSAGE_RATIO),
+];
+
+/// The per-stage checks of a setup, with their headings.
+const STAGE_CHECKS: &[(&str, &[ElementKey; keys::MAX_ELEMENTS])] =
+    &[("Pressure against rating", &stage::PRESSURE), ("Pump check", &stage::PUMP_CHECK), ("Clogging", &stage::CLOGGING)];
+
+/// A line's table: the word for a row, the sheet's title, and its figure and check tables.
+type LineTables = (&'static str, &'static str, &'static [(&'static str, &'static [ElementKey; keys::MAX_ELEMENTS])], &'static [(&'static str, &'static [ElementKey; keys::MAX_ELEMENTS])]);
+
+fn line_tables(calculator: Calculator) -> LineTables {
+    match calculator {
+        Calculator::Setup => ("Stage", "Setup stages", STAGE_FIGURES, STAGE_CHECKS),
+        _ => ("Element", "Line elements", ELEMENT_FIGURES, ELEMENT_CHECKS),
+    }
+}
 
 /// The line's elements, one row each: the element's entries (options by name, sizes in lab
 /// units), its key figures and its verdicts, the worst of them in `Verdict`. A figure that no
@@ -122,7 +148,8 @@ pub fn elements(header: Header<'_>, report: &Report) -> Option<Sheet> {
     let case = header.case;
     let layout = case.calculator.element_layout()?;
     let n = case.elements.len().min(keys::MAX_ELEMENTS);
-    let mut columns = vec!["Element".to_owned()];
+    let (word, title, figure_tables, check_tables) = line_tables(case.calculator);
+    let mut columns = vec![word.to_owned()];
     let mut cells: Vec<Vec<Cell>> = (1..=n).map(|i| vec![Cell::text(i.to_string())]).collect();
     for item in layout {
         match item {
@@ -150,7 +177,7 @@ pub fn elements(header: Header<'_>, report: &Report) -> Option<Sheet> {
             FormItem::Heading(_) => {}
         }
     }
-    for (label, table) in ELEMENT_FIGURES {
+    for &(label, table) in figure_tables {
         let found: Vec<Option<&Figure>> = table[..n].iter().map(|k| report.figure(k.key)).collect();
         let Some(dimension) = found.iter().flatten().next().map(|f| f.dimension) else { continue };
         let unit = dimension.default_unit();
@@ -160,7 +187,7 @@ pub fn elements(header: Header<'_>, report: &Report) -> Option<Sheet> {
         }
     }
     let mut worst: Vec<Option<Verdict>> = vec![None; n];
-    for (label, table) in ELEMENT_CHECKS {
+    for &(label, table) in check_tables {
         columns.push(label.to_owned());
         for ((row, k), w) in cells.iter_mut().zip(&table[..n]).zip(worst.iter_mut()) {
             let verdict = report.check(k.key).map(|c| c.verdict);
@@ -172,7 +199,7 @@ pub fn elements(header: Header<'_>, report: &Report) -> Option<Sheet> {
     for (row, w) in cells.iter_mut().zip(worst) {
         row.push(w.map_or(Cell::Empty, |v| Cell::text(v.word())));
     }
-    Some(header.sheet("Line elements", "lab units, named in each column heading", vec![Table { columns, rows: cells }]))
+    Some(header.sheet(title, "lab units, named in each column heading", vec![Table { columns, rows: cells }]))
 }
 
 /// The data behind one chart: each series as columns (one x column when every series has the

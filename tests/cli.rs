@@ -246,3 +246,36 @@ fn table_arguments_are_checked() {
     assert_eq!(run(&["--table", "csv", "--text", DEMO], None).status.code(), Some(2));
     assert_eq!(run(&["--table", "csv", "-", "-"], None).status.code(), Some(2));
 }
+
+#[test]
+fn the_setup_demo_evaluates_and_its_table_row_leaves_stage_figures_to_the_stage_table() {
+    let setup = format!("{CASES}setup-demo.json");
+    let out = run(&[&setup], None);
+    assert!(out.status.success(), "{}", String::from_utf8_lossy(&out.stderr));
+    let v: serde_json::Value = serde_json::from_slice(&out.stdout).unwrap();
+    assert_eq!(v["calculator"], "setup");
+    let checks = v["report"]["checks"].as_array().unwrap();
+    assert!(checks.iter().any(|c| c["key"] == "stage_1_pump_check"));
+    let out = run(&["--table", "csv", &setup, &format!("{CASES}tubular-demo.json")], None);
+    assert!(out.status.success(), "{}", String::from_utf8_lossy(&out.stderr));
+    let rows = csv_records(&String::from_utf8(out.stdout).unwrap());
+    let head = rows.iter().position(|r| r[0] == "File").unwrap();
+    let columns = &rows[head];
+    assert!(columns.iter().any(|c| c == "Whole setup: Pressure at the first pump (gauge) (bar)"), "{columns:?}");
+    assert!(columns.iter().any(|c| c == "Whole setup: Stage 2: pump (verdict)"), "{columns:?}");
+    assert!(!columns.iter().any(|c| c.contains("Stage 4: pressure drop")), "per-stage figures are left to the stage table");
+    let row = &rows[head + 1];
+    assert_eq!(row[2], "setup");
+    assert_eq!(row[columns.iter().position(|c| c == "Whole setup: Stage 2: pump (verdict)").unwrap()], "caution");
+}
+
+#[test]
+fn stage_errors_name_the_stage() {
+    let demo = std::fs::read_to_string(format!("{CASES}setup-demo.json")).unwrap();
+    let bad = demo.replace("\"length\": { \"value\": 10, \"unit\": \"m\" }", "\"length\": { \"value\": -10, \"unit\": \"m\" }");
+    assert_ne!(bad, demo);
+    let out = run(&["-"], Some(&bad));
+    assert_eq!(out.status.code(), Some(1));
+    let err = String::from_utf8(out.stderr).unwrap();
+    assert!(err.contains("stage_4_length") && err.contains("-10 m"), "{err}");
+}

@@ -221,3 +221,24 @@ fn every_chart_of_every_demo_exports() {
         }
     }
 }
+
+#[test]
+fn the_stage_table_has_a_row_per_stage_with_its_figures_and_verdicts() {
+    let (case, report) = demo(Calculator::Setup);
+    let sheet = export::elements(Header { case: &case, date: DATE, significant: 4 }, &report).unwrap();
+    let rows = records(&sheet.to_csv());
+    assert_eq!(header_value(&rows, "Table"), "Setup stages");
+    let t = table(&rows, "Stage", None);
+    assert_eq!(t.len() - 1, case.elements.len());
+    let col = |name: &str| t[0].iter().position(|c| c == name).unwrap_or_else(|| panic!("no column {name}: {:?}", t[0]));
+    // Stage 4, the demo's 10 m coil: its pressure drop as the report gives it, in bar.
+    let dp = report.figure("stage_4_pressure_drop").unwrap().value.get();
+    assert_eq!(t[4][col("Pressure drop (bar)")], format_significant(dp / 1e5, 4));
+    assert_eq!(t[4][col("Stage")], "4");
+    assert_eq!(t[4][col("Pressure against rating")], "fine");
+    // Stage 2, the 40 bar piston pump upstream of a 20 bar coil: a caution, and no pressure-drop cell.
+    assert_eq!(t[2][col("Pump")], "Piston (HPLC-type)");
+    assert_eq!(t[2][col("Pump check")], "caution");
+    assert_eq!(t[2][col("Verdict")], "caution");
+    assert!(t[2][col("Pressure drop (bar)")].is_empty());
+}

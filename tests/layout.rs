@@ -100,8 +100,8 @@ async fn tabs_follow_the_aria_pattern_and_arrow_keys_move_between_them() {
     assert_eq!(focused, "tab-packed_bed");
     let second = b.client.find(Locator::Css("[data-testid=tab-packed_bed]")).await.unwrap();
     second.send_keys("\u{E010}").await.unwrap();
-    b.wait_for("[data-testid=panel-gas_liquid_bed]").await;
-    let last = b.client.find(Locator::Css("[data-testid=tab-gas_liquid_bed]")).await.unwrap();
+    b.wait_for("[data-testid=panel-setup]").await;
+    let last = b.client.find(Locator::Css("[data-testid=tab-setup]")).await.unwrap();
     last.send_keys("\u{E011}").await.unwrap();
     b.wait_for("[data-testid=panel-tubular_reactor]").await;
     b.close().await;

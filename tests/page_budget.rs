@@ -26,6 +26,7 @@ fn flow_field(c: Calculator) -> &'static str {
     match c {
         Calculator::TubularReactor | Calculator::PackedBed | Calculator::SlurryLine => "flow",
         Calculator::SegmentedFlow | Calculator::GasLiquidBed => "liquid_flow",
+        Calculator::Setup => "stage_1_flow",
     }
 }
 

@@ -36,7 +36,7 @@ fn every_unit_round_trips() {
         Dimension::Density, Dimension::Concentration, Dimension::MolarMass, Dimension::Mass,
         Dimension::Amount, Dimension::SpecificAmount, Dimension::Frequency,
         Dimension::MassFlow, Dimension::MolarFlow, Dimension::SpaceTimeYield, Dimension::Velocity, Dimension::Fraction,
-        Dimension::Number,
+        Dimension::Number, Dimension::Force,
     ];
     for d in all {
         for u in d.units() {

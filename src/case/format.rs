@@ -75,6 +75,13 @@ pub(crate) fn read_value(value: &Value) -> Result<CaseFile, CaseError> {
         }
     }
     let calculator = read_calculator(doc.get("calculator"), &mut problems);
+    let calculator = match calculator {
+        Some(c) if version < u64::from(c.since_format()) => {
+            problems.add("calculator", format!("the {} calculator came with case format {}; this file is format {version}", c.title().to_lowercase(), c.since_format()));
+            None
+        }
+        other => other,
+    };
     let title = read_text_entry(doc, "title", &mut problems);
     let notes = read_text_entry(doc, "notes", &mut problems);
     let created = read_timestamp(doc, "created", &mut problems);

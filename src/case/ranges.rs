@@ -147,7 +147,7 @@ pub fn ranged_inputs(case: &CaseFile) -> Vec<RangedInput> {
             let FormItem::Field(spec) = item else { continue };
             if let Some(Entry::Quantity { value, unit, range: Some([low, high]) }) = entries.get(spec.key) {
                 let label = match element {
-                    Some(i) => format!("{} (element {})", spec.label, i + 1),
+                    Some(i) => format!("{} ({} {})", spec.label, case.calculator.element_prefix(), i + 1),
                     None => spec.label.to_owned(),
                 };
                 out.push(RangedInput { element, key: spec.key, label, value: *value, low: *low, high: *high, unit: unit.clone() });

@@ -65,7 +65,7 @@ pub fn columns(cases: &[BatchCase]) -> Vec<Column> {
     for &calculator in &calculators {
         let reports = || evaluated.iter().filter(|(case, _)| case.calculator == calculator).map(|(_, r)| r);
         let mut figures: Vec<Column> = Vec::new();
-        for f in reports().flat_map(|r| &r.figures).filter(|f| !f.key.starts_with("element_")) {
+        for f in reports().flat_map(|r| &r.figures).filter(|f| !f.key.starts_with(&format!("{}_", calculator.element_prefix()))) {
             let key = format!("{}.{}", calculator.key(), f.key);
             if figures.iter().all(|c| c.key != key) {
                 let unit = f.dimension.default_unit();

@@ -52,6 +52,8 @@ pub struct LineDiagram {
     pub key: &'static str,
     /// Title for people.
     pub title: &'static str,
+    /// What a part is called for people: "Element" (a slurry line) or "Stage" (a setup).
+    pub part_word: &'static str,
     /// The parts, first to last.
     pub parts: Vec<LinePart>,
     /// Gauge pressure before the first part, between parts and after the last (parts + 1 values), Pa.

@@ -1,6 +1,8 @@
 //! Where a calculator's inputs come from (a case file, the page's fields), behind one trait, so
 //! both are validated by the same code and give the same errors.
 
+use std::cell::RefCell;
+
 use serde::Serialize;
 
 use super::input::{FieldSpec, InputError};
@@ -63,5 +65,37 @@ impl Collector {
     /// The errors collected so far.
     pub fn into_errors(self) -> Vec<InputError> {
         self.errors
+    }
+}
+
+/// A source that passes every request on and remembers which keys were asked for: which entries
+/// apply with the current choices (the page shows and saves those; tests check a stage reads
+/// only its kind's).
+pub struct Watcher<'a> {
+    inner: &'a dyn FieldSource,
+    asked: RefCell<Vec<&'static str>>,
+}
+
+impl<'a> Watcher<'a> {
+    /// Watches `inner`.
+    pub fn new(inner: &'a dyn FieldSource) -> Self {
+        Self { inner, asked: RefCell::new(Vec::new()) }
+    }
+
+    /// The keys asked for, in order (repeats kept).
+    pub fn into_asked(self) -> Vec<&'static str> {
+        self.asked.into_inner()
+    }
+}
+
+impl FieldSource for Watcher<'_> {
+    fn quantity(&self, spec: &FieldSpec) -> Result<f64, InputError> {
+        self.asked.borrow_mut().push(spec.key);
+        self.inner.quantity(spec)
+    }
+
+    fn choice(&self, spec: &ChoiceSpec) -> Result<usize, InputError> {
+        self.asked.borrow_mut().push(spec.key);
+        self.inner.choice(spec)
     }
 }

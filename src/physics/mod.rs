@@ -18,6 +18,7 @@ pub mod plot;
 pub mod practical;
 pub mod report;
 pub mod segmented_flow;
+pub mod setup;
 pub mod settling;
 pub mod slurry;
 pub mod solids;

@@ -216,6 +216,16 @@ pub fn budget_verdict(ratio: f64, worst_ratio: f64) -> Verdict {
     }
 }
 
+/// The words after a pressure budget's numbers: `over` for a problem (e.g. ": over the
+/// rating"), the margin for a caution, nothing when fine.
+pub const fn budget_note(verdict: Verdict, over: &'static str) -> &'static str {
+    match verdict {
+        Verdict::Problem => over,
+        Verdict::Caution => ": less than 20 % margin (common practice, no source)",
+        Verdict::Fine => "",
+    }
+}
+
 /// Outcome of a check, from harmless to stop-and-fix.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, PartialOrd, Ord, Serialize)]
 #[serde(rename_all = "snake_case")]

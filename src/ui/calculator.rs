@@ -1,8 +1,6 @@
 //! `CalculatorPanel`: one calculator's form, the report derived from it, and its layout. Generic
 //! over [`Calculator`]: which fields apply is learnt by watching which ones the physics reads.
 
-use std::cell::RefCell;
-
 use leptos::prelude::*;
 
 use super::advice::AdviceView;
@@ -11,12 +9,12 @@ use super::charts::PlotList;
 use super::diagrams::{LineStrip, PartTable, SlugView, line_of, slugs_of};
 use super::field::{FieldErrors, FieldState, QuantityField};
 use super::results::{CheckList, ResultTable};
-use super::print::{PrintRecord, Printing, entry_rows, entry_text};
 use super::maps::MapView;
+use super::print::{PrintRecord, Printing, entry_rows};
 use super::ranges::{RangeBands, follow_ranges};
 use super::summary::AnswerSummary;
 use crate::case::{Calculator, CaseError, CaseFile, Entries, Entry, FormItem};
-use crate::physics::form::{ChoiceSpec, FieldSource};
+use crate::physics::form::{ChoiceSpec, FieldSource, Watcher};
 use crate::physics::input::{FieldSpec, InputError};
 use crate::physics::report::{Advice, Report, Verdict};
 use crate::physics::units::{parse_entry, parse_range};
@@ -220,9 +218,12 @@ impl CalculatorForm {
         }
     }
 
-    /// The case as it stands. Fields that apply and are not numbers are reported instead.
+    /// The case as it stands. Fields that apply and are not numbers are reported instead: of
+    /// the calculator, those the physics read; of each line element, those the physics read of
+    /// it (a stage of a setup holds only the entries of its kind), or all of its fields when
+    /// nothing of it was read.
     pub fn to_case(&self) -> Result<CaseFile, Vec<InputError>> {
-        let needed = untrack(|| run_watched(self).1);
+        let (_, needed, per_element) = untrack(|| run_watched_all(self));
         let mut errors = Vec::new();
         let inputs = self.main.to_entries(&needed, &mut errors);
         let all: Vec<&'static str> = self
@@ -232,7 +233,16 @@ impl CalculatorForm {
             .iter()
             .filter_map(FormItem::key)
             .collect();
-        let elements = self.elements.get_untracked().iter().map(|e| e.state.to_entries(&all, &mut errors)).collect();
+        let elements = self
+            .elements
+            .get_untracked()
+            .iter()
+            .zip(per_element.iter().map(Some).chain(std::iter::repeat(None)))
+            .map(|(e, read)| {
+                let needed = read.filter(|keys| !keys.is_empty()).map_or(all.as_slice(), Vec::as_slice);
+                e.state.to_entries(needed, &mut errors)
+            })
+            .collect();
         if !errors.is_empty() {
             return Err(errors);
         }
@@ -258,41 +268,17 @@ impl CalculatorForm {
     }
 }
 
-/// A source that passes every request on and remembers which keys the physics asked for.
-struct Watcher<'a> {
-    inner: &'a dyn FieldSource,
-    asked: RefCell<Vec<&'static str>>,
-}
-
-impl FieldSource for Watcher<'_> {
-    fn quantity(&self, spec: &FieldSpec) -> Result<f64, InputError> {
-        self.asked.borrow_mut().push(spec.key);
-        self.inner.quantity(spec)
-    }
-
-    fn choice(&self, spec: &ChoiceSpec) -> Result<usize, InputError> {
-        self.asked.borrow_mut().push(spec.key);
-        self.inner.choice(spec)
-    }
-}
-
-/// Runs the calculator on the form and returns the result and the keys of the calculator-level
-/// fields and choices it read (those that apply with the current choices).
-fn run_watched(form: &CalculatorForm) -> (Result<Report, CaseError>, Vec<&'static str>) {
-    let (result, asked, _) = run_watched_all(form);
-    (result, asked)
-}
-
-/// As [`run_watched`], also returning for each line element the keys the physics read of it
-/// (a stage of a setup reads only the fields of its kind).
+/// Runs the calculator on the form and returns the result, the keys of the calculator-level
+/// fields and choices it read (those that apply with the current choices), and for each line
+/// element the keys the physics read of it (a stage of a setup reads only the fields of its kind).
 fn run_watched_all(form: &CalculatorForm) -> (Result<Report, CaseError>, Vec<&'static str>, Vec<Vec<&'static str>>) {
-    let watcher = Watcher { inner: &form.main, asked: RefCell::new(Vec::new()) };
+    let watcher = Watcher::new(&form.main);
     let elements = form.elements.get();
-    let watched: Vec<Watcher> = elements.iter().map(|e| Watcher { inner: &e.state, asked: RefCell::new(Vec::new()) }).collect();
+    let watched: Vec<Watcher> = elements.iter().map(|e| Watcher::new(&e.state)).collect();
     let sources: Vec<&dyn FieldSource> = watched.iter().map(|w| w as &dyn FieldSource).collect();
     let result = form.calculator.evaluate(&watcher, &sources);
-    let per_element = watched.into_iter().map(|w| w.asked.into_inner()).collect();
-    (result, watcher.asked.into_inner(), per_element)
+    let per_element = watched.into_iter().map(Watcher::into_asked).collect();
+    (result, watcher.into_asked(), per_element)
 }
 
 /// For each line element (by its stable id), the keys of the fields the physics read; an
@@ -316,14 +302,15 @@ struct Outcome {
     element_keys: Vec<(u32, Vec<&'static str>)>,
 }
 
-/// Whether a check belongs to one element of a line (shown in that element's detail).
-fn element_check(key: &str) -> bool {
-    key.starts_with("element_")
+/// Whether a check or figure belongs to one element of a line (shown in that element's
+/// detail): its key starts with the calculator's element prefix (`element_`, `stage_`).
+fn element_check(calculator: Calculator, key: &str) -> bool {
+    element_number(calculator, key).is_some()
 }
 
-/// The number of the element a check or figure key belongs to (`element_3_…` → 3).
-fn element_number(key: &str) -> Option<usize> {
-    key.strip_prefix("element_")?.split('_').next()?.parse().ok()
+/// The number of the element a check or figure key belongs to (`element_3_…`, `stage_3_…` → 3).
+fn element_number(calculator: Calculator, key: &str) -> Option<usize> {
+    key.strip_prefix(calculator.element_prefix())?.strip_prefix('_')?.split('_').next()?.parse().ok()
 }
 
 /// A calculator: its toolbar; the answer first (summary), the inputs, and the detail (drawing,
@@ -353,14 +340,19 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
     let report: Signal<Option<Report>> = Memo::new(move |_| outcome.with(|o| o.report.clone())).into();
     let applicable = Memo::new(move |_| outcome.with(|o| o.applicable.clone()));
     let calculator = form.calculator;
-    // Errors at entries that are not on the page (the list of elements as a whole) are said in
-    // the notice; the others show at their fields, which are then red.
+    // Errors at entries that are not on the page (the list of elements as a whole) or that show
+    // no error of their own (an element's choices) are said in the notice; the others show at
+    // their fields, which are then red.
     let element_names = {
         let form = form.clone();
         Memo::new(move |_| {
             let n = form.elements.with(Vec::len);
             let layout = calculator.element_layout().unwrap_or_default();
-            (1..=n).flat_map(|i| layout.iter().filter_map(FormItem::key).map(move |k| format!("element_{i}_{k}"))).collect::<Vec<_>>()
+            let prefix = calculator.element_prefix();
+            // Quantity fields show their own errors; a choice's (a stage in the wrong place) is
+            // said in the notice.
+            let fields = layout.iter().filter_map(|item| if let FormItem::Field(f) = item { Some(f.key) } else { None });
+            (1..=n).flat_map(|i| fields.clone().map(move |k| format!("{prefix}_{i}_{k}"))).collect::<Vec<_>>()
         })
     };
     let unplaced = Memo::new(move |_| {
@@ -429,7 +421,7 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
         verdicts
     });
     let select = Callback::new(move |key: &'static str| {
-        if let Some(n) = element_number(key) {
+        if let Some(n) = element_number(calculator, key) {
             selected.set(n.saturating_sub(1));
         }
     });
@@ -460,22 +452,22 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                 .collect::<Vec<_>>()
         }
     };
-    let main_checks = Callback::new(|key: &'static str| !element_check(key));
+    let main_checks = Callback::new(move |key: &'static str| !element_check(calculator, key));
     let main_figures = Signal::derive(move || {
-        report.with(|r| r.as_ref().map(|r| r.figures.iter().map(|f| f.key).filter(|k| !element_check(k)).collect::<Vec<_>>()).unwrap_or_default())
+        report.with(|r| r.as_ref().map(|r| r.figures.iter().map(|f| f.key).filter(|k| !element_check(calculator, k)).collect::<Vec<_>>()).unwrap_or_default())
     });
     let element_figures = Signal::derive(move || {
         let n = selected.get() + 1;
-        report.with(|r| r.as_ref().map(|r| r.figures.iter().map(|f| f.key).filter(|k| element_number(k) == Some(n)).collect::<Vec<_>>()).unwrap_or_default())
+        report.with(|r| r.as_ref().map(|r| r.figures.iter().map(|f| f.key).filter(|k| element_number(calculator, k) == Some(n)).collect::<Vec<_>>()).unwrap_or_default())
     });
-    let element_checks = Callback::new(move |key: &'static str| element_number(key) == Some(selected.get_untracked() + 1));
+    let element_checks = Callback::new(move |key: &'static str| element_number(calculator, key) == Some(selected.get_untracked() + 1));
     let element_advice = Callback::new(move |a: Advice| {
         let n = selected.get_untracked() + 1;
-        a.checks.iter().all(|k| element_number(k) == Some(n))
+        a.checks.iter().all(|k| element_number(calculator, k) == Some(n))
     });
     let shared_advice = Callback::new(move |a: Advice| {
         // Said once in the main list: advice for line-level checks, or shared by several elements.
-        let elements: Vec<usize> = a.checks.iter().filter_map(|k| element_number(k)).collect();
+        let elements: Vec<usize> = a.checks.iter().filter_map(|k| element_number(calculator, k)).collect();
         elements.len() < a.checks.len() || elements.windows(2).any(|w| w[0] != w[1])
     });
     let printing = use_context::<Printing>();
@@ -487,23 +479,16 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                 let mut ignored = Vec::new();
                 let inputs = form.main.to_entries(&[], &mut ignored);
                 let entries = entry_rows(calculator.layout(), &applicable, &inputs);
+                // Each element's entries that the physics read (a stage holds only its kind's).
+                let read = outcome.with_untracked(|o| o.element_keys.clone());
+                let layout = calculator.element_layout().unwrap_or_default();
+                let all: Vec<&'static str> = layout.iter().filter_map(FormItem::key).collect();
                 let elements = form.elements.with_untracked(|list| {
                     list.iter()
                         .map(|e| {
                             let entries = e.state.to_entries(&[], &mut ignored);
-                            calculator
-                                .element_layout()
-                                .unwrap_or_default()
-                                .iter()
-                                .filter_map(|item| match item {
-                                    FormItem::Choice(c) => entries.get(c.key).map(|v| match v {
-                                        Entry::Choice(k) => c.options.iter().find(|(key, _)| key == k).map_or(k.clone(), |(_, l)| (*l).to_owned()),
-                                        other => entry_text(other),
-                                    }),
-                                    FormItem::Field(f) => Some(entries.get(f.key).map_or_else(|| "—".to_owned(), entry_text)),
-                                    FormItem::Heading(_) => None,
-                                })
-                                .collect::<Vec<_>>()
+                            let keys = read.iter().find(|(id, _)| *id == e.id).map(|(_, k)| k).filter(|k| !k.is_empty()).unwrap_or(&all);
+                            entry_rows(layout, keys, &entries).into_iter().map(|(label, value)| format!("{label}: {value}")).collect::<Vec<_>>().join("; ")
                         })
                         .collect::<Vec<_>>()
                 });
@@ -553,7 +538,7 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                         <LineStrip line=line.into() selected=selected />
                         <PartTable line=line.into() selected=selected />
                         <section class="element-detail" data-testid="element-detail">
-                            <h3>{move || line.with(|l| l.as_ref().and_then(|l| l.parts.get(selected.get()).map(|p| format!("Element {}: {}", selected.get() + 1, p.kind))).unwrap_or_default())}</h3>
+                            <h3>{move || line.with(|l| l.as_ref().and_then(|l| l.parts.get(selected.get()).map(|p| format!("{} {}: {}", element_word(calculator), selected.get() + 1, p.kind))).unwrap_or_default())}</h3>
                             {move || { selected.track(); view! { <CheckList report=report wanted=element_checks testid="element-checks" /> } }}
                             {move || { selected.track(); view! { <AdviceView report=report wanted=element_advice select=select testid="element-advice" /> } }}
                             <ResultTable report=report keys=element_figures testid="element-results" />
@@ -571,6 +556,11 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
             {record}
         </section>
     }
+}
+
+/// What one entry of a line is called on the page: "Element" or "Stage".
+fn element_word(calculator: Calculator) -> &'static str {
+    if calculator.element_prefix() == "stage" { "Stage" } else { "Element" }
 }
 
 /// One entry of a calculator's form: a heading, a quantity field or a choice.
@@ -628,6 +618,9 @@ fn ChoicePicker(spec: ChoiceSpec, selected: RwSignal<usize>) -> impl IntoView {
 #[component]
 fn ElementList(form: CalculatorForm) -> impl IntoView {
     let elements = form.elements;
+    let prefix = form.calculator.element_prefix();
+    let word = element_word(form.calculator);
+    let lower = word.to_lowercase();
     let read = use_context::<ElementFieldsShown>();
     // A field shows when the physics read it for this element, or when nothing of the element
     // was read yet.
@@ -637,12 +630,24 @@ fn ElementList(form: CalculatorForm) -> impl IntoView {
     let add = {
         let form = form.clone();
         move |_| {
+            // A copy of the last element, appended; where the line keeps its last element last
+            // (a setup's regulator), a copy of the one before it, inserted before the last.
+            let keep_last = form.calculator.keeps_last_element() && form.elements.with_untracked(Vec::len) >= 2;
             let state = form.owner.with(|| {
-                let last = form.elements.with_untracked(|e| e.last().map(|e| e.state.duplicate()));
-                last.unwrap_or_else(|| FormState::new(form.calculator.element_layout().unwrap_or_default()))
+                let copied = form.elements.with_untracked(|e| {
+                    let from = if keep_last { e.len().checked_sub(2) } else { e.len().checked_sub(1) };
+                    from.and_then(|i| e.get(i)).map(|e| e.state.duplicate())
+                });
+                copied.unwrap_or_else(|| FormState::new(form.calculator.element_layout().unwrap_or_default()))
             });
             let element = form.new_element(state);
-            form.elements.update(|e| e.push(element));
+            form.elements.update(|e| {
+                if keep_last {
+                    e.insert(e.len() - 1, element);
+                } else {
+                    e.push(element);
+                }
+            });
         }
     };
     let rows = move || {
@@ -654,6 +659,7 @@ fn ElementList(form: CalculatorForm) -> impl IntoView {
                 let id = element.id;
                 let n = i + 1;
                 let remove = move |_| elements.update(|e| e.retain(|x| x.id != id));
+                let lower = lower.clone();
                 let raise = move |_| {
                     elements.update(|e| {
                         if let Some(p) = e.iter().position(|x| x.id == id).filter(|p| *p > 0) {
@@ -669,18 +675,18 @@ fn ElementList(form: CalculatorForm) -> impl IntoView {
                             {items.choices.iter().map(|(spec, sel)| {
                                 let (spec, sel) = (*spec, *sel);
                                 move || shown(id, spec.key).then(|| view! {
-                                    <ChoiceSelect spec=spec selected=sel name=format!("element_{n}_{}", spec.key) />
+                                    <ChoiceSelect spec=spec selected=sel name=format!("{prefix}_{n}_{}", spec.key) />
                                 })
                             }).collect_view()}
-                            <button type="button" class="small" title="Move up" aria-label=format!("Move element {n} up") on:click=raise disabled=n == 1>"↑"</button>
-                            <button type="button" class="small" title="Remove" aria-label=format!("Remove element {n}") data-testid=format!("remove-element-{n}") on:click=remove>"✕"</button>
+                            <button type="button" class="small" title="Move up" aria-label=format!("Move {lower} {n} up") on:click=raise disabled=n == 1>"↑"</button>
+                            <button type="button" class="small" title="Remove" aria-label=format!("Remove {lower} {n}") data-testid=format!("remove-element-{n}") on:click=remove>"✕"</button>
                         </div>
                         <div class="element-fields">
                             {items.fields.iter().map(|(spec, st)| {
                                 let (spec, st) = (*spec, *st);
                                 let key = spec.key;
                                 move || shown(id, key).then(|| view! {
-                                    <QuantityField spec=spec state=st name=format!("element_{n}_{}", spec.key) />
+                                    <QuantityField spec=spec state=st name=format!("{prefix}_{n}_{}", spec.key) />
                                 })
                             }).collect_view()}
                         </div>
@@ -691,9 +697,9 @@ fn ElementList(form: CalculatorForm) -> impl IntoView {
     };
     view! {
         <fieldset class="elements">
-            <legend>"Line elements, in flow order"</legend>
+            <legend>{if word == "Stage" { "Stages, in flow order" } else { "Line elements, in flow order" }}</legend>
             <ol class="element-list">{rows}</ol>
-            <button type="button" data-testid="add-element" on:click=add>"Add element"</button>
+            <button type="button" data-testid="add-element" on:click=add>{format!("Add {}", word.to_lowercase())}</button>
         </fieldset>
     }
 }

@@ -6,7 +6,7 @@
 use leptos::prelude::*;
 
 use super::display::use_display;
-use crate::physics::diagram::{Diagram, LineDiagram, SlugStrip};
+use crate::physics::diagram::{Diagram, LineDiagram, LinePart, SlugStrip};
 use crate::physics::report::{Report, Verdict};
 use crate::physics::units::Dimension;
 
@@ -25,6 +25,15 @@ fn symbol(v: Verdict) -> &'static str {
         Verdict::Fine => "✓",
         Verdict::Caution => "!",
         Verdict::Problem => "✕",
+    }
+}
+
+/// Bore × length of a part, or a dash for a part without a passage (a feed).
+fn size(part: &LinePart) -> String {
+    if part.length.get() == 0.0 {
+        "—".to_owned()
+    } else {
+        format!("{} × {}", Dimension::Length.show(part.bore.get(), 3), Dimension::Length.show(part.length.get(), 3))
     }
 }
 
@@ -57,10 +66,10 @@ pub fn LineStrip(line: Signal<Option<LineDiagram>>, selected: RwSignal<usize>) -
                 // The bar's height shows the bore against the widest part (at least a hairline).
                 let height = (100.0 * part.bore.get() / widest).clamp(6.0, 100.0);
                 let label = format!(
-                    "Element {n}, {}: {} bore, {} long, {}; {}{}",
+                    "{} {n}, {}: {}, {}; {}{}",
+                    line.part_word,
                     part.kind,
-                    Dimension::Length.show(part.bore.get(), 3),
-                    Dimension::Length.show(part.length.get(), 3),
+                    size(part),
                     part.orientation,
                     part.verdict.word(),
                     if narrowest { "; the narrowest passage" } else { "" }
@@ -76,7 +85,7 @@ pub fn LineStrip(line: Signal<Option<LineDiagram>>, selected: RwSignal<usize>) -
                         >
                             <span class="part-head">{format!("{n} {} {}", arrow(part.orientation), part.kind)}</span>
                             <span class="bore-bar" style=format!("height: {height:.0}%")></span>
-                            <span class="part-size">{format!("{} × {}", Dimension::Length.show(part.bore.get(), 3), Dimension::Length.show(part.length.get(), 3))}</span>
+                            <span class="part-size">{size(part)}</span>
                             <span class="part-verdict">{format!("{} {}", symbol(part.verdict), part.verdict.word())}</span>
                             {narrowest.then(|| view! { <span class="narrowest-mark" data-testid="narrowest-mark">"◆ narrowest"</span> })}
                         </button>
@@ -104,10 +113,10 @@ pub fn PartTable(line: Signal<Option<LineDiagram>>, selected: RwSignal<usize>) -
             view! {
                 <div class="table-scroll">
                     <table class="parts" data-testid="part-table">
-                        <caption class="visually-hidden">"Key quantities of every element"</caption>
+                        <caption class="visually-hidden">{format!("Key quantities of every {}", line.part_word.to_lowercase())}</caption>
                         <thead>
                             <tr>
-                                <th scope="col">"Element"</th>
+                                <th scope="col">{line.part_word}</th>
                                 <th scope="col">"Bore × length"</th>
                                 {line.columns.iter().map(|c| view! { <th scope="col">{c.label}</th> }).collect_view()}
                                 <th scope="col">"Verdict"</th>
@@ -126,7 +135,7 @@ pub fn PartTable(line: Signal<Option<LineDiagram>>, selected: RwSignal<usize>) -
                                         <th scope="row">
                                             <button type="button" class="link" on:click=move |_| selected.set(i)>{format!("{n} {}", p.kind)}</button>
                                         </th>
-                                        <td>{format!("{} × {}", Dimension::Length.show(p.bore.get(), 3), Dimension::Length.show(p.length.get(), 3))}</td>
+                                        <td>{size(p)}</td>
                                         {cells}
                                         <td class=format!("verdict-cell {}", p.verdict.word())>{format!("{} {}", symbol(p.verdict), p.verdict.word())}</td>
                                     </tr>

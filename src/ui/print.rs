@@ -23,9 +23,18 @@ fn now() -> String {
 }
 
 /// The record of `calculator`'s current case. `entries` are the inputs as they stand (label,
-/// value as typed with its unit); `report` the last valid results.
+/// value as typed with its unit); `elements` each line element's entries that apply, in words;
+/// `report` the last valid results.
 #[component]
-pub fn PrintRecord(calculator: Calculator, title: String, entries: Vec<(String, String)>, elements: Vec<Vec<String>>, report: Report, stale: bool) -> impl IntoView {
+pub fn PrintRecord(
+    calculator: Calculator,
+    title: String,
+    entries: Vec<(String, String)>,
+    elements: Vec<String>,
+    report: Report,
+    stale: bool,
+) -> impl IntoView {
+    let prefix = format!("{}_", calculator.element_prefix());
     let overall = report.overall();
     let headline: Vec<(String, String)> =
         calculator.headline().iter().filter_map(|k| report.figure(k)).map(|f| (f.label.to_owned(), f.dimension.show(f.value.get(), 4))).collect();
@@ -44,7 +53,7 @@ pub fn PrintRecord(calculator: Calculator, title: String, entries: Vec<(String, 
     let results: Vec<(String, String, String)> = report
         .figures
         .iter()
-        .filter(|f| !f.key.starts_with("element_"))
+        .filter(|f| !f.key.starts_with(prefix.as_str()))
         .map(|f| {
             let model = f.estimates.iter().find(|e| e.recommended).map_or("", |e| e.model.name);
             (f.label.to_owned(), f.dimension.show(f.value.get(), 4), model.to_owned())
@@ -76,9 +85,9 @@ pub fn PrintRecord(calculator: Calculator, title: String, entries: Vec<(String, 
                 </ul>
                 {(!elements.is_empty()).then(|| view! {
                     <table class="record-table">
-                        <tr><th scope="col">"#"</th><th scope="col">"Element"</th><th scope="col">"Orientation"</th><th scope="col">"Bore"</th><th scope="col">"Length"</th></tr>
+                        <tr><th scope="col">"#"</th><th scope="col">{if calculator.element_prefix() == "stage" { "Stage" } else { "Element" }}</th></tr>
                         {elements.into_iter().enumerate().map(|(i, e)| view! {
-                            <tr><td>{i + 1}</td>{e.into_iter().map(|v| view! { <td>{v}</td> }).collect_view()}</tr>
+                            <tr><td>{i + 1}</td><td>{e}</td></tr>
                         }).collect_view()}
                     </table>
                 })}
@@ -108,7 +117,7 @@ pub fn PrintRecord(calculator: Calculator, title: String, entries: Vec<(String, 
                     <h2>"The line"</h2>
                     <table class="record-table">
                         <tr>
-                            <th scope="col">"Element"</th>
+                            <th scope="col">{l.part_word}</th>
                             {l.columns.iter().map(|c| view! { <th scope="col">{c.label}</th> }).collect_view()}
                             <th scope="col">"Verdict"</th>
                         </tr>

@@ -12,7 +12,7 @@ use crate::physics::numeric::{RootError, Tolerance, brent};
 use crate::physics::pipe_flow::{self, hagen_poiseuille};
 use crate::physics::diagram::{Column, Diagram, LineDiagram, LinePart, node_pressures};
 use crate::physics::practical::{FINEST_MILLED_D90, LAMINAR_REYNOLDS, SMALLEST_BORE};
-use crate::physics::report::{AdviceKind, AdviceList, Check, Estimate, Figure, Finite, ModelInfo, NumericalError, RangeWarning, Report, Verdict, budget_verdict};
+use crate::physics::report::{AdviceKind, AdviceList, Check, Estimate, Figure, Finite, ModelInfo, NumericalError, RangeWarning, Report, Verdict, budget_note, budget_verdict};
 use crate::physics::settling::drag::terminal_velocity_spread;
 use crate::physics::settling::hindered::{HinderedModel, Suspension, hindered_velocity_spread};
 use crate::physics::settling::{Drift, range_warnings};
@@ -62,7 +62,8 @@ const SONICATION: &str = "Immerse the line, or its narrowest part, in an ultraso
 const STIRRED_FEED: &str = "Keep the feed stirred and the line short and steep where you can; flush with clean solvent before \
 stopping the flow, since deposits grow fastest when the flow stops (common practice, no source).";
 
-const PLUG_CAUTION: &str = "A plug here stops the flow while a positive-displacement pump keeps pushing: the pressure \
+/// The caution beside a clogging or settling problem: what a plug does with a positive-displacement pump.
+pub const PLUG_CAUTION: &str = "A plug here stops the flow while a positive-displacement pump keeps pushing: the pressure \
 rises to the pump limit or until the weakest part fails, spraying hot, possibly toxic liquid. \
 Set a pump pressure limit or relief, watch the pressure trend, keep a flush and bypass ready, \
 and follow local codes and institutional rules.";
@@ -184,6 +185,7 @@ fn line_diagram(input: &SlurryInput, results: &[ElementResult], figures: &[Figur
     Ok(LineDiagram {
         key: "line",
         title: "The line, in flow order",
+        part_word: "Element",
         parts,
         node_pressures: node_pressures(outlet, &drops)?,
         narrowest,
@@ -628,11 +630,7 @@ fn pressure_check(inlet: f64, total: &Figure, back: f64, rating: f64) -> Check {
     let ratio = inlet / rating;
     let (_, worst) = total.spread();
     let verdict = budget_verdict(ratio, (back + worst) / rating);
-    let note = match verdict {
-        Verdict::Problem => ": over the rating",
-        Verdict::Caution => ": less than 20 % margin (common practice, no source)",
-        Verdict::Fine => "",
-    };
+    let note = budget_note(verdict, ": over the rating");
     Check {
         key: "pressure_budget",
         topic: "Pressure budget",

@@ -13,22 +13,30 @@ pub struct ElementKey {
     pub label: &'static str,
 }
 
-macro_rules! table {
-    ($suffix:literal, $label:literal; $($n:literal)*) => {
-        [$(ElementKey { key: concat!("element_", $n, "_", $suffix), label: concat!("Element ", $n, ": ", $label) }),*]
+/// A table of numbered keys: `($prefix, $Prefix; $suffix, $label; 1 2 …)` gives
+/// `{prefix}_{n}_{suffix}` with the label "{Prefix} {n}: {label}". Shared with the setup's stages.
+macro_rules! numbered_table {
+    ($prefix:literal, $title:literal; $suffix:literal, $label:literal; $($n:literal)*) => {
+        [$($crate::physics::slurry::keys::ElementKey { key: concat!($prefix, "_", $n, "_", $suffix), label: concat!($title, " ", $n, ": ", $label) }),*]
     };
 }
+pub(crate) use numbered_table;
 
-macro_rules! per_element {
-    ($($(#[$doc:meta])* $name:ident = $suffix:literal, $label:literal;)*) => {
+/// Declares one table of [`MAX_ELEMENTS`] numbered keys per `NAME = suffix, label;` line, keyed
+/// `{prefix}_{n}_{suffix}`.
+macro_rules! numbered_keys {
+    ($prefix:literal, $title:literal; $($(#[$doc:meta])* $name:ident = $suffix:literal, $label:literal;)*) => {
         $(
             $(#[$doc])*
-            pub const $name: [ElementKey; MAX_ELEMENTS] = table!($suffix, $label; 1 2 3 4 5 6 7 8 9 10 11 12 13 14 15 16 17 18 19 20 21 22 23 24);
+            pub const $name: [$crate::physics::slurry::keys::ElementKey; $crate::physics::slurry::keys::MAX_ELEMENTS] =
+                $crate::physics::slurry::keys::numbered_table!($prefix, $title; $suffix, $label; 1 2 3 4 5 6 7 8 9 10 11 12 13 14 15 16 17 18 19 20 21 22 23 24);
         )*
     };
 }
+pub(crate) use numbered_keys;
 
-per_element! {
+numbered_keys! {
+    "element", "Element";
     /// Input: element kind.
     KIND = "kind", "kind";
     /// Input: orientation.

@@ -4,7 +4,7 @@
 
 mod reactor;
 
-pub use reactor::{LOOP_INFO, PRODUCTIVITY_INFO, RESIDENCE_TIME_INFO, VOLUME_INFO};
+pub use reactor::{LOOP_INFO, PRODUCTIVITY_INFO, RESIDENCE_TIME_INFO, VOLUME_INFO, internal_volume, residence_time, single_pass};
 
 use serde::Serialize;
 
@@ -13,7 +13,7 @@ use super::ambient;
 use super::form::{ChoiceSpec, Collector, FieldSource};
 use super::input::{Allowed, FieldSpec, InputError};
 use super::pipe_flow::{self, hagen_poiseuille};
-use super::report::{Check, Figure, NumericalError, Report, Verdict, budget_verdict};
+use super::report::{Check, Figure, NumericalError, Report, Verdict, budget_note, budget_verdict};
 use super::tubing::{self, TubingChoice};
 use super::units::{
     Concentration, Density, Dimension, DynamicViscosity, Fraction, Length, MolarMass, Pressure,
@@ -181,11 +181,7 @@ fn pressure_check(inlet: PressureDifference, dp: PressureDifference, rating: Pre
         Dimension::PressureDifference.show(dp.si(), 3),
         ratio * 100.0,
         bar(rating),
-        match verdict {
-            Verdict::Problem => ": over the rating",
-            Verdict::Caution => ": less than 20 % margin (common practice, no source)",
-            Verdict::Fine => "",
-        }
+        budget_note(verdict, ": over the rating")
     );
     Check { key: "pressure_budget", topic: "Pressure budget", verdict, reason, caution }
 }

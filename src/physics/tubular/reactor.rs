@@ -3,7 +3,7 @@
 
 use super::{Operation, TubularInput};
 use crate::physics::report::ModelInfo;
-use crate::physics::units::{Duration, Length, MassFlow, Volume, VolumetricFlow};
+use crate::physics::units::{Concentration, Duration, Fraction, Length, MassFlow, MolarMass, Volume, VolumetricFlow};
 
 /// Internal volume of a round tube.
 pub const VOLUME_INFO: ModelInfo =
@@ -71,6 +71,13 @@ pub struct Production {
     pub recirculation: Option<LoopFigures>,
 }
 
+/// Productivity P = c Q Y M of one pass and the space-time yield P / V (kg s⁻¹ m⁻³) over the
+/// volume `volume` (the tube, or a whole setup's line).
+pub fn single_pass(concentration: Concentration, flow: VolumetricFlow, yield_fraction: Fraction, molar_mass: MolarMass, volume: Volume) -> (MassFlow, f64) {
+    let rate = concentration.si() * flow.si() * yield_fraction.si() * molar_mass.si();
+    (MassFlow::from_si(rate), rate / volume.si())
+}
+
 /// Productivity and space-time yield, and the loop figures when recirculating.
 pub fn production(input: &TubularInput, volume: Volume) -> Production {
     let c = input.concentration.si();
@@ -79,8 +86,8 @@ pub fn production(input: &TubularInput, volume: Volume) -> Production {
     let q = input.flow.si();
     match input.operation {
         Operation::SinglePass => {
-            let rate = c * q * y * m;
-            Production { rate: MassFlow::from_si(rate), space_time_yield: rate / volume.si(), recirculation: None }
+            let (rate, space_time_yield) = single_pass(input.concentration, input.flow, input.yield_fraction, input.molar_mass, volume);
+            Production { rate, space_time_yield, recirculation: None }
         }
         Operation::Recirculation { reservoir, passes } => {
             let n = f64::from(passes);

@@ -81,6 +81,8 @@ pub enum Dimension {
     Fraction,
     /// Pure numbers: counts, Reynolds numbers (SI: 1).
     Number,
+    /// Force, e.g. a syringe drive's thrust (SI: N).
+    Force,
 }
 
 const MINUTE: f64 = 60.0;
@@ -90,6 +92,8 @@ const LITRE: f64 = 1e-3;
 // standard atmosphere = 1.013 25 E+05 Pa (exact); centipoise = 1.0 E-03 Pa·s (exact).
 const INCH: f64 = 2.54e-2;
 const PSI: f64 = 6.894_757e3;
+// NIST SP 811 B.8: pound-force = 4.448 222 E+00 N.
+const POUND_FORCE: f64 = 4.448_222;
 const ATM: f64 = 1.013_25e5;
 
 const LENGTH: &[Unit] = &[
@@ -179,6 +183,7 @@ const VELOCITY: &[Unit] = &[
 ];
 const FRACTION: &[Unit] = &[Unit::scale("%", 1e-2), Unit::scale("fraction", 1.0)];
 const NUMBER: &[Unit] = &[Unit::scale("", 1.0)];
+const FORCE: &[Unit] = &[Unit::scale("N", 1.0), Unit::scale("kN", 1e3), Unit::scale("lbf", POUND_FORCE)];
 
 impl Dimension {
     /// The units this kind of quantity can be entered or shown in; the first is the lab default.
@@ -207,6 +212,7 @@ impl Dimension {
             Dimension::Velocity => VELOCITY,
             Dimension::Fraction => FRACTION,
             Dimension::Number => NUMBER,
+            Dimension::Force => FORCE,
         }
     }
 
@@ -290,6 +296,7 @@ impl Dimension {
             Dimension::SpaceTimeYield => "kg/(s·m³)",
             Dimension::Velocity => "m/s",
             Dimension::Fraction | Dimension::Number => "1",
+            Dimension::Force => "N",
         }
     }
 }

@@ -1,0 +1,384 @@
+//! Whole setup against the calculators it calls and against hand arithmetic written out here:
+//! one passage equals its calculator alone, node pressures are the set point plus the drops
+//! downstream, a syringe pump's limit is F / A, solids are checked only downstream of their feed
+//! and a narrower fitting is named where it sits.
+#![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
+
+use clearbore::case::{Calculator, CaseError, CaseFile, EntrySource};
+use clearbore::physics::diagram::Diagram;
+use clearbore::physics::form::{FieldSource, Watcher};
+use clearbore::physics::input::InputError;
+use clearbore::physics::report::{Report, Verdict};
+use proptest::prelude::*;
+use serde_json::{Value, json};
+
+fn close(actual: f64, expected: f64, rel: f64) {
+    assert!(((actual - expected) / expected).abs() <= rel, "got {actual}, expected {expected} (±{rel:e} relative)");
+}
+
+fn q(value: f64, unit: &str) -> Value {
+    json!({ "value": value, "unit": unit })
+}
+
+/// A water-like custom liquid (1000 kg/m³, 1 mPa·s), no tubing from the table.
+fn water_inputs() -> Value {
+    json!({
+        "liquid": "custom",
+        "temperature": q(25.0, "°C"),
+        "density": q(1000.0, "kg/m³"),
+        "viscosity": q(1.0, "mPa·s"),
+        "d90": q(50.0, "µm"),
+        "concentration": q(0.5, "mol/L"),
+        "yield": q(90.0, "%"),
+        "molar_mass": q(200.0, "g/mol"),
+        "ambient_pressure": q(1.01325, "bar"),
+        "tubing_material": "none",
+        "tubing_size": "1_16x0_030"
+    })
+}
+
+fn piston(flow_ml_min: f64, limit_bar: f64, solids: f64) -> Value {
+    json!({ "kind": "liquid_feed", "pump": "piston", "flow": q(flow_ml_min, "mL/min"), "pump_max_flow": q(10.0, "mL/min"), "pump_limit": q(limit_bar, "bar"), "solids_fraction": q(solids, "fraction") })
+}
+
+fn passage(kind: &str, bore_mm: f64, length_m: f64, rating_bar: f64) -> Value {
+    json!({ "kind": kind, "inner_diameter": q(bore_mm, "mm"), "length": q(length_m, "m"), "pressure_rating": q(rating_bar, "bar") })
+}
+
+fn regulator(set_bar: f64, rating_bar: f64) -> Value {
+    json!({ "kind": "regulator", "set_point": q(set_bar, "bar"), "pressure_rating": q(rating_bar, "bar") })
+}
+
+fn case(inputs: Value, stages: Vec<Value>) -> CaseFile {
+    let doc = json!({ "clearbore_case": 2, "title": "test", "calculator": "setup", "inputs": inputs, "elements": stages });
+    CaseFile::from_json(&doc.to_string()).unwrap_or_else(|e| panic!("{e}"))
+}
+
+fn run(inputs: Value, stages: Vec<Value>) -> Report {
+    case(inputs, stages).evaluate().unwrap_or_else(|e| panic!("{e}"))
+}
+
+fn value(r: &Report, key: &str) -> f64 {
+    r.figure(key).unwrap_or_else(|| panic!("no figure {key}")).value.get()
+}
+
+fn verdict(r: &Report, key: &str) -> Verdict {
+    r.check(key).unwrap_or_else(|| panic!("no check {key}")).verdict
+}
+
+fn input_errors(c: &CaseFile) -> Vec<InputError> {
+    match c.evaluate() {
+        Err(CaseError::Inputs(e)) => e,
+        other => panic!("expected input errors, got {other:?}"),
+    }
+}
+
+#[test]
+fn one_tube_equals_the_tubular_calculator_on_its_demo() {
+    let tubular = CaseFile::from_json(Calculator::TubularReactor.demo_json()).unwrap();
+    let alone = tubular.evaluate().unwrap();
+    let mut inputs = serde_json::to_value(&tubular.inputs).unwrap();
+    let keep = ["liquid", "temperature", "density", "viscosity", "concentration", "yield", "molar_mass", "ambient_pressure", "tubing_material", "tubing_size"];
+    inputs.as_object_mut().unwrap().retain(|k, _| keep.contains(&k.as_str()));
+    // Tubular demo: 0.76 mm × 10 m at 0.5 mL/min, 5 bar back-pressure, 20 bar rating.
+    let r = run(inputs, vec![piston(0.5, 100.0, 0.0), passage("tubing", 0.76, 10.0, 20.0), regulator(5.0, 100.0)]);
+    for (setup_key, tubular_key) in [
+        ("stage_2_pressure_drop", "pressure_drop"),
+        ("stage_2_residence_time", "residence_time"),
+        ("residence_time", "residence_time"),
+        ("line_volume", "internal_volume"),
+        ("stage_2_inlet_pressure", "inlet_pressure"),
+        ("inlet_pressure", "inlet_pressure"),
+        ("productivity", "productivity"),
+        ("space_time_yield", "space_time_yield"),
+    ] {
+        assert_eq!(value(&r, setup_key), value(&alone, tubular_key), "{setup_key} = tubular {tubular_key}");
+    }
+    assert_eq!(verdict(&r, "stage_2_pressure"), verdict(&alone, "pressure_budget"));
+    assert_eq!(verdict(&r, "tubing_rating"), verdict(&alone, "tubing_rating"));
+    assert_eq!(verdict(&r, "boiling"), verdict(&alone, "boiling"));
+}
+
+#[test]
+fn one_cartridge_gives_ergun_on_the_fluids_example() {
+    // fluids 1.3.1, packed_bed.Ergun docstring: dp = 0.8 mm, voidage 0.4, vs = 1 mm/s, rho = 1000,
+    // mu = 1 mPa·s, L = 1 m → 1338.8671874999995 Pa. A 10 mm cartridge at Q = vs π D²/4 gives vs.
+    let flow = 1e-3 * std::f64::consts::PI * 0.01_f64.powi(2) / 4.0;
+    let feed = json!({ "kind": "liquid_feed", "pump": "piston", "flow": q(flow, "m³/s"), "pump_max_flow": q(10.0, "mL/min"), "pump_limit": q(100.0, "bar"), "solids_fraction": q(0.0, "fraction") });
+    let mut bed = passage("cartridge", 10.0, 1.0, 50.0);
+    bed["particle_diameter"] = q(0.8, "mm");
+    bed["voidage"] = q(0.4, "fraction");
+    let r = run(water_inputs(), vec![feed, bed, regulator(0.0, 50.0)]);
+    close(value(&r, "stage_2_pressure_drop"), 1338.8671874999995, 1e-9);
+    // The liquid fills the voidage only: V = ε π D² L / 4, τ = V / Q = ε L / vs = 400 s.
+    close(value(&r, "stage_2_residence_time"), 400.0, 1e-12);
+}
+
+#[test]
+fn node_pressures_are_the_set_point_plus_the_drops_downstream() {
+    // Hand arithmetic, Hagen–Poiseuille ΔP = 128 μ L Q / (π D⁴) with μ = 1 mPa·s, Q = 1 mL/min:
+    // tubing 1 mm × 1 m: 128e-3 × 1 × 1.666667e-8 / (π × 1e-12) = 679.061 Pa;
+    // coil 0.5 mm × 2 m: 2 × 16 = 32 times that = 21 729.95 Pa; regulator at 3 bar.
+    let r = run(water_inputs(), vec![piston(1.0, 100.0, 0.0), passage("tubing", 1.0, 1.0, 50.0), passage("coil", 0.5, 2.0, 50.0), regulator(3.0, 50.0)]);
+    close(value(&r, "stage_2_pressure_drop"), 679.061, 1e-5);
+    close(value(&r, "stage_3_pressure_drop"), 21_729.95, 1e-5);
+    close(value(&r, "stage_4_inlet_pressure"), 300_000.0, 1e-12);
+    close(value(&r, "stage_3_inlet_pressure"), 321_729.95, 1e-6);
+    close(value(&r, "stage_2_inlet_pressure"), 322_409.01, 1e-6);
+    close(value(&r, "inlet_pressure"), 322_409.01, 1e-6);
+    close(value(&r, "total_pressure_drop"), 22_409.01, 1e-6);
+    let Some(Diagram::Line(line)) = r.diagrams.first() else { panic!("no line drawn") };
+    let nodes: Vec<f64> = line.node_pressures.iter().map(|p| p.get()).collect();
+    assert_eq!(nodes.len(), 5);
+    close(nodes[0], 322_409.01, 1e-6); // before the feed: where it joins
+    close(nodes[1], 322_409.01, 1e-6);
+    close(nodes[2], 321_729.95, 1e-6);
+    close(nodes[3], 300_000.0, 1e-12);
+    assert_eq!(nodes[4], 0.0); // after the regulator: atmosphere
+    // Residence: V = π D² L / 4 over Q: 0.785398 mL → 47.1239 s; 0.392699 mL → 23.5619 s.
+    close(value(&r, "stage_2_residence_time"), 47.1239, 1e-5);
+    close(value(&r, "stage_3_residence_time"), 23.5619, 1e-5);
+    close(value(&r, "residence_time"), 70.6858, 1e-5);
+}
+
+fn syringe(force_n: f64, bore_mm: f64, barrel_bar: f64) -> Value {
+    json!({
+        "kind": "liquid_feed", "pump": "syringe", "flow": q(0.1, "mL/min"), "pump_max_flow": q(5.0, "mL/min"),
+        "drive_force": q(force_n, "N"), "barrel_bore": q(bore_mm, "mm"), "barrel_rating": q(barrel_bar, "bar"),
+        "solids_fraction": q(0.0, "fraction")
+    })
+}
+
+#[test]
+fn a_syringe_pump_gives_its_force_over_the_plunger_area() {
+    // 200 N on a 14.5 mm bore: A = π × 0.0145² / 4 = 1.65130e-4 m², p = 200 / A = 12.1116 bar.
+    let at = |set_bar: f64, barrel: f64| run(water_inputs(), vec![syringe(200.0, 14.5, barrel), passage("tubing", 1.0, 0.1, 50.0), regulator(set_bar, 50.0)]);
+    let r = at(5.0, 50.0);
+    close(value(&r, "stage_1_pump_pressure"), 12.1116e5, 1e-5);
+    assert_eq!(verdict(&r, "stage_1_pump_check"), Verdict::Fine); // 41 %
+    assert_eq!(verdict(&at(10.5, 50.0), "stage_1_pump_check"), Verdict::Caution); // 87 %: inside the 20 % margin
+    let over = at(13.0, 50.0);
+    assert_eq!(verdict(&over, "stage_1_pump_check"), Verdict::Problem); // 107 %
+    assert!(over.check("stage_1_pump_check").unwrap().reason.contains("syringe pump"));
+    // A barrel rated below F / A: a blockage breaks the barrel before the drive stalls.
+    let weak = at(5.0, 10.0);
+    let check = weak.check("stage_1_pump_check").unwrap();
+    assert_eq!(check.verdict, Verdict::Caution);
+    assert!(check.reason.contains("barrel"), "{}", check.reason);
+    assert!(check.caution.is_some());
+}
+
+#[test]
+fn a_pump_limit_below_the_line_pressure_is_a_problem_naming_the_pump() {
+    let r = run(water_inputs(), vec![piston(1.0, 4.0, 0.0), passage("tubing", 1.0, 1.0, 50.0), regulator(5.0, 50.0)]);
+    let check = r.check("stage_1_pump_check").unwrap();
+    assert_eq!(check.verdict, Verdict::Problem);
+    assert!(check.reason.contains("piston pump of stage 1"), "{}", check.reason);
+}
+
+#[test]
+fn a_flow_above_the_pumps_largest_is_a_problem() {
+    // A 40 bar pump on parts rated 50 bar: only the flow decides.
+    let mut feed = piston(12.0, 40.0, 0.0);
+    assert_eq!(feed["pump_max_flow"], q(10.0, "mL/min"));
+    let r = run(water_inputs(), vec![feed.clone(), passage("tubing", 1.0, 1.0, 50.0), regulator(1.0, 50.0)]);
+    let check = r.check("stage_1_pump_check").unwrap();
+    assert_eq!(check.verdict, Verdict::Problem);
+    assert!(check.reason.contains("more than the pump's largest flow"), "{}", check.reason);
+    feed["flow"] = q(8.0, "mL/min");
+    let r = run(water_inputs(), vec![feed, passage("tubing", 1.0, 1.0, 50.0), regulator(1.0, 50.0)]);
+    assert_eq!(verdict(&r, "stage_1_pump_check"), Verdict::Fine);
+}
+
+#[test]
+fn a_pump_stronger_than_a_downstream_part_is_a_caution_naming_that_part() {
+    // 40 bar pump, coil rated 20 bar: a blockage would push 40 bar onto the coil.
+    let r = run(water_inputs(), vec![piston(1.0, 40.0, 0.0), passage("coil", 1.0, 1.0, 20.0), regulator(2.0, 50.0)]);
+    let check = r.check("stage_1_pump_check").unwrap();
+    assert_eq!(check.verdict, Verdict::Caution);
+    assert!(check.reason.contains("coil at stage 2"), "{}", check.reason);
+}
+
+#[test]
+fn a_part_over_its_rating_is_a_problem_and_the_budget_names_it() {
+    // 10 bar set point, a fitting rated 8 bar just upstream of the regulator.
+    let r = run(water_inputs(), vec![piston(1.0, 100.0, 0.0), passage("tubing", 1.0, 1.0, 50.0), passage("fitting", 1.0, 0.01, 8.0), regulator(10.0, 50.0)]);
+    assert_eq!(verdict(&r, "stage_3_pressure"), Verdict::Problem);
+    assert_eq!(verdict(&r, "stage_2_pressure"), Verdict::Fine);
+    let budget = r.check("pressure_budget").unwrap();
+    assert_eq!(budget.verdict, Verdict::Problem);
+    assert!(budget.reason.contains("fitting at stage 3"), "{}", budget.reason);
+    assert!(budget.caution.is_some());
+}
+
+#[test]
+fn a_slurry_meeting_a_narrower_fitting_downstream_is_named_at_that_fitting() {
+    // d90 = 60 µm; 0.76 mm tubing (r = 12.7, clear), then a 150 µm fitting (r = 2.5 < 3: arches,
+    // Marin et al. 2018): a clogging problem there, and the narrowest passage of the line.
+    let mut inputs = water_inputs();
+    inputs["d90"] = q(60.0, "µm");
+    let r = run(inputs, vec![piston(1.0, 100.0, 0.05), passage("tubing", 0.76, 1.0, 50.0), passage("fitting", 0.15, 0.01, 50.0), regulator(3.0, 50.0)]);
+    assert_eq!(verdict(&r, "stage_2_clogging"), Verdict::Fine);
+    let check = r.check("stage_3_clogging").unwrap();
+    assert_eq!(check.verdict, Verdict::Problem);
+    assert!(check.reason.contains("fitting at stage 3 is the narrowest passage"), "{}", check.reason);
+    assert!(check.caution.is_some());
+    close(value(&r, "stage_3_passage_ratio"), 2.5, 1e-12);
+    close(value(&r, "narrowest_passage"), 150e-6, 1e-12);
+    let Some(Diagram::Line(line)) = r.diagrams.first() else { panic!("no line drawn") };
+    assert_eq!(line.narrowest, Some(2));
+    assert_eq!(line.parts[2].verdict, Verdict::Problem);
+}
+
+#[test]
+fn solids_are_checked_only_downstream_of_their_feed_and_diluted_where_clean_liquid_joins() {
+    // A clean feed through a 0.2 mm restriction, then a slurry feed (10 % solids, the same flow)
+    // joins at the junction: the restriction sees no solids; the junction onwards sees 5 %.
+    let stages = vec![
+        piston(1.0, 100.0, 0.0),
+        passage("fitting", 0.2, 0.01, 50.0),
+        piston(1.0, 100.0, 0.10),
+        passage("junction", 1.0, 0.01, 50.0),
+        passage("tubing", 1.0, 1.0, 50.0),
+        regulator(3.0, 50.0),
+    ];
+    let r = run(water_inputs(), stages);
+    assert!(r.check("stage_2_clogging").is_none());
+    assert!(r.figure("stage_2_passage_ratio").is_none());
+    assert!(r.figure("stage_2_solids_volume_fraction").is_none());
+    close(value(&r, "stage_4_solids_volume_fraction"), 0.05, 1e-12);
+    close(value(&r, "stage_5_solids_volume_fraction"), 0.05, 1e-12);
+    close(value(&r, "narrowest_passage"), 1e-3, 1e-12);
+    // The fitting carries the first feed only; the junction both.
+    close(value(&r, "stage_2_liquid_flow"), 1e-6 / 60.0, 1e-12);
+    close(value(&r, "stage_4_liquid_flow"), 2e-6 / 60.0, 1e-12);
+    // With solids the viscosity is the suspension's (Krieger–Dougherty, φ_max = 0.58, [η] = 2.5):
+    // μ_s / μ = (1 − 0.05 / 0.58)^(−2.5 × 0.58) = 0.913793^(−1.45) = exp(1.45 × 0.090151) = 1.13965; so the tubing's drop is 1.1394 × the
+    // clean Hagen–Poiseuille drop at 2 mL/min, 2 × 679.061 Pa.
+    let relative = (1.0_f64 - 0.05 / 0.58).powf(-2.5 * 0.58);
+    close(relative, 1.13965, 1e-5);
+    close(value(&r, "stage_5_pressure_drop"), relative * 2.0 * 679.061, 1e-5);
+    close(value(&r, "stage_5_suspension_viscosity"), relative * 1e-3, 1e-12);
+}
+
+#[test]
+fn order_errors_are_named_at_the_stage_kind() {
+    let fields = |c: &CaseFile| input_errors(c).into_iter().map(|e| e.field).collect::<Vec<_>>();
+    // Does not start with a feed.
+    let c = case(water_inputs(), vec![passage("tubing", 1.0, 1.0, 50.0), piston(1.0, 100.0, 0.0), passage("tubing", 1.0, 1.0, 50.0)]);
+    assert_eq!(fields(&c), vec!["stage_1_kind"]);
+    // Regulator not last.
+    let c = case(water_inputs(), vec![piston(1.0, 100.0, 0.0), regulator(3.0, 50.0), passage("tubing", 1.0, 1.0, 50.0)]);
+    assert_eq!(fields(&c), vec!["stage_2_kind"]);
+    // A feed with nothing after it to carry its flow.
+    let c = case(water_inputs(), vec![piston(1.0, 100.0, 0.0), passage("tubing", 1.0, 1.0, 50.0), piston(1.0, 100.0, 0.0)]);
+    assert_eq!(fields(&c), vec!["stage_3_kind"]);
+    // A bad entry of a stage is named at that stage.
+    let mut bad = passage("tubing", 1.0, 1.0, 50.0);
+    bad["length"] = q(-1.0, "m");
+    let c = case(water_inputs(), vec![piston(1.0, 100.0, 0.0), bad]);
+    assert_eq!(fields(&c), vec!["stage_2_length"]);
+}
+
+#[test]
+fn each_stage_kind_reads_only_its_own_entries() {
+    let mut bed = passage("cartridge", 4.6, 0.1, 50.0);
+    bed["particle_diameter"] = q(0.1, "mm");
+    bed["voidage"] = q(0.4, "fraction");
+    let c = case(
+        water_inputs(),
+        vec![syringe(200.0, 14.5, 50.0), piston(1.0, 100.0, 0.0), passage("junction", 0.5, 0.01, 50.0), passage("coil", 1.0, 1.0, 50.0), bed, regulator(3.0, 50.0)],
+    );
+    let sources: Vec<EntrySource> = c.elements.iter().map(EntrySource).collect();
+    let watched: Vec<Watcher> = sources.iter().map(|s| Watcher::new(s)).collect();
+    let dyns: Vec<&dyn FieldSource> = watched.iter().map(|w| w as &dyn FieldSource).collect();
+    Calculator::Setup.evaluate(&EntrySource(&c.inputs), &dyns).unwrap();
+    let mut asked: Vec<Vec<&str>> = watched.into_iter().map(Watcher::into_asked).collect();
+    for a in &mut asked {
+        a.sort_unstable();
+    }
+    let sorted = |mut v: Vec<&'static str>| {
+        v.sort_unstable();
+        v
+    };
+    assert_eq!(asked[0], sorted(vec!["kind", "flow", "pump_max_flow", "solids_fraction", "pump", "drive_force", "barrel_bore", "barrel_rating"]));
+    assert_eq!(asked[1], sorted(vec!["kind", "flow", "pump_max_flow", "solids_fraction", "pump", "pump_limit"]));
+    assert_eq!(asked[2], sorted(vec!["kind", "inner_diameter", "length", "pressure_rating"]));
+    assert_eq!(asked[3], sorted(vec!["kind", "inner_diameter", "length", "pressure_rating"]));
+    assert_eq!(asked[4], sorted(vec!["kind", "inner_diameter", "length", "pressure_rating", "particle_diameter", "voidage"]));
+    assert_eq!(asked[5], sorted(vec!["kind", "set_point", "pressure_rating"]));
+}
+
+#[test]
+fn a_clean_line_does_not_ask_for_the_solids_size() {
+    let mut inputs = water_inputs();
+    inputs.as_object_mut().unwrap().remove("d90");
+    let r = run(inputs, vec![piston(1.0, 100.0, 0.0), passage("tubing", 1.0, 1.0, 50.0), regulator(3.0, 50.0)]);
+    assert!(r.figure("narrowest_passage").is_none());
+}
+
+#[test]
+fn a_format_1_file_cannot_name_the_setup() {
+    let doc = json!({ "clearbore_case": 1, "title": "old", "calculator": "setup", "inputs": water_inputs(), "elements": [] });
+    match CaseFile::from_json(&doc.to_string()) {
+        Err(CaseError::Format(problems)) => {
+            assert!(problems.iter().any(|p| p.path == "calculator" && p.problem.contains("case format 2")), "{problems:?}");
+        }
+        other => panic!("expected a format error, got {other:?}"),
+    }
+}
+
+#[test]
+fn the_demo_evaluates_and_draws_every_stage() {
+    let demo = CaseFile::from_json(Calculator::Setup.demo_json()).unwrap();
+    assert_eq!(demo.calculator, Calculator::Setup);
+    let r = demo.evaluate().unwrap();
+    let Some(Diagram::Line(line)) = r.diagrams.first() else { panic!("no line drawn") };
+    assert_eq!(line.parts.len(), demo.elements.len());
+    assert_eq!(line.node_pressures.len(), demo.elements.len() + 1);
+    // The demo's piston pump (40 bar) is stronger than the 20 bar coil: said as a caution.
+    assert_eq!(verdict(&r, "stage_2_pump_check"), Verdict::Caution);
+    // Its case survives JSON unchanged.
+    assert_eq!(CaseFile::from_json(&demo.to_json()).unwrap(), demo);
+}
+
+proptest! {
+    #![proptest_config(ProptestConfig::with_cases(64))]
+
+    /// For any line of a feed, 1 to 6 passages of random bore and length and a regulator: each
+    /// node is the set point plus the drops of the stages downstream, nodes never rise along the
+    /// flow, the line's residence time is the sum of the stages', and doubling the flow doubles
+    /// every laminar drop and halves every residence time (Hagen–Poiseuille is linear in Q).
+    #[test]
+    fn node_pressures_add_the_drops_downstream_and_scale_with_flow(
+        passages in prop::collection::vec((0.25f64..2.0, 0.01f64..20.0), 1..7),
+        flow in 0.05f64..5.0,
+        set_bar in 0.0f64..20.0,
+    ) {
+        let line = |q: f64| {
+            let mut stages = vec![piston(q, 400.0, 0.0)];
+            stages.extend(passages.iter().map(|(d, l)| passage("tubing", *d, *l, 500.0)));
+            stages.push(regulator(set_bar, 500.0));
+            run(water_inputs(), stages)
+        };
+        let r = line(flow);
+        let n = passages.len();
+        let drop = |r: &Report, i: usize| value(r, &format!("stage_{i}_pressure_drop"));
+        let mut downstream = set_bar * 1e5;
+        for i in (2..=n + 1).rev() {
+            downstream += drop(&r, i);
+            let inlet = value(&r, &format!("stage_{i}_inlet_pressure"));
+            prop_assert!((inlet - downstream).abs() <= 1e-9 * downstream.max(1.0), "stage {}: {} vs {}", i, inlet, downstream);
+        }
+        let Some(Diagram::Line(d)) = r.diagrams.first() else { panic!("no line") };
+        prop_assert!(d.node_pressures.windows(2).all(|w| w[0].get() >= w[1].get()));
+        let tau: f64 = (2..=n + 1).map(|i| value(&r, &format!("stage_{i}_residence_time"))).sum();
+        prop_assert!((value(&r, "residence_time") - tau).abs() <= 1e-12 * tau);
+        let twice = line(2.0 * flow);
+        for i in 2..=n + 1 {
+            prop_assert!((drop(&twice, i) / drop(&r, i) - 2.0).abs() < 1e-9);
+            let t = |r: &Report| value(r, &format!("stage_{i}_residence_time"));
+            prop_assert!((t(&twice) / t(&r) - 0.5).abs() < 1e-9);
+        }
+    }
+}
