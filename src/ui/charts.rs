@@ -32,10 +32,28 @@ pub fn PlotList(report: Signal<Option<Report>>) -> impl IntoView {
 fn PlotView(plot: Signal<Option<Plot>>, key: &'static str) -> impl IntoView {
     let canvas = NodeRef::<Canvas>::new();
     let failure = RwSignal::new(None::<String>);
+    // The chart's width on the page, read once and again only after the window is resized:
+    // reading it after an edit would make the browser lay out the whole page at once, which cost
+    // more than drawing the chart.
+    let width: StoredValue<Option<f64>> = StoredValue::new(None);
+    let resized = RwSignal::new(0u32);
+    let on_resize = window_event_listener(leptos::ev::resize, move |_| {
+        width.set_value(None);
+        resized.update(|n| *n = n.wrapping_add(1));
+    });
+    on_cleanup(move || on_resize.remove());
     Effect::new(move |_| {
+        resized.track();
         let (Some(plot), Some(canvas)) = (plot.get(), canvas.get()) else { return };
         let ratio = web_sys::window().map(|w| w.device_pixel_ratio()).unwrap_or(1.0).max(1.0);
-        let css_width = f64::from(canvas.client_width().max(320));
+        let css_width = width.get_value().unwrap_or_else(|| {
+            let shown = canvas.client_width();
+            // A chart on a hidden tab has no width yet: measure again when it is drawn shown.
+            if shown > 0 {
+                width.set_value(Some(f64::from(shown.max(320))));
+            }
+            f64::from(shown.max(320))
+        });
         canvas.set_width((css_width * ratio).round() as u32);
         canvas.set_height((HEIGHT * ratio).round() as u32);
         let Some(backend) = CanvasBackend::with_canvas_object(canvas) else {
