@@ -709,7 +709,8 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
         .map(|m| {
             Ok(Estimate {
                 model: m.model,
-                value: Finite::new("line pressure drop", total * m.value.get() / mu_s)?,
+                // The recommended estimate is the figure's value itself, not the same to the last bit.
+                value: Finite::new("line pressure drop", if m.recommended { total } else { total * m.value.get() / mu_s })?,
                 recommended: m.recommended,
                 warnings: m.warnings.clone(),
             })
