@@ -4,6 +4,8 @@
 #   ./task.sh test   every test: lints, native tests (physics, CLI), browser end-to-end tests
 #   ./task.sh build  build dist/clearbore.html only
 #   ./task.sh bench  measure the page budgets (size, load time, recompute time) in headless Chromium
+#   ./task.sh long [filter…]  the long property-test profile: PROPTEST_CASES (default 10^6) cases per
+#                    property of tests/domain.rs and tests/fuzz.rs, optimised, one test at a time
 set -euo pipefail
 cd "$(dirname "$0")"
 
@@ -113,8 +115,19 @@ case "${1:-}" in
     build
     cargo test --features e2e --test page_budget
     ;;
+  long)
+    shift
+    cases="${PROPTEST_CASES:-1000000}"
+    say "long property tests: $cases cases per property (profile robust, one thread)"
+    cargo test --profile robust --test domain --test fuzz --no-run
+    for filter in "${@:-}"; do
+      for t in domain fuzz; do
+        PROPTEST_CASES="$cases" cargo test --profile robust --test "$t" -- --test-threads 1 ${filter:+"$filter"}
+      done
+    done
+    ;;
   *)
-    sed -n '2,7p' "$0"
+    sed -n '2,9p' "$0"
     exit 2
     ;;
 esac

@@ -297,7 +297,15 @@ fn picks() -> impl Strategy<Value = Vec<usize>> {
     proptest::collection::vec(0usize..16, 8)
 }
 
+/// Cases per property: `fast` in the ordinary test run (sized so the whole file takes seconds),
+/// or `PROPTEST_CASES` when set (the long profile, `./task.sh long`).
+fn cases(fast: u32) -> ProptestConfig {
+    let n = std::env::var("PROPTEST_CASES").ok().and_then(|v| v.parse().ok()).unwrap_or(fast);
+    ProptestConfig { cases: n, ..ProptestConfig::default() }
+}
+
 proptest! {
+    #![proptest_config(cases(400))]
     #[test]
     fn tubular_reactor_over_its_domain(case in case_of(Calculator::TubularReactor), picks in picks()) {
         common(&case, &picks)?;
@@ -310,6 +318,10 @@ proptest! {
         }
     }
 
+}
+
+proptest! {
+    #![proptest_config(cases(100))]
     #[test]
     fn slurry_line_over_its_domain(case in case_of(Calculator::SlurryLine), picks in picks(), factor in 1.01f64..10.0) {
         if let Some(r) = common(&case, &picks)? {
@@ -317,6 +329,10 @@ proptest! {
         }
     }
 
+}
+
+proptest! {
+    #![proptest_config(cases(24))]
     #[test]
     fn segmented_flow_over_its_domain(case in case_of(Calculator::SegmentedFlow), picks in picks()) {
         if common(&case, &picks)?.is_some() {
@@ -324,6 +340,10 @@ proptest! {
         }
     }
 
+}
+
+proptest! {
+    #![proptest_config(cases(64))]
     #[test]
     fn gas_liquid_bed_over_its_domain(case in case_of(Calculator::GasLiquidBed), picks in picks()) {
         common(&case, &picks)?;
@@ -399,7 +419,9 @@ fn segmented_flow_invariants(case: &CaseFile) -> Result<(), TestCaseError> {
         let p_sat = result.report.figure("vapour_volume_added").map_or(0.0, |f| f.value.get() / (1.0 + f.value.get()) * p_out);
         for (&b, &pressure) in p.gas_fraction.iter().zip(&p.pressure) {
             let n = b / (1.0 - b) * q_l * (pressure - p_sat) / (GAS_CONSTANT * t);
-            prop_assert!(close(n, fed, 1e-6), "gas not conserved: {} mol/s at {} Pa, {} fed", n, pressure, fed);
+            // Rounding in β and P − P_sat grows as β → 1 and P → P_sat (their condition numbers).
+            let tol = 1e-9 + 1e3 * f64::EPSILON * (1.0 / (1.0 - b) + pressure / (pressure - p_sat));
+            prop_assert!(close(n, fed, tol), "gas not conserved: {} mol/s at {} Pa (β {}), {} fed", n, pressure, b, fed);
         }
     }
     Ok(())
@@ -420,12 +442,13 @@ fn particle() -> impl Strategy<Value = Particle> {
         })
 }
 
-use clearbore::physics::settling::Particle;
+use clearbore::physics::settling::{Particle, clift_grace_weber};
 use clearbore::physics::settling::drag::SettlingModel;
 use clearbore::physics::settling::hindered::{HinderedModel, Suspension};
 use clearbore::physics::units::{Density, DynamicViscosity, Length};
 
 proptest! {
+    #![proptest_config(cases(2000))]
     #[test]
     fn terminal_velocity_meets_its_force_balance_and_rises_with_size_and_density_difference(
         p in particle(),
@@ -444,7 +467,18 @@ proptest! {
             }
             prop_assert!(v > 0.0);
             if let Some(r) = model.force_balance_residual(&p, clearbore::physics::units::Velocity::from_si(v)) {
-                prop_assert!(r.abs() < 1e-6, "{:?}: force balance off by {} at {} m/s for {:?}", model, r, v, p);
+                // A piecewise law has no exact root where its jump at a branch limit straddles the
+                // balance: there the residual is at most that jump.
+                let re = p.reynolds(clearbore::physics::units::Velocity::from_si(v));
+                let jump = match model {
+                    SettlingModel::CliftGraceWeber => clift_grace_weber::BRANCH_LIMITS
+                        .iter()
+                        .filter(|&&limit| close(re, limit, 1e-6))
+                        .map(|&limit| (clift_grace_weber::drag_coefficient(limit * (1.0 - 1e-9)) / clift_grace_weber::drag_coefficient(limit) - 1.0).abs())
+                        .fold(0.0, f64::max),
+                    _ => 0.0,
+                };
+                prop_assert!(r.abs() < 1e-6 + 1.01 * jump, "{:?}: force balance off by {} at {} m/s (Re {}) for {:?}", model, r, v, re, p);
             }
             let larger = p.with_diameter(Length::from_si(p.diameter.si() * bigger));
             let v_larger = model.terminal_velocity(&larger).unwrap().si();
@@ -500,4 +534,23 @@ fn the_line_pressure_drop_is_its_recommended_estimate_to_the_last_bit() {
     let recommended = f.estimates.iter().find(|e| e.recommended).unwrap();
     assert_eq!(recommended.value, f.value);
     report_is_sound(&report).unwrap();
+}
+
+/// Found by the long run of the terminal-velocity property (shrunk): a 3.6 mm sphere whose
+/// Clift–Grace–Weber balance falls on the jump at Re = 20, where no speed balances exactly. The
+/// solver settles at the branch limit, off by no more than the jump (0.36 %).
+#[test]
+fn clift_grace_weber_settles_at_the_branch_limit_its_jump_straddles() {
+    let p = Particle {
+        diameter: Length::from_si(0.0035798224994115758),
+        particle_density: Density::from_si(9.574360340979343),
+        density: Density::from_si(964.8872915013984),
+        viscosity: DynamicViscosity::from_si(0.022524488460177614),
+        sphericity: 1.0,
+    };
+    let v = SettlingModel::CliftGraceWeber.terminal_velocity(&p).unwrap();
+    assert!(close(p.reynolds(v), 20.0, 1e-6), "Re = {}", p.reynolds(v));
+    let jump = clift_grace_weber::drag_coefficient(20.0 * (1.0 - 1e-9)) / clift_grace_weber::drag_coefficient(20.0) - 1.0;
+    let r = SettlingModel::CliftGraceWeber.force_balance_residual(&p, v).unwrap();
+    assert!(r.abs() <= jump.abs() * 1.01 && jump.abs() < 0.01, "residual {r}, jump {jump}");
 }

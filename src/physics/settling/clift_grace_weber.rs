@@ -14,8 +14,10 @@
 //! Coefficients and branch limits as coded in `fluids` 1.3.1 (`drag.Clift`); a value on a branch
 //! limit belongs to the upper branch there and here.
 //!
-//! Validity: Re ≤ 10⁶ (`fluids` 1.3.1). The branches are fits to the standard curve; small jumps at
-//! the branch limits (below 1 %) are part of the correlation.
+//! Validity: Re ≤ 10⁶ (`fluids` 1.3.1). The branches are fits to the standard curve; the jumps at
+//! the branch limits are part of the correlation: below 1 % except at 4×10⁵, where the drag-crisis
+//! branch ends at 0.089 and the next begins at 0.070. Where a jump straddles the balance, the
+//! solved terminal speed is the one at the branch limit (the force balance changes sign there).
 //!
 //! Example (`fluids` 1.3.1 docstring of `Clift`): Re = 200 gives 0.7756342422322543 (17 digits
 //! printed; the check is to 1e-12 relative).
@@ -39,6 +41,9 @@ pub const INFO: ModelInfo = ModelInfo {
     source: "Clift, Grace & Weber (1978) Bubbles, Drops, and Particles, Academic Press; as coded in fluids 1.3.1",
     validity: &[ValidityBound { quantity: PARTICLE_REYNOLDS, dimension: Dimension::Number, low: None, high: Some(1e6) }],
 };
+
+/// The Reynolds numbers where one branch hands over to the next.
+pub const BRANCH_LIMITS: [f64; 9] = [0.01, 20.0, 260.0, 1500.0, 12_000.0, 44_000.0, 338_000.0, 400_000.0, 1e6];
 
 /// Drag coefficient of a smooth sphere.
 pub fn drag_coefficient(re: f64) -> f64 {
