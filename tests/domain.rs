@@ -554,3 +554,67 @@ fn clift_grace_weber_settles_at_the_branch_limit_its_jump_straddles() {
     let r = SettlingModel::CliftGraceWeber.force_balance_residual(&p, v).unwrap();
     assert!(r.abs() <= jump.abs() * 1.01 && jump.abs() < 0.01, "residual {r}, jump {jump}");
 }
+
+/// Found by `most_cases_over_the_domain_reach_the_physics` (its error tally): toluene at 270 °C,
+/// above where its surface-tension model reaches zero (near the critical point), gave the whole
+/// tubular report as "surface tension could not be computed" with no field named. It is now
+/// refused at the temperature, as a mixture already was.
+#[test]
+fn a_solvent_past_where_its_surface_tension_vanishes_is_refused_at_the_temperature() {
+    for c in [Calculator::TubularReactor, Calculator::PackedBed, Calculator::SlurryLine] {
+        let mut case: serde_json::Value = serde_json::from_str(c.demo_json()).unwrap();
+        case["inputs"]["liquid"] = serde_json::json!("toluene");
+        case["inputs"]["temperature"] = serde_json::json!({"value": 270, "unit": "°C"});
+        match CaseFile::from_json(&case.to_string()).unwrap().evaluate() {
+            Err(CaseError::Inputs(errors)) => {
+                assert!(errors.iter().any(|e| e.field == "temperature" && e.problem.contains("surface tension")), "{}: {errors:?}", c.key());
+            }
+            other => panic!("{}: {other:?}", c.key()),
+        }
+    }
+}
+
+/// Found by the error tally of `most_cases_over_the_domain_reach_the_physics`: a passage far
+/// narrower than the particles (here 1 µm against a 60 µm d90) drove the Richardson–Zaki wall term
+/// to a zero settling speed, and the whole line report failed as "time to settle across the bore
+/// could not be computed". The element is now judged by its clogging check, its settling not
+/// assessed, and the size chart keeps to sizes that fit the bore.
+#[test]
+fn a_passage_narrower_than_the_particles_is_judged_by_clogging_not_settling() {
+    let mut case: serde_json::Value = serde_json::from_str(Calculator::SlurryLine.demo_json()).unwrap();
+    case["elements"][0]["inner_diameter"] = serde_json::json!({"value": 1, "unit": "µm"});
+    let report = CaseFile::from_json(&case.to_string()).unwrap().evaluate().unwrap();
+    let settling = report.check("element_1_settling").unwrap();
+    assert_eq!(settling.verdict, Verdict::Problem);
+    assert!(settling.reason.starts_with("Not assessed") && settling.reason.contains("clogging"), "{}", settling.reason);
+    assert_eq!(report.check("element_1_clogging").unwrap().verdict, Verdict::Problem);
+    report_is_sound(&report).unwrap();
+}
+
+/// Found the same way: the coarsest size classes of a very wide distribution (metres across,
+/// from d10 = 10 nm and d90 = 20 mm) and sphericities near zero put the terminal speed below
+/// 10⁻⁹ of the Stokes speed, outside the solver's bracket ("force balance not solved").
+#[test]
+fn terminal_velocity_is_solved_far_below_the_stokes_speed() {
+    let coarse = Particle {
+        diameter: Length::from_si(2541.5228484899185),
+        particle_density: Density::from_si(2710.0),
+        density: Density::from_si(664.2491103391426),
+        viscosity: DynamicViscosity::from_si(0.00013672546547535894),
+        sphericity: 1.0,
+    };
+    let flaky = Particle {
+        diameter: Length::from_si(371.57419879601645),
+        particle_density: Density::from_si(8960.0),
+        density: Density::from_si(981.0626700201511),
+        viscosity: DynamicViscosity::from_si(0.007222691233287284),
+        sphericity: 1.2939989764932887e-7,
+    };
+    for p in [coarse, flaky] {
+        let model = SettlingModel::recommended(p.sphericity);
+        let v = model.terminal_velocity(&p).unwrap();
+        let stokes = SettlingModel::Stokes.terminal_velocity(&p).unwrap();
+        assert!(v.si() < 1e-9 * stokes.si(), "{p:?}");
+        assert!(model.force_balance_residual(&p, v).unwrap().abs() < 1e-9, "{p:?}");
+    }
+}

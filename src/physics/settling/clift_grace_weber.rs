@@ -11,8 +11,11 @@
 //! 12 000–44 000: log₁₀ C_D = −1.9181 + 0.6370 w − 0.0636 w²;
 //! 44 000–338 000: log₁₀ C_D = −4.3390 + 1.5809 w − 0.1546 w²;
 //! 338 000–400 000: C_D = 29.78 − 5.3 w; 400 000–10⁶: C_D = 0.1 w − 0.49; above: C_D = 0.19 − 8×10⁴/Re.
-//! Coefficients and branch limits as coded in `fluids` 1.3.1 (`drag.Clift`); a value on a branch
-//! limit belongs to the upper branch there and here.
+//! Coefficients and branch limits as coded in `fluids` 1.3.1 (`drag.Clift`) up to Re = 4×10⁵; a
+//! value on a branch limit belongs to the upper branch there and here. Above 4×10⁵ `fluids` 1.3.1
+//! has C_D = 0.19 w − 0.49 (0.57 at 4×10⁵, 0.65 at 10⁶, where the measured curve is near 0.1),
+//! the last two rows of the table merged; the two rows here are as coded in pychemqt
+//! (`lib/drag.py`, `Clift`), which join their neighbours.
 //!
 //! Validity: Re ≤ 10⁶ (`fluids` 1.3.1). The branches are fits to the standard curve; the jumps at
 //! the branch limits are part of the correlation: below 1 % except at 4×10⁵, where the drag-crisis
@@ -38,7 +41,7 @@ use crate::physics::units::Dimension;
 pub const INFO: ModelInfo = ModelInfo {
     name: "Clift–Grace–Weber",
     formula: "piecewise standard drag curve, e.g. 24/Re (1 + 0.1315 Re^(0.82 − 0.05 log₁₀Re)) for 0.01 < Re < 20",
-    source: "Clift, Grace & Weber (1978) Bubbles, Drops, and Particles, Academic Press; as coded in fluids 1.3.1",
+    source: "Clift, Grace & Weber (1978) Bubbles, Drops, and Particles, Academic Press; as coded in fluids 1.3.1 (above Re 4×10⁵ as in pychemqt)",
     validity: &[ValidityBound { quantity: PARTICLE_REYNOLDS, dimension: Dimension::Number, low: None, high: Some(1e6) }],
 };
 
@@ -79,8 +82,9 @@ mod tests {
     #[test]
     fn past_the_drag_crisis_follows_the_last_two_branches() {
         // Found by the domain property test (force balance off by 59 % near Re 4×10⁵): the branch
-        // above 4×10⁵ was written as 0.19 w − 0.49, which jumps from 0.09 to 0.57. `fluids` 1.3.1
-        // `drag.Clift`: 0.1 w − 0.49 up to 10⁶, then 0.19 − 8×10⁴/Re; values by hand from those.
+        // above 4×10⁵ was written as 0.19 w − 0.49 (as in `fluids` 1.3.1), which jumps from 0.09
+        // to 0.57. pychemqt `lib/drag.py` `Clift`: 0.1 w − 0.49 up to 10⁶, then 0.19 − 8×10⁴/Re;
+        // values by hand from those.
         assert!((drag_coefficient(5e5) - (0.1 * 5e5f64.log10() - 0.49)).abs() < 1e-12);
         assert!((drag_coefficient(2e6) - 0.15).abs() < 1e-12);
         // The jumps at 4×10⁵ and 10⁶ are small (0.0891 → 0.0702, 0.11 → 0.11).
