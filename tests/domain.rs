@@ -189,8 +189,27 @@ fn is_share(key: &str) -> bool {
     SHARES.contains(&key) || (key.starts_with("element_") && (key.ends_with("_deposited_fraction") || key.ends_with("_solids_holdup")))
 }
 
-/// Words in a reason that say a limit is crossed, and words that say there is room.
-const CROSSED: &[&str] = &["exceeds", "is above the rating", "above its rating", "over the rating", "beyond the rating"];
+/// Words in a reason that say a limit is crossed: never in a check marked fine.
+const CROSSED: &[&str] = &[
+    "exceeds",
+    "over the rating",
+    "more than the pump's largest flow",
+    "cannot run it",
+    "it boils",
+    "runs out",
+    "the flow lifts the bed",
+];
+
+/// Words in a reason that say there is room: never in a check marked as a problem.
+const CLEAR: &[&str] = &["it stays liquid", "is within the pump's largest flow", "lifting does not arise", "below the minimum fluidisation velocity by every correlation"];
+
+/// The share of the rating a pressure-budget reason states ("… is 85.2 % of the 20 bar(g) rating").
+fn stated_share_of_rating(reason: &str) -> Option<f64> {
+    let at = reason.find(" % of the ")?;
+    let head = &reason[..at];
+    let start = head.rfind(' ').map_or(0, |i| i + 1);
+    head[start..].parse().ok()
+}
 
 fn report_is_sound(report: &Report) -> Result<(), TestCaseError> {
     for f in &report.figures {
@@ -226,6 +245,23 @@ fn report_is_sound(report: &Report) -> Result<(), TestCaseError> {
         if c.verdict == Verdict::Fine {
             for w in CROSSED {
                 prop_assert!(!lower.contains(w), "check {} is fine but says {:?}: {}", c.key, w, c.reason);
+            }
+        }
+        if c.verdict == Verdict::Problem {
+            for w in CLEAR {
+                prop_assert!(!lower.contains(w), "check {} is a problem but says {:?}: {}", c.key, w, c.reason);
+            }
+        }
+        if c.key == "pressure_budget" {
+            // Shown to three significant figures: fine at most 80 % of the rating
+            // (`PRESSURE_MARGIN`), a problem above 100 %.
+            let share = stated_share_of_rating(&c.reason);
+            prop_assert!(share.is_some(), "no share of the rating in: {}", c.reason);
+            let share = share.unwrap_or_default();
+            match c.verdict {
+                Verdict::Fine => prop_assert!(share <= 80.5, "fine at {} % of the rating: {}", share, c.reason),
+                Verdict::Problem => prop_assert!(share >= 99.5, "a problem at {} % of the rating: {}", share, c.reason),
+                Verdict::Caution => prop_assert!(share >= 0.0),
             }
         }
     }
@@ -618,3 +654,4 @@ fn terminal_velocity_is_solved_far_below_the_stokes_speed() {
         assert!(model.force_balance_residual(&p, v).unwrap().abs() < 1e-9, "{p:?}");
     }
 }
+
