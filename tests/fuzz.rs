@@ -275,10 +275,10 @@ fn remove(doc: &mut Value, path: &str) {
             m.remove(&last);
         }
         Some(Value::Array(a)) => {
-            if let Ok(i) = last.parse::<usize>() {
-                if i < a.len() {
-                    a.remove(i);
-                }
+            if let Ok(i) = last.parse::<usize>()
+                && i < a.len()
+            {
+                a.remove(i);
             }
         }
         _ => {}
