@@ -6,12 +6,17 @@
 #![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
 
 use clearbore::case::{Calculator, CaseError, CaseFile, Entries, Entry, FormItem};
-use clearbore::physics::form::ChoiceSpec;
 use clearbore::physics::input::{Allowed, FieldSpec};
 use clearbore::physics::report::{Report, Verdict};
-use clearbore::physics::units::Unit;
+use clearbore::physics::settling::drag::SettlingModel;
+use clearbore::physics::settling::hindered::{HinderedModel, Suspension};
+use clearbore::physics::settling::{Particle, clift_grace_weber};
+use clearbore::physics::units::{Density, DynamicViscosity, Length, Unit};
 use proptest::prelude::*;
 use proptest::test_runner::TestCaseError;
+
+mod common;
+use common::strategies::entries;
 
 /// A value in SI anywhere in `allowed`: log-uniform over the decades when the range spans more than
 /// two of them (from 10⁻⁹ of the top when the bottom is zero), linear otherwise, and the ends
@@ -59,33 +64,13 @@ fn quantity(spec: FieldSpec) -> BoxedStrategy<Entry> {
     (0..units.len(), si_value(spec.allowed)).prop_map(move |(u, si)| written(&spec, units[u], si)).boxed()
 }
 
-fn choice(spec: ChoiceSpec) -> BoxedStrategy<Entry> {
-    (0..spec.options.len()).prop_map(move |i| Entry::Choice(spec.options[i].0.to_owned())).boxed()
-}
-
-/// Every field and choice of a layout.
-fn entries(layout: &'static [FormItem]) -> BoxedStrategy<Entries> {
-    let parts: Vec<BoxedStrategy<(String, Entry)>> = layout
-        .iter()
-        .filter_map(|item| {
-            let (key, entry) = match item {
-                FormItem::Field(f) => (f.key, quantity(*f)),
-                FormItem::Choice(c) => (c.key, choice(*c)),
-                FormItem::Heading(_) => return None,
-            };
-            Some(entry.prop_map(move |e| (key.to_owned(), e)).boxed())
-        })
-        .collect();
-    parts.prop_map(|v| v.into_iter().collect()).boxed()
-}
-
 /// A case of `c` anywhere in its domain (a line of 1 to 24 elements for the slurry line).
 fn case_of(c: Calculator) -> BoxedStrategy<CaseFile> {
     let elements = match c.element_layout() {
-        Some(layout) => proptest::collection::vec(entries(layout), 1..=clearbore::physics::slurry::keys::MAX_ELEMENTS).boxed(),
+        Some(layout) => proptest::collection::vec(entries(layout, quantity), 1..=clearbore::physics::slurry::keys::MAX_ELEMENTS).boxed(),
         None => Just(Vec::new()).boxed(),
     };
-    (entries(c.layout()), elements, proptest::bool::weighted(0.8))
+    (entries(c.layout(), quantity), elements, proptest::bool::weighted(0.8))
         .prop_map(move |(mut inputs, elements, ordered)| {
             if ordered {
                 order_sizes(&mut inputs, c.layout());
@@ -478,10 +463,6 @@ fn particle() -> impl Strategy<Value = Particle> {
         })
 }
 
-use clearbore::physics::settling::{Particle, clift_grace_weber};
-use clearbore::physics::settling::drag::SettlingModel;
-use clearbore::physics::settling::hindered::{HinderedModel, Suspension};
-use clearbore::physics::units::{Density, DynamicViscosity, Length};
 
 proptest! {
     #![proptest_config(cases(2000))]

@@ -11,6 +11,9 @@ use clearbore::case::{Calculator, CaseError, CaseFile};
 use proptest::prelude::*;
 use proptest::test_runner::TestCaseError;
 
+mod common;
+use common::strategies::member_paths;
+
 /// Cases per property: `fast` in the ordinary test run, or `PROPTEST_CASES` when set (the long
 /// profile, `./task.sh long`).
 fn cases(fast: u32) -> ProptestConfig {
@@ -197,7 +200,7 @@ fn mutated_demo() -> impl Strategy<Value = String> {
     let in_entries = (any_demo(), proptest::collection::vec(change, 1..=4)).prop_map(|(c, changes)| {
         let mut doc: Value = serde_json::from_str(c.demo_json()).unwrap();
         for (pick, number, word, other, same_kind) in changes {
-            let paths = leaf_paths(&doc, "");
+            let paths = member_paths(&doc, "");
             let path = &paths[pick.index(paths.len())];
             let at = doc.pointer_mut(path).unwrap();
             // Mostly a value of the same kind (a number for a number, a word for a word), so that
@@ -255,16 +258,6 @@ fn entry_value() -> impl Strategy<Value = Option<Value>> {
         1 => prop::sample::select(vec![Value::Null, Value::Bool(true), Value::from(vec![1, 2]), serde_json::json!({"value": 1})]).prop_map(Some),
         1 => Just(None),
     ]
-}
-
-/// JSON pointers to every member of every object and array under `v`.
-fn leaf_paths(v: &Value, at: &str) -> Vec<String> {
-    let children: Vec<(String, &Value)> = match v {
-        Value::Object(m) => m.iter().map(|(k, c)| (format!("{at}/{}", k.replace('~', "~0").replace('/', "~1")), c)).collect(),
-        Value::Array(a) => a.iter().enumerate().map(|(i, c)| (format!("{at}/{i}"), c)).collect(),
-        _ => Vec::new(),
-    };
-    children.into_iter().flat_map(|(p, c)| std::iter::once(p.clone()).chain(leaf_paths(c, &p))).collect()
 }
 
 fn remove(doc: &mut Value, path: &str) {
