@@ -31,6 +31,7 @@ use super::lengths::LengthModel;
 use super::separated_flow;
 use crate::physics::fluids::Liquid;
 use crate::physics::gases::MolarFlow;
+use crate::physics::numeric::{Tolerance, brent};
 use crate::physics::gases::reference_state::{GAS_CONSTANT, ideal_gas_density};
 use crate::physics::ode::{OdeTolerance, dormand_prince};
 use crate::physics::report::{ModelInfo, RangeWarning, ValidityBound};
@@ -249,6 +250,9 @@ pub struct Coil {
 pub const SEGMENTS: usize = 50;
 /// Iteration limit of the inlet-pressure fixed point.
 pub const MAX_INLET_ITERATIONS: u32 = 100;
+/// Iterations of the plain fixed point after which two iterates that bracket the inlet pressure
+/// are handed to Brent's method.
+pub const BRACKET_AFTER: u32 = 8;
 
 /// The computed profile; series run from the inlet (position 0) to the outlet.
 #[derive(Debug, Clone, PartialEq, Serialize)]
@@ -354,7 +358,16 @@ impl Coil {
         Ok((states, xs))
     }
 
-    /// Integrates the profile: fixed point on the inlet pressure, then the recorded march.
+    /// The inlet pressure the march from the outlet gives when the bubbles form at inlet pressure
+    /// `p_in` (Pa): the map whose fixed point is the inlet pressure.
+    fn inlet_after(&self, p_in: f64) -> Result<f64, SegmentedFlowError> {
+        let frequency = self.junction_cell(p_in)?.frequency();
+        let (states, _) = self.march(frequency, false)?;
+        states.last().map(|s| s[0]).ok_or(SegmentedFlowError::NoConvergence { quantity: "inlet pressure", iterations: 0 })
+    }
+
+    /// Integrates the profile: fixed point on the inlet pressure (Brent between two iterates that
+    /// bracket it, where the plain iteration swings), then the recorded march.
     pub fn profile(&self) -> Result<Profile, SegmentedFlowError> {
         if self.gas_at(0.0) <= 0.0 {
             return Err(SegmentedFlowError::GasExhausted);
@@ -365,11 +378,24 @@ impl Coil {
         let mut p_in = self.outlet_pressure.pascals();
         let mut frequency = self.junction_cell(p_in)?.frequency();
         let mut iterations = 0;
+        let mut before = None;
         loop {
             iterations += 1;
             let (states, _) = self.march(frequency, false)?;
             let next = states.last().map(|s| s[0]).ok_or(SegmentedFlowError::NoConvergence { quantity: "inlet pressure", iterations })?;
             let settled = (next - p_in).abs() <= 1e-9 * next;
+            // Where the plain iteration swings between two pressures on either side of the fixed
+            // point (drops of hundreds of bar, where the bubble frequency reacts strongly to the
+            // inlet pressure), the two bracket it: solve p = march(p) there with Brent.
+            if !settled && iterations >= BRACKET_AFTER && before.is_some_and(|b: f64| (next - p_in) * (p_in - b) < 0.0) {
+                let (low, high) = (p_in.min(next), p_in.max(next));
+                let gap = |p: f64| self.inlet_after(p).map_or(f64::NAN, |q| q - p);
+                p_in = brent(gap, low, high, Tolerance { absolute: 0.0, relative: 1e-10, max_iterations: 100 })
+                    .map_err(|_| SegmentedFlowError::NoConvergence { quantity: "inlet pressure", iterations })?;
+                frequency = self.junction_cell(p_in)?.frequency();
+                break;
+            }
+            before = Some(p_in);
             p_in = next;
             frequency = self.junction_cell(p_in)?.frequency();
             if settled {
