@@ -19,8 +19,8 @@ mod common;
 use common::strategies::entries;
 
 /// A value in SI anywhere in `allowed`: log-uniform over the decades when the range spans more than
-/// two of them (from 10⁻⁹ of the top when the bottom is zero), linear otherwise, and the ends
-/// themselves when they are allowed.
+/// two of them (from 10⁻⁹ of the top when the bottom is zero: see the README for what lies below),
+/// linear otherwise, and the ends themselves when they are allowed.
 fn si_value(allowed: Allowed) -> BoxedStrategy<f64> {
     let low = allowed.low;
     let high = allowed.high.expect("every field of a form has an upper bound");
@@ -37,6 +37,7 @@ fn si_value(allowed: Allowed) -> BoxedStrategy<f64> {
     if spans_decades {
         arms.push((12, (log_low.ln()..=high.ln()).prop_map(move |l| inside(l.exp())).boxed()));
     }
+
     if allowed.low_inclusive {
         arms.push((1, Just(low).boxed()));
     }
@@ -239,14 +240,16 @@ fn report_is_sound(report: &Report) -> Result<(), TestCaseError> {
         }
         if c.key == "pressure_budget" {
             // Shown to three significant figures: fine at most 80 % of the rating
-            // (`PRESSURE_MARGIN`), a problem above 100 %.
+            // (`PRESSURE_MARGIN`), a problem above 100 %. A caution can sit anywhere below 100 %
+            // (the highest correlation decides it), even below zero: in down-flow the static
+            // head can put the inlet below the ambient pressure.
             let share = stated_share_of_rating(&c.reason);
-            prop_assert!(share.is_some(), "no share of the rating in: {}", c.reason);
+            prop_assert!(share.is_some_and(f64::is_finite), "no share of the rating in: {}", c.reason);
             let share = share.unwrap_or_default();
             match c.verdict {
                 Verdict::Fine => prop_assert!(share <= 80.5, "fine at {} % of the rating: {}", share, c.reason),
                 Verdict::Problem => prop_assert!(share >= 99.5, "a problem at {} % of the rating: {}", share, c.reason),
-                Verdict::Caution => prop_assert!(share >= 0.0),
+                Verdict::Caution => prop_assert!(share <= 100.5, "a caution at {} % of the rating: {}", share, c.reason),
             }
         }
     }
@@ -664,4 +667,26 @@ fn a_coil_whose_inlet_iteration_swings_still_finds_its_inlet_pressure() {
     report_is_sound(&report).unwrap();
     assert!(figure(&report, "inlet_pressure") > figure(&report, "outlet_pressure"));
     segmented_flow_invariants(&case).unwrap();
+}
+
+/// Found by the long run of `gas_liquid_bed_over_its_domain` (shrunk): in down-flow through a
+/// 1.8 m bed at almost no back-pressure the static head puts the inlet below the ambient pressure
+/// (a negative gauge pressure, a negative share of the rating). The property had assumed a caution
+/// is never below zero; the budget itself is consistent.
+#[test]
+fn a_down_flow_bed_with_its_inlet_below_ambient_keeps_a_consistent_budget() {
+    let case = CaseFile::from_json(r#"{"clearbore_case": 2, "title": "", "calculator": "gas_liquid_bed", "inputs": {"ambient_pressure": {"value": 0.3, "unit": "bar"}, "back_pressure": {"value": 0.05520328851203192, "unit": "bar"}, "bed_length": {"value": 1818.9464726690849, "unit": "mm"}, "concentration": {"value": 15.0, "unit": "mol/L"}, "confinement": "free", "d10": {"value": 10.0, "unit": "mm"}, "d50": {"value": 10.0, "unit": "mm"}, "d90": {"value": 10.0, "unit": "mm"}, "demand": "conversion", "density": {"value": 0.3, "unit": "g/mL"}, "diffusivity": {"value": 0.004999999999999999, "unit": "cm²/s"}, "first_volume_fraction": {"value": 0.0, "unit": "%"}, "fitting_rating": {"value": 500.0, "unit": "bar"}, "flow_direction": "down", "gas": "oxygen", "gas_flow": {"value": 0.0010635588325202667, "unit": "mL/min"}, "gas_mole_fraction": {"value": 50.0, "unit": "%"}, "gas_stoichiometry": {"value": 500.0, "unit": ""}, "limiting_oxygen": {"value": 0.5, "unit": "%"}, "liquid": "water", "liquid_flow": {"value": 500.0, "unit": "mL/min"}, "liquid_surface_tension": {"value": 500.0, "unit": "mN/m"}, "loc_source": "typical", "mixture_first": "water", "mixture_second": "water", "particle_density": {"value": 12.5, "unit": "g/mL"}, "particle_diameter": {"value": 10.0, "unit": "mm"}, "particle_porosity": {"value": 0.0, "unit": "%"}, "particle_shape": "sphere", "pressure_rating": {"value": 1e-05, "unit": "bar"}, "pump_limit": {"value": 500.0, "unit": "bar"}, "reference_pressure": {"value": 0.1, "unit": "bar"}, "reference_state": "normal", "reference_temperature": {"value": -49.99999999999997, "unit": "°C"}, "required_rate": {"value": 499.99999999999994, "unit": "mmol/min"}, "size_mode": "single", "solid": "entered", "solubility": {"value": 15.0, "unit": "mol/L"}, "solubility_source": "built_in", "sphericity": {"value": 0.5, "unit": ""}, "target_conversion": {"value": 50.0, "unit": "%"}, "temperature": {"value": 94.5621573981611, "unit": "°C"}, "tube_diameter": {"value": 50.0, "unit": "mm"}, "tubing_material": "none", "tubing_size": "1_16x0_010", "viscosity": {"value": 5000.0, "unit": "mPa·s"}, "voidage": {"value": 50.0, "unit": "%"}, "voidage_source": "entered"}}"#).unwrap();
+    let report = case.evaluate().unwrap();
+    let budget = report.check("pressure_budget").unwrap();
+    assert!(stated_share_of_rating(&budget.reason).unwrap() < 0.0, "{}", budget.reason);
+    report_is_sound(&report).unwrap();
+}
+
+/// Found by the long run of `segmented_flow_over_its_domain` (shrunk): with Brent's bracket taken
+/// too early, a coil whose march breaks down inside the bracket ended in "did not converge" in one
+/// unit and converged in another. A failed bracket now goes back to the plain iteration.
+#[test]
+fn a_coil_gives_the_same_outcome_whichever_units_hold_it() {
+    let case = CaseFile::from_json(r#"{"clearbore_case": 2, "title": "", "calculator": "segmented_flow", "inputs": {"ambient_pressure": {"value": 103.52000159115752, "unit": "kPa"}, "back_pressure": {"value": 1e-05, "unit": "bar"}, "concentration": {"value": 15.0, "unit": "mol/L"}, "consumed_fraction": {"value": 0.0, "unit": "%"}, "consumption": "none", "diffusivity": {"value": 0.004999999999999999, "unit": "cm²/s"}, "gas": "oxygen", "gas_flow": {"value": 15116.109676876777, "unit": "mL/min"}, "gas_mole_fraction": {"value": 50.0, "unit": "%"}, "inner_diameter": {"value": 85.22656095498282, "unit": "mm"}, "junction": "tee", "junction_width": {"value": 100.0, "unit": "mm"}, "length": {"value": 256714.92037945142, "unit": "mm"}, "limiting_oxygen": {"value": 0.5, "unit": "%"}, "liquid_density": {"value": 0.3, "unit": "g/mL"}, "liquid_flow": {"value": 6.92892899625142e-05, "unit": "mL/min"}, "liquid_surface_tension": {"value": 500.0, "unit": "mN/m"}, "liquid_viscosity": {"value": 5000.0, "unit": "mPa·s"}, "loc_source": "typical", "pressure_rating": {"value": 500.0, "unit": "bar"}, "reference_pressure": {"value": 471.10218091232673, "unit": "bar"}, "reference_state": "user_defined", "reference_temperature": {"value": 59.79675904931605, "unit": "°C"}, "solubility": {"value": 15.0, "unit": "mol/L"}, "solubility_source": "built_in", "solvent": "thf", "temperature": {"value": -99.99999999999997, "unit": "°C"}, "tubing_material": "none", "tubing_size": "1_16x0_010"}}"#).unwrap();
+    common(&case, &[10, 0, 0, 0, 0, 0, 0, 0]).unwrap();
 }

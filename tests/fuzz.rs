@@ -357,3 +357,29 @@ fn mutations_reach_both_the_reader_and_the_calculators() {
     // its units): that is the refusal this file is about; the valid domain is tests/domain.rs.
     assert!(opened * 10 >= n && refused * 10 >= n && evaluated * 40 >= n, "{opened} opened, {evaluated} evaluated, {refused} refused of {n}");
 }
+
+/// Found by the long run of the mutated-case property (shrunk): an entry named by the empty
+/// string at the top of a case was refused with no place to show.
+#[test]
+fn an_entry_with_an_empty_name_is_refused_at_a_visible_place() {
+    let mut doc: Value = serde_json::from_str(Calculator::TubularReactor.demo_json()).unwrap();
+    doc[""] = Value::from(1);
+    doc["inputs"][" "] = Value::from(1);
+    match CaseFile::from_json(&doc.to_string()) {
+        Err(e @ CaseError::Format(_)) => {
+            refusal_says_where(&e).unwrap();
+            let shown = e.to_string();
+            assert!(shown.contains("\"\": not an entry") && shown.contains("inputs.\" \""), "{shown}");
+        }
+        other => panic!("{other:?}"),
+    }
+}
+
+/// Found by the long run of the mutated-link property (shrunk): the shipped gas–liquid case with
+/// flows of 10⁻²³⁶ and 10⁻¹⁷¹ mL/min (allowed: above zero). The film vanishes, and the k_L a
+/// estimates carried a range warning on the film Fourier number with no finite value.
+#[test]
+fn vanishing_flows_leave_no_undefined_film_fourier_number_in_a_warning() {
+    let case = CaseFile::from_json(r#"{"calculator":"segmented_flow","clearbore_case":2,"inputs":{"ambient_pressure":{"unit":"bar","value":1.01325},"back_pressure":{"unit":"bar","value":15},"concentration":{"unit":"mol/L","value":0.03},"consumed_fraction":{"unit":"%","value":50},"consumption":"consumed","diffusivity":{"unit":"cm²/s","value":0.000025},"gas":"oxygen","gas_flow":{"unit":"mL/min","value":6.829827727001157e-236},"gas_mole_fraction":{"unit":"%","value":4.5},"inner_diameter":{"unit":"mm","value":1.0},"junction":"tee","junction_width":{"unit":"mm","value":1.0},"length":{"unit":"m","value":15},"limiting_oxygen":{"unit":"%","value":10},"liquid_density":{"unit":"g/mL","value":0.786},"liquid_flow":{"unit":"mL/min","value":4.837476477822574e-171},"liquid_surface_tension":{"unit":"mN/m","value":29},"liquid_viscosity":{"unit":"mPa·s","value":0.37},"loc_source":"typical","pressure_rating":{"unit":"bar","value":20},"reference_pressure":{"unit":"bar","value":1.01325},"reference_state":"normal","reference_temperature":{"unit":"°C","value":0},"solubility":{"unit":"mmol/L","value":8},"solubility_source":"built_in","solvent":"acetonitrile","temperature":{"unit":"°C","value":60},"tubing_material":"pfa","tubing_size":"1_16x0_040"},"notes":"An invented scenario that shows what this calculator checks. It is not a tested procedure.","title":"Demo (invented): aerobic oxidation of alcohol CB-9 with 4.5 % oxygen in nitrogen, acetonitrile, 15 m of 1 mm PFA at 60 °C and 15 bar"}"#).unwrap();
+    evaluated(&case).unwrap();
+}

@@ -387,13 +387,16 @@ impl Coil {
             // Where the plain iteration swings between two pressures on either side of the fixed
             // point (drops of hundreds of bar, where the bubble frequency reacts strongly to the
             // inlet pressure), the two bracket it: solve p = march(p) there with Brent.
+            // If that fails (the march breaks down somewhere between them), the plain iteration
+            // goes on.
             if !settled && iterations >= BRACKET_AFTER && before.is_some_and(|b: f64| (next - p_in) * (p_in - b) < 0.0) {
                 let (low, high) = (p_in.min(next), p_in.max(next));
                 let gap = |p: f64| self.inlet_after(p).map_or(f64::NAN, |q| q - p);
-                p_in = brent(gap, low, high, Tolerance { absolute: 0.0, relative: 1e-10, max_iterations: 100 })
-                    .map_err(|_| SegmentedFlowError::NoConvergence { quantity: "inlet pressure", iterations })?;
-                frequency = self.junction_cell(p_in)?.frequency();
-                break;
+                if let Ok(root) = brent(gap, low, high, Tolerance { absolute: 0.0, relative: 1e-10, max_iterations: 100 }) {
+                    p_in = root;
+                    frequency = self.junction_cell(p_in)?.frequency();
+                    break;
+                }
             }
             before = Some(p_in);
             p_in = next;
