@@ -5,6 +5,8 @@
 #   ./task.sh build  build dist/clearbore.html only
 #   ./task.sh bench  measure the page budgets (size, load time, edit time on every tab) in headless Chromium,
 #                    and the settling/Ergun sweep natively, in wasm and in Python fluids
+#   ./task.sh long [filter…]  the long property-test profile: PROPTEST_CASES (default 10^6) cases per
+#                    property of tests/domain.rs and tests/fuzz.rs, optimised, one test at a time
 set -euo pipefail
 cd "$(dirname "$0")"
 
@@ -128,8 +130,19 @@ case "${1:-}" in
       cargo test --profile bench --test sweep_bench || status=1
     exit "$status"
     ;;
+  long)
+    shift
+    cases="${PROPTEST_CASES:-1000000}"
+    say "long property tests: $cases cases per property (profile robust, one thread)"
+    cargo test --profile robust --test domain --test fuzz --no-run
+    for filter in "${@:-}"; do
+      for t in domain fuzz; do
+        PROPTEST_CASES="$cases" cargo test --profile robust --test "$t" -- --test-threads 1 ${filter:+"$filter"}
+      done
+    done
+    ;;
   *)
-    sed -n '2,8p' "$0"
+    sed -n '2,10p' "$0"
     exit 2
     ;;
 esac

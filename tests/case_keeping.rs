@@ -5,11 +5,13 @@
 use base64::Engine;
 use clearbore::case::link::LinkError;
 use clearbore::case::workspace::{OpenCase, StoredError, Workspace};
-use clearbore::case::{Calculator, CaseError, CaseFile, Entries, Entry, FormItem};
-use clearbore::physics::form::ChoiceSpec;
+use clearbore::case::{Calculator, CaseError, CaseFile, Entries, Entry};
 use clearbore::physics::input::FieldSpec;
 use proptest::prelude::*;
 use serde_json::{Value, json};
+
+mod common;
+use common::strategies::{entries, member_paths};
 
 /// A quantity entry: a value inside the field's allowed range, in one of its units, sometimes
 /// with a range around it (both ends allowed).
@@ -34,26 +36,6 @@ fn quantity(spec: FieldSpec) -> BoxedStrategy<Entry> {
         .boxed()
 }
 
-fn choice(spec: ChoiceSpec) -> BoxedStrategy<Entry> {
-    (0..spec.options.len()).prop_map(move |i| Entry::Choice(spec.options[i].0.to_owned())).boxed()
-}
-
-/// Every field and choice of a layout.
-fn entries(layout: &'static [FormItem]) -> BoxedStrategy<Entries> {
-    let parts: Vec<BoxedStrategy<(String, Entry)>> = layout
-        .iter()
-        .filter_map(|item| {
-            let (key, entry) = match item {
-                FormItem::Field(f) => (f.key, quantity(*f)),
-                FormItem::Choice(c) => (c.key, choice(*c)),
-                FormItem::Heading(_) => return None,
-            };
-            Some(entry.prop_map(move |e| (key.to_owned(), e)).boxed())
-        })
-        .collect();
-    parts.prop_map(|v| v.into_iter().collect()).boxed()
-}
-
 fn timestamp() -> impl Strategy<Value = Option<String>> {
     proptest::option::of((2000u32..2100, 1u32..=12, 1u32..=28, 0u32..24, 0u32..60, 0u32..60, 0u32..1000).prop_map(
         |(y, mo, d, h, mi, s, ms)| format!("{y:04}-{mo:02}-{d:02}T{h:02}:{mi:02}:{s:02}.{ms:03}Z"),
@@ -67,10 +49,10 @@ fn any_case() -> impl Strategy<Value = CaseFile> {
         .map(|c| {
             let c = *c;
             let elements = match c.element_layout() {
-                Some(layout) => proptest::collection::vec(entries(layout), 1..=8).boxed(),
+                Some(layout) => proptest::collection::vec(entries(layout, quantity), 1..=8).boxed(),
                 None => Just(Vec::new()).boxed(),
             };
-            (entries(c.layout()), elements).prop_map(move |(inputs, elements)| (c, inputs, elements)).boxed()
+            (entries(c.layout(), quantity), elements).prop_map(move |(inputs, elements)| (c, inputs, elements)).boxed()
         })
         .collect();
     (proptest::strategy::Union::new(per_calculator), any::<String>(), any::<String>(), timestamp(), timestamp()).prop_map(
@@ -128,16 +110,6 @@ fn leaf_value() -> impl Strategy<Value = Value> {
         Just(json!([1, "a"])),
         Just(json!({"value": 1})),
     ]
-}
-
-/// JSON pointers to every member of every object and array under `v`.
-fn member_paths(v: &Value, at: &str) -> Vec<String> {
-    let children: Vec<(String, &Value)> = match v {
-        Value::Object(m) => m.iter().map(|(k, c)| (format!("{at}/{}", k.replace('~', "~0").replace('/', "~1")), c)).collect(),
-        Value::Array(a) => a.iter().enumerate().map(|(i, c)| (format!("{at}/{i}"), c)).collect(),
-        _ => Vec::new(),
-    };
-    children.into_iter().flat_map(|(p, c)| std::iter::once(p.clone()).chain(member_paths(c, &p))).collect()
 }
 
 fn demo(c: Calculator) -> CaseFile {

@@ -80,8 +80,21 @@ fn drag_coefficients_match_fluids_on_every_branch() {
             (schiller_naumann::drag_coefficient(re), "Schiller_Naumann_hand"),
         ];
         for (got, key) in pairs {
+            // Above Re = 4×10⁵ fluids 1.3.1 codes C_D = 0.19 w − 0.49 (0.57 at 4×10⁵, up from the
+            // drag-crisis branch's 0.089): the last two rows merged. Clift's table as coded in
+            // pychemqt (lib/drag.py, Clift) has 0.1 w − 0.49 to 10⁶, then 0.19 − 8×10⁴/Re, which
+            // joins both neighbours; that is what is coded here and checked below instead.
+            if key == "Clift" && re >= 4e5 {
+                continue;
+            }
             assert!(rel(got, num(p, key)) < SAME_FORMULA, "{key} at Re = {re}: {got} vs {}", num(p, key));
         }
+    }
+    for re in [4e5, 5e5, 8e5] {
+        assert!(rel(clift_grace_weber::drag_coefficient(re), 0.1 * re.log10() - 0.49) < SAME_FORMULA, "Clift at Re = {re}");
+    }
+    for re in [1e6, 2e6] {
+        assert!(rel(clift_grace_weber::drag_coefficient(re), 0.19 - 8e4 / re) < SAME_FORMULA, "Clift at Re = {re}");
     }
     // The grid must straddle every Clift branch limit for the comparison to cover them.
     let res: Vec<f64> = points.iter().map(|p| num(p, "Re")).collect();

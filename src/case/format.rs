@@ -71,7 +71,7 @@ pub(crate) fn read_value(value: &Value) -> Result<CaseFile, CaseError> {
             } else {
                 format!("not an entry of a case file (a case has {})", quoted_list(known_entries(version)))
             };
-            problems.add(key, problem);
+            problems.add(entry_name(key), problem);
         }
     }
     let calculator = read_calculator(doc.get("calculator"), &mut problems);
@@ -125,6 +125,12 @@ impl Problems {
     fn add(&mut self, path: impl Into<String>, problem: impl Into<String>) {
         self.0.push(FormatProblem { path: path.into(), problem: problem.into() });
     }
+}
+
+/// A key as it is named in a place: as written, or in quotes when that would be invisible (empty
+/// or blank), so that every problem says where it is.
+fn entry_name(key: &str) -> String {
+    if key.trim().is_empty() { format!("{key:?}") } else { key.to_owned() }
 }
 
 fn one(path: &str, problem: String) -> CaseError {
@@ -205,7 +211,7 @@ fn read_entries(value: &Value, path: &str, layout: Option<(&[FormItem], &str)>, 
     };
     let mut entries = Entries::new();
     for (key, v) in map {
-        let at = format!("{path}.{key}");
+        let at = format!("{path}.{}", entry_name(key));
         let item = match layout {
             Some((items, owner)) => match items.iter().find(|item| item.key() == Some(key.as_str())) {
                 Some(item) => Some(item),
@@ -247,7 +253,7 @@ fn read_quantity(v: &Value, at: &str, unit: Option<&str>, problems: &mut Problem
     };
     let mut ok = true;
     for key in map.keys().filter(|k| !["value", "unit", "range"].contains(&k.as_str())) {
-        problems.add(format!("{at}.{key}"), "not part of a quantity, which has only \"value\", \"unit\" and an optional \"range\"");
+        problems.add(format!("{at}.{}", entry_name(key)), "not part of a quantity, which has only \"value\", \"unit\" and an optional \"range\"");
         ok = false;
     }
     let mut part = |name: &str, what: &str, expected: &str, is: fn(&Value) -> bool| match map.get(name) {

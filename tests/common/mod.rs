@@ -2,6 +2,8 @@
 //! the same `FieldSource` validation as case files and the page.
 #![allow(dead_code)]
 
+pub mod strategies;
+
 use std::collections::HashMap;
 
 use clearbore::physics::form::{ChoiceSpec, FieldSource};

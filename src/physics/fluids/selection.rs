@@ -206,12 +206,18 @@ fn not_finite(e: PropertyError) -> NumericalError {
 }
 
 impl LiquidSelection {
-    /// Density and viscosity at the working temperature, with any range warnings.
+    /// Density and viscosity at the working temperature, with any range warnings; an error when any
+    /// of the liquid's four properties has no physical value there.
     pub fn properties(&self) -> Result<(Density, DynamicViscosity, Vec<RangeWarning>), PropertyError> {
         match *self {
             LiquidSelection::Solvent { solvent, temperature } => {
                 let rho = solvent.density(temperature)?;
                 let mu = solvent.viscosity(temperature)?;
+                // The report shows all four properties: one the models cannot give (surface tension
+                // vanishing near the critical point) is refused here, at the temperature, as for a
+                // mixture, not later as a failed figure.
+                solvent.surface_tension(temperature)?;
+                solvent.vapour_pressure(temperature)?;
                 let mut warnings = rho.warnings;
                 warnings.extend(mu.warnings);
                 Ok((rho.value, mu.value, warnings))

@@ -128,7 +128,13 @@ pub fn solve(bed: &TwoPhaseBed) -> Result<WammesState, RootError> {
 
 /// The groups both equations' bounds refer to, for the solved state.
 pub fn groups(bed: &TwoPhaseBed, state: &WammesState) -> Vec<(&'static str, f64)> {
-    let mut g = vec![(WAMMES_GAS_REYNOLDS, gas_reynolds(bed, state.total)), (TOTAL_SATURATION, state.total)];
+    let mut g = vec![(TOTAL_SATURATION, state.total)];
+    // A bed full of liquid (β_t = 1) leaves the gas no room between the particles: u_G and Re_G
+    // are undefined there (division by 1 − β_t = 0), not a number to hold against a bound.
+    let re = gas_reynolds(bed, state.total);
+    if re.is_finite() {
+        g.insert(0, (WAMMES_GAS_REYNOLDS, re));
+    }
     g.extend(wammes_holdup::groups(bed, state.gradient));
     g
 }
@@ -160,6 +166,20 @@ mod tests {
         let s = solve(&b).unwrap();
         assert!((s.gradient - pressure_gradient(&b, s.total)).abs() < 1e-9 * s.gradient);
         assert!((s.total - (dynamic_saturation(&b, s.gradient) + static_saturation(0.39))).abs() < 1e-10);
+    }
+
+    #[test]
+    fn a_bed_full_of_liquid_has_no_infinite_gas_reynolds_to_bound() {
+        // Found by the domain property test: voidage 0.02 %, the static holdup alone fills the
+        // voids (β_t = 1), and Re_G came out infinite in a range warning.
+        let full = TwoPhaseBed { voidage: Fraction::from_si(2e-4), ..bed(0.15) };
+        let s = solve(&full).unwrap();
+        assert_eq!(s.total, 1.0);
+        let g = groups(&full, &s);
+        assert!(g.iter().all(|(_, v)| v.is_finite()), "{g:?}");
+        assert!(g.iter().all(|(name, _)| *name != WAMMES_GAS_REYNOLDS));
+        // With room for the gas, Re_G is there.
+        assert!(groups(&bed(0.15), &solve(&bed(0.15)).unwrap()).iter().any(|(name, _)| *name == WAMMES_GAS_REYNOLDS));
     }
 
     #[test]

@@ -90,19 +90,20 @@ impl KlaModel {
     /// Inputs outside this correlation's range.
     pub fn warnings(self, cell: &UnitCell, dm: f64) -> Vec<RangeWarning> {
         let d = cell.flow.diameter.si();
-        range_warnings(
-            &self.info(),
-            &[
-                (DIAMETER, d),
-                (FILM_FOURIER, film_cell(cell, dm).fourier()),
-                (UNIT_CELL, cell.unit_cell_length()),
-                (BUBBLE_VELOCITY, cell.bubble.velocity),
-                (TWO_PHASE_VELOCITY, cell.flow.two_phase_velocity().si()),
-                (GAS_HOLDUP, cell.holdup),
-                (BUBBLE_LENGTH_RATIO, cell.bubble_length / d),
-                (SLUG_LENGTH_RATIO, cell.slug_length / d),
-            ],
-        )
+        let mut groups = vec![
+            (DIAMETER, d),
+            (UNIT_CELL, cell.unit_cell_length()),
+            (BUBBLE_VELOCITY, cell.bubble.velocity),
+            (TWO_PHASE_VELOCITY, cell.flow.two_phase_velocity().si()),
+            (GAS_HOLDUP, cell.holdup),
+            (BUBBLE_LENGTH_RATIO, cell.bubble_length / d),
+            (SLUG_LENGTH_RATIO, cell.slug_length / d),
+        ];
+        // Without film contact (flows so small the film vanishes) Fo is undefined, and so is its bound.
+        if let Some(fo) = film_cell(cell, dm).film_fourier() {
+            groups.insert(1, (FILM_FOURIER, fo));
+        }
+        range_warnings(&self.info(), &groups)
     }
 }
 

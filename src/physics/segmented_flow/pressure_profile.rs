@@ -31,6 +31,7 @@ use super::lengths::LengthModel;
 use super::separated_flow;
 use crate::physics::fluids::Liquid;
 use crate::physics::gases::MolarFlow;
+use crate::physics::numeric::{Tolerance, brent};
 use crate::physics::gases::reference_state::{GAS_CONSTANT, ideal_gas_density};
 use crate::physics::ode::{OdeTolerance, dormand_prince_dense};
 use crate::physics::report::{ModelInfo, RangeWarning, ValidityBound};
@@ -249,6 +250,9 @@ pub struct Coil {
 pub const SEGMENTS: usize = 50;
 /// Iteration limit of the inlet-pressure fixed point.
 pub const MAX_INLET_ITERATIONS: u32 = 100;
+/// Iterations of the plain fixed point after which two iterates that bracket the inlet pressure
+/// are handed to Brent's method.
+pub const BRACKET_AFTER: u32 = 8;
 
 /// The computed profile; series run from the inlet (position 0) to the outlet.
 #[derive(Debug, Clone, PartialEq, Serialize)]
@@ -358,9 +362,17 @@ impl Coil {
         Ok(March { last, states, xs })
     }
 
+    /// The inlet pressure the march from the outlet gives when the bubbles form at inlet pressure
+    /// `p_in` (Pa): the map whose fixed point is the inlet pressure.
+    fn inlet_after(&self, p_in: f64) -> Result<f64, SegmentedFlowError> {
+        let frequency = self.junction_cell(p_in)?.frequency();
+        Ok(self.march(frequency, false)?.last[0])
+    }
+
     /// The fixed point on the inlet pressure, started from `guess` (Pa absolute; the outlet
     /// pressure when `None`): the inlet pressure sets the bubble frequency at the junction, the
-    /// frequency the pressure drop. Returns the settled frequency and the iterations taken.
+    /// frequency the pressure drop (Brent between two iterates that bracket it, where the plain
+    /// iteration swings). Returns the settled frequency and the iterations taken.
     fn settle(&self, guess: Option<f64>) -> Result<(f64, u32), SegmentedFlowError> {
         if self.gas_at(0.0) <= 0.0 {
             return Err(SegmentedFlowError::GasExhausted);
@@ -371,10 +383,24 @@ impl Coil {
         let mut p_in = guess.filter(|p| p.is_finite() && *p >= self.outlet_pressure.pascals()).unwrap_or(self.outlet_pressure.pascals());
         let mut frequency = self.junction_cell(p_in)?.frequency();
         let mut iterations = 0;
+        let mut before = None;
         loop {
             iterations += 1;
             let next = self.march(frequency, false)?.last[0];
             let settled = (next - p_in).abs() <= 1e-9 * next;
+            // Where the plain iteration swings between two pressures on either side of the fixed
+            // point (drops of hundreds of bar, where the bubble frequency reacts strongly to the
+            // inlet pressure), the two bracket it: solve p = march(p) there with Brent.
+            // If that fails (the march breaks down somewhere between them), the plain iteration
+            // goes on.
+            if !settled && iterations >= BRACKET_AFTER && before.is_some_and(|b: f64| (next - p_in) * (p_in - b) < 0.0) {
+                let (low, high) = (p_in.min(next), p_in.max(next));
+                let gap = |p: f64| self.inlet_after(p).map_or(f64::NAN, |q| q - p);
+                if let Ok(root) = brent(gap, low, high, Tolerance { absolute: 0.0, relative: 1e-10, max_iterations: 100 }) {
+                    return Ok((self.junction_cell(root)?.frequency(), iterations));
+                }
+            }
+            before = Some(p_in);
             p_in = next;
             frequency = self.junction_cell(p_in)?.frequency();
             if settled {

@@ -163,6 +163,14 @@ impl Cell {
         self.diffusivity * self.contact_time() / (self.film_thickness * self.film_thickness)
     }
 
+    /// Fo where the film term applies (a film body, a finite positive contact time, a film
+    /// thickness that does not vanish); `None` where it does not, so no bound is held against it.
+    pub fn film_fourier(&self) -> Option<f64> {
+        let t = self.contact_time();
+        let fo = self.fourier();
+        (self.film_length() > 0.0 && t > 0.0 && t.is_finite() && fo.is_finite()).then_some(fo)
+    }
+
     /// Cap contribution k_cap a_cap, 1/s.
     pub fn cap_term(&self) -> f64 {
         2.0 * std::f64::consts::SQRT_2 / std::f64::consts::PI * (self.diffusivity * self.bubble_velocity / self.diameter).sqrt() * 4.0

@@ -100,8 +100,9 @@ impl SettlingModel {
     /// Stokes and the explicit form are closed-form. For the sphere drag laws Re_t is read from
     /// the law's Re_t(Ar) table and polished by one secant step (see [`super::table`]); otherwise,
     /// or when that does not meet its residual, the drag laws are solved for
-    /// C_D(Re(v)) v² = 4 g d |ρ_p − ρ| / (3 ρ) with Brent's method on (10⁻⁹ v_S, 2 v_S], v_S the
-    /// Stokes speed: every law here has C_D ≥ 24/Re, which puts the root at or below v_S; the
+    /// C_D(Re(v)) v² = 4 g d |ρ_p − ρ| / (3 ρ) with Brent's method on (10⁻⁹ v_S, 2 v_S] (the lower
+    /// end lowered further where the root lies below it), v_S the Stokes speed: every law here has
+    /// C_D ≥ 24/Re, which puts the root at or below v_S; the
     /// factor 2 covers fits that dip slightly below Stokes drag at tiny Re (Barati's, by 0.01 % at
     /// Re ≈ 10⁻⁷). A neutrally buoyant particle has speed 0.
     pub fn terminal_velocity(self, p: &Particle) -> Result<Velocity, RootError> {
@@ -118,7 +119,15 @@ impl SettlingModel {
             return Ok(Velocity::from_si(re * p.viscosity.si() / (p.density.si() * p.diameter.si())));
         }
         let residual = |v: f64| self.force_balance_residual(p, Velocity::from_si(v)).unwrap_or(f64::NAN);
-        let v = brent(residual, 1e-9 * v_stokes.si(), 2.0 * v_stokes.si(), Tolerance::TIGHT)?;
+        // Every law here has C_D v² → 0 as v → 0 (C_D ≥ 24/Re), so the residual tends to −1 there:
+        // where the root lies below 10⁻⁹ v_S (huge Archimedes numbers: the coarsest classes of a
+        // very wide distribution, a sphericity near zero), the lower end steps down until the
+        // residual is negative.
+        let mut low = 1e-9 * v_stokes.si();
+        while residual(low) >= 0.0 && low > 1e-290 {
+            low *= 1e-6;
+        }
+        let v = brent(residual, low, 2.0 * v_stokes.si(), Tolerance::TIGHT)?;
         Ok(Velocity::from_si(v))
     }
 

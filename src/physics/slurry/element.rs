@@ -569,6 +569,18 @@ fn element(line: &Line, i: usize, e: &LineElement, figures: &mut Vec<Figure>, ch
     }
     let (settling, reason) = if line.drift == Drift::Neutral {
         (Verdict::Fine, "Neutrally buoyant particles follow the liquid: no settling.".to_owned())
+    } else if matches!(clogging::risk(e.inner_diameter.si() / line.largest.si()), clogging::ClogRisk::Sieving) {
+        // Hindered settling across a passage narrower than the particles has no meaning (the
+        // Richardson–Zaki wall term would drive the speed to zero and the time to settle to
+        // infinity): the element is judged by its clogging check.
+        (
+            Verdict::Problem,
+            format!(
+                "Not assessed: the largest particles ({} µm) are as wide as the passage ({} µm) or wider and cannot pass it; see the clogging check.",
+                um(line.largest.si()),
+                um(e.inner_diameter.si())
+            ),
+        )
     } else {
         let suspension = Suspension { particle: input.particle(line.largest), solids_fraction: line.phi, tube_diameter: e.inner_diameter };
         figures.push(hindered_velocity_spread(&suspension, keys::HINDERED_VELOCITY[i].key, keys::HINDERED_VELOCITY[i].label)?);
@@ -707,7 +719,8 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
         .map(|m| {
             Ok(Estimate {
                 model: m.model,
-                value: Finite::new("line pressure drop", total * m.value.get() / mu_s)?,
+                // The recommended estimate is the figure's value itself, not the same to the last bit.
+                value: Finite::new("line pressure drop", if m.recommended { total } else { total * m.value.get() / mu_s })?,
                 recommended: m.recommended,
                 warnings: m.warnings.clone(),
             })

@@ -36,13 +36,16 @@ pub fn settling_vs_size(input: &SlurryInput, solids_fraction: f64) -> Result<Plo
         .find(|e| e.orientation == Orientation::Horizontal && matches!(e.kind, ElementKind::Tubing | ElementKind::Coil))
         .or(input.elements.first())
         .map_or(Length::from_si(1e-3), |e| e.inner_diameter);
+    // Sizes that fit through the bore: across a narrower passage there is no time to settle.
+    let smallest = (small / 3.0).max(0.5e-6);
+    let largest = (large * 3.0).min(2e-3).min(bore.si() * 0.99);
     let series = settling_series(&SeriesInput {
         particle: input.particle(input.size.median()),
         solids_fraction,
         bore,
-        smallest: Length::from_si((small / 3.0).max(0.5e-6)),
-        largest: Length::from_si((large * 3.0).min(2e-3)),
-        points: POINTS,
+        smallest: Length::from_si(smallest),
+        largest: Length::from_si(largest),
+        points: if largest > smallest { POINTS } else { 0 },
     })?;
     plot.line("Single particle (recommended drag law)", series.iter().map(|p| (p.diameter.si(), p.terminal_velocity.si())), false);
     plot.line("Hindered (Richardson–Zaki)", series.iter().map(|p| (p.diameter.si(), p.hindered_velocity.si())), true);
