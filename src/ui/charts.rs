@@ -4,7 +4,9 @@
 use leptos::html::Canvas;
 use leptos::prelude::*;
 use plotters::prelude::IntoDrawingArea;
+use plotters_backend::{BackendColor, BackendCoord, BackendStyle, BackendTextStyle, DrawingBackend, DrawingErrorKind};
 use plotters_canvas::CanvasBackend;
+use wasm_bindgen::JsCast;
 
 use super::case_io::download;
 use crate::physics::plot::Plot;
@@ -56,10 +58,12 @@ fn PlotView(plot: Signal<Option<Plot>>, key: &'static str) -> impl IntoView {
         });
         canvas.set_width((css_width * ratio).round() as u32);
         canvas.set_height((HEIGHT * ratio).round() as u32);
-        let Some(backend) = CanvasBackend::with_canvas_object(canvas) else {
+        let context = canvas.get_context("2d").ok().flatten().and_then(|c| c.dyn_into::<web_sys::CanvasRenderingContext2d>().ok());
+        let (Some(context), Some(inner)) = (context, CanvasBackend::with_canvas_object(canvas)) else {
             failure.set(Some("This browser gave no 2-D canvas to draw on.".to_owned()));
             return;
         };
+        let backend = MeasuredCanvas { inner, context };
         failure.set(crate::plot::draw(&backend.into_drawing_area(), &plot, ratio).err().map(|e| format!("The chart could not be drawn: {e}")));
     });
     let save = move |_| {
@@ -98,5 +102,97 @@ fn PlotView(plot: Signal<Option<Plot>>, key: &'static str) -> impl IntoView {
                 <button type="button" class="small no-print" data-testid=format!("csv-{key}") on:click=data>"Data (CSV)"</button>
             </figcaption>
         </figure>
+    }
+}
+
+/// The canvas backend with text measured by the canvas itself (`measureText`). Plotters'
+/// default measures text by adding a span to the page and reading its size, which makes the
+/// browser lay out the whole page for every label: over a third of an edit's time on the slurry
+/// tab. Everything else is the canvas backend's own drawing.
+type CanvasError = <CanvasBackend as DrawingBackend>::ErrorType;
+
+struct MeasuredCanvas {
+    inner: CanvasBackend,
+    context: web_sys::CanvasRenderingContext2d,
+}
+
+impl DrawingBackend for MeasuredCanvas {
+    type ErrorType = CanvasError;
+
+    fn get_size(&self) -> (u32, u32) {
+        self.inner.get_size()
+    }
+
+    fn ensure_prepared(&mut self) -> Result<(), DrawingErrorKind<CanvasError>> {
+        self.inner.ensure_prepared()
+    }
+
+    fn present(&mut self) -> Result<(), DrawingErrorKind<CanvasError>> {
+        self.inner.present()
+    }
+
+    fn draw_pixel(&mut self, point: BackendCoord, color: BackendColor) -> Result<(), DrawingErrorKind<CanvasError>> {
+        self.inner.draw_pixel(point, color)
+    }
+
+    fn draw_line<S: BackendStyle>(&mut self, from: BackendCoord, to: BackendCoord, style: &S) -> Result<(), DrawingErrorKind<CanvasError>> {
+        self.inner.draw_line(from, to, style)
+    }
+
+    fn draw_rect<S: BackendStyle>(&mut self, upper_left: BackendCoord, bottom_right: BackendCoord, style: &S, fill: bool) -> Result<(), DrawingErrorKind<CanvasError>> {
+        self.inner.draw_rect(upper_left, bottom_right, style, fill)
+    }
+
+    fn draw_path<S: BackendStyle, I: IntoIterator<Item = BackendCoord>>(&mut self, path: I, style: &S) -> Result<(), DrawingErrorKind<CanvasError>> {
+        self.inner.draw_path(path, style)
+    }
+
+    fn fill_polygon<S: BackendStyle, I: IntoIterator<Item = BackendCoord>>(&mut self, vert: I, style: &S) -> Result<(), DrawingErrorKind<CanvasError>> {
+        self.inner.fill_polygon(vert, style)
+    }
+
+    fn draw_circle<S: BackendStyle>(&mut self, center: BackendCoord, radius: u32, style: &S, fill: bool) -> Result<(), DrawingErrorKind<CanvasError>> {
+        self.inner.draw_circle(center, radius, style, fill)
+    }
+
+    fn draw_text<T: BackendTextStyle>(&mut self, text: &str, style: &T, pos: BackendCoord) -> Result<(), DrawingErrorKind<CanvasError>> {
+        self.inner.draw_text(text, style, pos)
+    }
+
+    fn estimate_text_size<T: BackendTextStyle>(&self, text: &str, style: &T) -> Result<(u32, u32), DrawingErrorKind<CanvasError>> {
+        // The same font string the canvas backend draws with. Setting a font is itself slow, and
+        // the labels repeat from one drawing to the next: sizes are kept once measured.
+        let font = format!("{} {}px {}", style.style().as_str(), style.size(), style.family().as_str());
+        let key = format!("{font}\u{0}{text}");
+        if let Some(size) = TEXT_SIZES.with_borrow(|sizes| sizes.get(&key).copied()) {
+            return Ok(size);
+        }
+        let size = self.measure(&font, text, style.size());
+        TEXT_SIZES.with_borrow_mut(|sizes| {
+            if sizes.len() >= 4096 {
+                sizes.clear();
+            }
+            sizes.insert(key, size);
+        });
+        Ok(size)
+    }
+}
+
+thread_local! {
+    /// Text sizes measured so far, by font and text.
+    static TEXT_SIZES: std::cell::RefCell<std::collections::HashMap<String, (u32, u32)>> = std::cell::RefCell::new(std::collections::HashMap::new());
+}
+
+impl MeasuredCanvas {
+    /// Width and height of `text` in `font` (its size `size` px), measured by the canvas.
+    fn measure(&self, font: &str, text: &str, size: f64) -> (u32, u32) {
+        self.context.set_font(font);
+        let Ok(metrics) = self.context.measure_text(text) else {
+            return ((size * 0.6 * text.chars().count() as f64).ceil() as u32, (size * 1.2).ceil() as u32);
+        };
+        // The font's line box (what a span's height was), or 1.2 × the size where not given.
+        let height = metrics.font_bounding_box_ascent() + metrics.font_bounding_box_descent();
+        let height = if height.is_finite() && height > 0.0 { height } else { size * 1.2 };
+        (metrics.width().ceil().max(0.0) as u32, height.ceil() as u32)
     }
 }
