@@ -212,6 +212,17 @@ pub fn CaseBar(form: CalculatorForm, report: Signal<Option<Report>>) -> impl Int
         });
     };
     let has_line = calculator.element_layout().is_some();
+    // The workspace is saved a moment after the last edit; moving to the title or the notes saves
+    // at once, so that an edited demo has already become the user's own untitled case (title and
+    // demo notes cleared) before anything is typed there.
+    let flush = {
+        let (bench, form) = (bench.clone(), form.clone());
+        move |_: leptos::ev::FocusEvent| {
+            if let Some(b) = &bench {
+                b.library.autosave(&form);
+            }
+        }
+    };
     let title_id = format!("case-title-{}", calculator.key());
     let notes_id = format!("case-notes-{}", calculator.key());
     view! {
@@ -223,6 +234,7 @@ pub fn CaseBar(form: CalculatorForm, report: Signal<Option<Report>>) -> impl Int
                     type="text"
                     data-testid="case-title-input"
                     placeholder="Untitled case"
+                    on:focus=flush.clone()
                     prop:value=move || form.title.get()
                     on:input:target=move |ev| form.title.set(ev.target().value())
                 />
@@ -235,6 +247,7 @@ pub fn CaseBar(form: CalculatorForm, report: Signal<Option<Report>>) -> impl Int
                     id=notes_id
                     data-testid="case-notes"
                     rows="3"
+                    on:focus=flush
                     prop:value=move || form.notes.get()
                     on:input:target=move |ev| form.notes.set(ev.target().value())
                 ></textarea>
