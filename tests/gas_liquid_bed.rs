@@ -217,7 +217,7 @@ const fn row(liquid: &'static str, flow: [f64; 3], dynamic: [f64; 2], gradient: 
     }
 }
 
-/// The coupled Eqs. 8–9 computed with an independent implementation of the transcribed equations
+/// The coupled Eqs. 8–9 computed with an independent implementation of the equations as quoted
 /// (β_r = 0.06/ε; N₂ viscosity linear in pressure between 0.017 mPa·s at 1 bar and 0.019 at
 /// 100 bar, ρ_N₂ = 1.15 P[bar], Table 2; water 1000 kg/m³, 1.0 mPa·s on 3.2 mm alumina cylinders,
 /// ε = 0.43; ethanol 790 kg/m³, 1.2 mPa·s on 3 mm glass spheres, ε = 0.39, Table 2 and Sections

@@ -257,7 +257,7 @@ fn richardson_zaki_exponent_follows_each_branch() {
     // A value on a limit takes the upper branch.
     assert!((richardson_zaki::exponent(0.2, 0.0) - 4.35 * 0.2f64.powf(-0.03)).abs() < 1e-12);
     assert!((richardson_zaki::exponent(200.0, 0.04) - 4.45 * 200f64.powf(-0.1)).abs() < 1e-12);
-    // The transcriber's −13.9 % jump at Re = 200 for d/D = 0.04.
+    // The −13.9 % jump at Re = 200 for d/D = 0.04.
     let below = richardson_zaki::exponent(199.999_999, 0.04);
     let above = richardson_zaki::exponent(200.0, 0.04);
     assert!(((above / below - 1.0) * 100.0 + 13.9).abs() < 0.05);

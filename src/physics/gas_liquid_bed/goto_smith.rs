@@ -1,7 +1,7 @@
 //! Goto & Smith (1975), in the form Korsten & Hoffmann (1996) use it: volumetric gas–liquid
 //! mass-transfer coefficient k_L a of a trickle bed, per unit bed volume. Low confidence here.
 //!
-//! Formula (CGS, as transcribed): k_L a / D_L = α₁ (G_L / μ_L)^α₂ (μ_L / (ρ_L D_L))^½ with
+//! Formula (CGS, as quoted): k_L a / D_L = α₁ (G_L / μ_L)^α₂ (μ_L / (ρ_L D_L))^½ with
 //! α₁ = 7 cm^−1.6 and α₂ = 0.4; G_L the liquid mass flux (g cm⁻² s⁻¹), μ_L the liquid viscosity
 //! (g cm⁻¹ s⁻¹), ρ_L its density (g cm⁻³), D_L the gas's diffusivity in the liquid (cm² s⁻¹) and
 //! k_L a in s⁻¹. Converted here from SI inputs (G: ×0.1, μ: ×10, ρ: ×10⁻³, D: ×10⁴). The gas flow
@@ -26,7 +26,7 @@
 //! ```
 //!
 //! References: S. Goto, J. M. Smith, AIChE J. 21 (1975) (not read); I. Korsten, U. Hoffmann,
-//! AIChE J. 42 (1996) (not read; the form as two public hydrotreating codes transcribe it).
+//! AIChE J. 42 (1996) (not read; the form as two public hydrotreating codes implement it).
 
 use crate::physics::report::ModelInfo;
 

@@ -23,7 +23,7 @@
 //! ```
 //!
 //! References: E. J. Wilson, C. J. Geankoplis, Liquid mass transfer at very low Reynolds numbers
-//! in packed beds, Ind. Eng. Chem. Fundam. 5 (1966) 9 (form as two public codes transcribe it; the
+//! in packed beds, Ind. Eng. Chem. Fundam. 5 (1966) 9 (form as two public codes implement it; the
 //! original not read); D. M. Ruthven, Principles of Adsorption
 //! and Adsorption Processes, Wiley (1984).
 
@@ -36,7 +36,7 @@ use super::flow::LIQUID_REYNOLDS;
 pub const INFO: ModelInfo = ModelInfo {
     name: "Wilson–Geankoplis",
     formula: "Sh = k_s d_p/D_L = 1.09 ε⁻¹ Re^0.33 Sc^0.33 (Re = ρ_L u_L d_p/μ_L, superficial)",
-    source: "Wilson & Geankoplis (1966) Ind. Eng. Chem. Fundam. 5, 9 (form as public codes transcribe it); single phase, fully wetted",
+    source: "Wilson & Geankoplis (1966) Ind. Eng. Chem. Fundam. 5, 9 (form as public codes implement it); single phase, fully wetted",
     validity: &[ValidityBound { quantity: LIQUID_REYNOLDS, dimension: Dimension::Number, low: Some(0.0015), high: Some(55.0) }],
 };
 

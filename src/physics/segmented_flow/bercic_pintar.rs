@@ -3,7 +3,7 @@
 //! Formula (their eq. 6 with Table 1): k_L a = p₁ v^p₂ / ((1 − ε_G) L_UC)^p₃ with
 //! p₁ = 0.111 ± 0.006, p₂ = 1.19 ± 0.02, p₃ = 0.57 ± 0.02; SI only (k_L a in s⁻¹, v the average
 //! cell velocity U_TP = j_G + j_L in m/s, L_UC the unit-cell length — one bubble and one slug — in
-//! m, ε_G the gas holdup). van Baten & Krishna (2004, eq. 1) transcribe it the same way.
+//! m, ε_G the gas holdup). van Baten & Krishna (2004, eq. 1) quote it the same way.
 //!
 //! Validity: methane–water at 298 K and ambient pressure, vertical up-flow in 1.12 m glass
 //! capillaries of 1.5, 2.5 and 3.1 mm; velocities 0.01–0.4 m/s; unit cells up to about 0.22 m

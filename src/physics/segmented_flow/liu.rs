@@ -7,7 +7,7 @@
 //!
 //! Validity: vertical capillaries of 0.9–3 mm hydraulic diameter, circular and square, air with
 //! water, ethanol and an oil (as summarised by Keskin et al. 2010). No capillary-number range is
-//! stated in either transcription, so none is carried. Akbar & Ghiaasiaan (2006) found it
+//! stated in either of the two papers that quote it, so none is carried. Akbar & Ghiaasiaan (2006) found it
 //! predicts most of Liu et al.'s data well, over-predicts some 0.91 mm air–ethanol data and
 //! slightly under-predicts Laborie et al.'s 1 mm data.
 //!
@@ -24,7 +24,7 @@
 //! Reference: H. Liu, C. O. Vandu, R. Krishna, Hydrodynamics of Taylor flow in vertical
 //! capillaries: flow regimes, bubble rise velocity, liquid slug length, and pressure drop, Ind.
 //! Eng. Chem. Res. 44 (2005) 4884–4897, doi:10.1021/ie049307n (original not read). The equation
-//! as transcribed in two full texts that agree: M. K. Akbar, S. M. Ghiaasiaan, Ind. Eng. Chem.
+//! as quoted in two papers that agree: M. K. Akbar, S. M. Ghiaasiaan, Ind. Eng. Chem.
 //! Res. 45 (2006) 5396–5403, doi:10.1021/ie0601551, eq. (7); Ö. Keskin, M. Wörner, H. S. Soyhan,
 //! T. Bauer, O. Deutschmann, R. Lange, AIChE J. 56 (2010) 1693–1702, doi:10.1002/aic.12113,
 //! eq. (3).
@@ -37,7 +37,7 @@ use crate::physics::units::Dimension;
 pub const INFO: ModelInfo = ModelInfo {
     name: "Liu–Vandu–Krishna",
     formula: "U_B/U_TP = 1/(1 − 0.61 Ca^0.33), Ca = μ_L U_TP/σ",
-    source: "Liu, Vandu & Krishna (2005) Ind. Eng. Chem. Res. 44, 4884–4897, as transcribed by Akbar & Ghiaasiaan (2006) eq. 7 and Keskin et al. (2010) eq. 3",
+    source: "Liu, Vandu & Krishna (2005) Ind. Eng. Chem. Res. 44, 4884–4897, as quoted by Akbar & Ghiaasiaan (2006) eq. 7 and Keskin et al. (2010) eq. 3",
     validity: &[ValidityBound { quantity: DIAMETER, dimension: Dimension::Length, low: Some(0.9e-3), high: Some(3e-3) }],
 };
 

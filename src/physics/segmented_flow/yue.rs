@@ -7,7 +7,7 @@
 //! Validity: one rectangular channel, 0.5 × 1 mm (d_h = 0.667 mm), CO₂–water (from memory); the
 //! bound on D below (0.5–1 mm) is set around that single size. Its constants could not be read in
 //! any source: it stays marked from memory, and the same group's 2009 fit on square channels
-//! ([`super::yue_2009`], read in a transcription) is shown beside it.
+//! ([`super::yue_2009`], read as quoted in a later paper) is shown beside it.
 //!
 //! Example (hand calculation): Re_G = 10, Re_L = 100, Sc = 500, D_m = 2e-9, d_h = 1 mm:
 //! 0.084 × 10^0.213 × 100^0.937 × 500^0.5 × 2e-9 / 1e-6 = 0.4590 s⁻¹.

@@ -20,7 +20,7 @@
 //! Reference: J. Yue, L. Luo, Y. Gonthier, G. Chen, Q. Yuan, An experimental study of air–water
 //! Taylor flow and mass transfer inside square microchannels, Chem. Eng. Sci. 64 (2009)
 //! 3697–3708 (DOI not confirmed here; the original was not read: equation and range as
-//! transcribed by a later lattice-Boltzmann study of Taylor-flow mass transfer).
+//! quoted by a later lattice-Boltzmann study of Taylor-flow mass transfer).
 
 use super::flow::{BUBBLE_LENGTH_RATIO, BUBBLE_VELOCITY, DIAMETER, SLUG_LENGTH_RATIO};
 use crate::physics::report::{ModelInfo, ValidityBound};
@@ -30,7 +30,7 @@ use crate::physics::units::Dimension;
 pub const INFO: ModelInfo = ModelInfo {
     name: "Yue et al. (2009)",
     formula: "k_L a = (2/D) (D_m U_B/(L_B + L_S))^0.5 (L_B/(L_B + L_S))^0.3",
-    source: "Yue, Luo, Gonthier, Chen & Yuan (2009) Chem. Eng. Sci. 64, 3697–3708 (square 400 µm channel, air–water; as transcribed in a later study)",
+    source: "Yue, Luo, Gonthier, Chen & Yuan (2009) Chem. Eng. Sci. 64, 3697–3708 (square 400 µm channel, air–water; as quoted in a later study)",
     validity: &[
         ValidityBound { quantity: DIAMETER, dimension: Dimension::Length, low: Some(0.4e-3), high: Some(0.4e-3) },
         ValidityBound { quantity: BUBBLE_VELOCITY, dimension: Dimension::Velocity, low: Some(0.4), high: Some(2.0) },

@@ -8,7 +8,7 @@
 //! n = 4.65 + 19.5 d/D (Re < 0.2); (4.35 + 17.5 d/D) Re^−0.03 (0.2 ≤ Re < 1);
 //! (4.45 + 18 d/D) Re^−0.1 (1 ≤ Re < 200); 4.45 Re^−0.1 (200 ≤ Re < 500); 2.39 (Re ≥ 500).
 //! A value on a limit takes the upper branch. The exponent jumps at the limits (−13.9 % at
-//! Re = 200 for d/D = 0.04, noted by the transcriber); that is the correlation, not a bug.
+//! Re = 200 for d/D = 0.04, noted where the formula was read); that is the correlation, not a bug.
 //! Their eq. 42 for non-spheres needs a second particle diameter and is not used here.
 //!
 //! Validity: data 2×10⁻⁴ < Re < 7×10³, d/D < 0.04, ε from 0.42 up (their data reach ε ≈ 0.96).
