@@ -629,14 +629,8 @@ async fn map_event(b: &Browser, kind: &str, fx: f64, fy: f64) {
 
 /// The map marker's distance from the left (% of the map) once `ok` holds for it (5 s at most).
 async fn marker_left_when(b: &Browser, ok: impl Fn(f64) -> bool) -> f64 {
-    for _ in 0..50 {
-        let now = b.js("return parseFloat(document.querySelector('[data-testid=map-marker-cartridge_map]').style.left);").await.as_f64().unwrap();
-        if ok(now) {
-            return now;
-        }
-        tokio::time::sleep(std::time::Duration::from_millis(100)).await;
-    }
-    panic!("the map marker did not move as expected");
+    let script = "return parseFloat(document.querySelector('[data-testid=map-marker-cartridge_map]').style.left);";
+    b.js_when(script, |v| v.as_f64().is_some_and(&ok)).await.as_f64().unwrap()
 }
 
 #[tokio::test]
@@ -670,15 +664,8 @@ async fn the_cartridge_map_renders_reads_out_a_cell_moves_the_case_and_follows_t
     // A click moves the case: the flow field takes the cell's flow (3 significant figures).
     let before = b.js("return document.querySelector('[data-testid=map-marker-cartridge_map]').style.left;").await;
     map_event(&b, "click", 0.9, 0.1).await;
-    let mut typed = String::new();
-    for _ in 0..50 {
-        typed = b.js("return document.querySelector('[data-testid=input-flow]').value;").await.as_str().unwrap_or_default().to_owned();
-        if typed != "1" {
-            break;
-        }
-        tokio::time::sleep(std::time::Duration::from_millis(100)).await;
-    }
-    let q: f64 = typed.parse().unwrap();
+    let typed = b.js_when("return document.querySelector('[data-testid=input-flow]').value;", |v| v != "1").await;
+    let q: f64 = typed.as_str().unwrap().parse().unwrap();
     assert!(q > 3.0 && q <= 10.0, "flow now {q} mL/min");
     // The marker follows the entry: after the click it sits at the chosen flow, right of where
     // it was; a lower flow typed moves it left again.

@@ -24,20 +24,6 @@ async fn stored(b: &Browser) -> Option<String> {
     b.js(&format!("return localStorage.getItem('{KEY}');")).await.as_str().map(str::to_owned)
 }
 
-/// The value `script` returns once `ok` holds for it (the page saves a moment after the last
-/// edit; 5 s at most).
-async fn js_when(b: &Browser, script: &str, ok: impl Fn(&Value) -> bool) -> Value {
-    let mut last = Value::Null;
-    for _ in 0..50 {
-        last = b.js(script).await;
-        if ok(&last) {
-            return last;
-        }
-        tokio::time::sleep(std::time::Duration::from_millis(100)).await;
-    }
-    panic!("{script} gave {last}");
-}
-
 #[tokio::test]
 async fn edits_and_the_tab_survive_a_reload() {
     let b = Browser::start().await;
@@ -52,7 +38,7 @@ async fn edits_and_the_tab_survive_a_reload() {
     title.send_keys("K3PO4 slurry, 1/8 in line, trial 2").await.unwrap();
     b.click(".case-notes summary").await;
     b.client.find(Locator::Css("[data-testid=case-notes]")).await.unwrap().send_keys("Milled 10 min; check the fitting.").await.unwrap();
-    js_when(&b, &format!("return localStorage.getItem('{KEY}');"), |v| v.as_str().is_some_and(|s| s.contains("trial 2"))).await;
+    b.js_when(&format!("return localStorage.getItem('{KEY}');"), |v| v.as_str().is_some_and(|s| s.contains("trial 2"))).await;
     reload(&b).await;
     // The slurry tab is back, with every edit, the title and the notes.
     b.wait_for("[data-testid=panel-slurry_line]").await;
@@ -74,7 +60,7 @@ async fn an_edited_demo_becomes_an_untitled_case_and_a_new_case_starts_untitled(
     assert!(b.exists("[data-testid=demo-badge]").await, "the demo says it is one");
     b.type_into("flow", "0.7").await;
     b.text_when("[data-testid=result-residence_time]", |t| t != "9.073").await;
-    js_when(&b, "return document.querySelector('[data-testid=case-title-input]').value;", |v| v == "").await;
+    b.js_when("return document.querySelector('[data-testid=case-title-input]').value;", |v| v == "").await;
     assert!(!b.exists("[data-testid=demo-badge]").await);
     b.click("[data-testid=new-case]").await;
     assert_eq!(b.js("return document.querySelector('[data-testid=case-title-input]').value;").await, "");
@@ -96,7 +82,7 @@ async fn a_damaged_stored_record_is_kept_aside_reported_and_the_page_works() {
     // The page works and stores afresh; the kept copy is never written over.
     b.type_into("flow", "0.8").await;
     b.text_when("[data-testid=result-residence_time]", |t| t != "9.073").await;
-    js_when(&b, &format!("return localStorage.getItem('{KEY}');"), |v| v.as_str().is_some_and(|s| s.contains("\"clearbore_workspace\"") && s.contains("0.8"))).await;
+    b.js_when(&format!("return localStorage.getItem('{KEY}');"), |v| v.as_str().is_some_and(|s| s.contains("\"clearbore_workspace\"") && s.contains("0.8"))).await;
     let again = b.js(&format!("return Object.keys(localStorage).filter(k => k.startsWith('{KEY}.kept.')).length;")).await;
     assert_eq!(again, 1);
     // A record from a newer version is kept aside the same way.
@@ -147,7 +133,7 @@ async fn a_share_link_opens_the_case_without_a_request_or_touching_stored_work()
     // Change the stored work, then open the link in the same browser.
     let unedited = stored(&b).await;
     b.type_into("flow", "1.5").await;
-    let before = js_when(&b, &format!("return localStorage.getItem('{KEY}');"), |v| v.as_str() != unedited.as_deref()).await.as_str().unwrap().to_owned();
+    let before = b.js_when(&format!("return localStorage.getItem('{KEY}');"), |v| v.as_str() != unedited.as_deref()).await.as_str().unwrap().to_owned();
     b.client.goto(&link).await.unwrap();
     b.wait_for("[data-testid=panel-packed_bed]").await;
     assert_eq!(b.js("return document.querySelector('[data-testid=input-flow]').value;").await, "2.5");

@@ -394,18 +394,14 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
     };
     if calculator.has_map() {
         let main = form.main.clone();
-        let pending: StoredValue<Option<TimeoutHandle>, LocalStorage> = StoredValue::new_local(None);
+        let later = super::Later::new();
         Effect::new(move |_| {
             if !map_open.get() || outcome.with(|o| o.stale) {
                 return;
             }
             report.track();
-            if let Some(handle) = pending.try_update_value(Option::take).flatten() {
-                handle.clear();
-            }
             let main = main.clone();
-            let work = move || map.set(untrack(|| calculator.map(&main).and_then(Result::ok)));
-            pending.set_value(set_timeout_with_handle(work, std::time::Duration::from_millis(150)).ok());
+            later.run(std::time::Duration::from_millis(150), move || map.set(untrack(|| calculator.map(&main).and_then(Result::ok))));
         });
     }
     let line = Memo::new(move |_| report.with(|r| r.as_ref().and_then(line_of)));

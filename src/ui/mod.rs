@@ -21,6 +21,33 @@ mod workbench;
 
 use wasm_bindgen::JsValue;
 
+/// Work done a moment after the last request for it: each request replaces the pending one (the
+/// save after an edit, the input ranges, the operating map).
+#[derive(Debug, Clone, Copy)]
+pub(crate) struct Later(leptos::prelude::StoredValue<Option<leptos::prelude::TimeoutHandle>, leptos::prelude::LocalStorage>);
+
+impl Later {
+    /// Nothing pending yet.
+    pub(crate) fn new() -> Self {
+        Self(leptos::prelude::StoredValue::new_local(None))
+    }
+
+    /// Drops the pending work, if any.
+    pub(crate) fn cancel(&self) {
+        use leptos::prelude::*;
+        if let Some(handle) = self.0.try_update_value(Option::take).flatten() {
+            handle.clear();
+        }
+    }
+
+    /// Runs `work` after `delay` unless another request comes first.
+    pub(crate) fn run(&self, delay: std::time::Duration, work: impl FnOnce() + 'static) {
+        use leptos::prelude::*;
+        self.cancel();
+        self.0.set_value(set_timeout_with_handle(work, delay).ok());
+    }
+}
+
 /// Scrolls the element with this id into view once the page has redrawn (after a selection
 /// has opened the detail it is in).
 pub(crate) fn scroll_to(id: String) {

@@ -17,19 +17,13 @@ const SETTLE: Duration = Duration::from_millis(200);
 /// Keeps `spread` up to date with `case` (the entries as they stand, or `None` when invalid):
 /// cleared at once when there are no ranges, recomputed shortly after the last edit otherwise.
 pub fn follow_ranges(case: Memo<Option<CaseFile>>, spread: RwSignal<Option<Spread>>) {
-    let pending: StoredValue<Option<TimeoutHandle>, LocalStorage> = StoredValue::new_local(None);
-    Effect::new(move |_| {
-        let case = case.get();
-        if let Some(handle) = pending.try_update_value(Option::take).flatten() {
-            handle.clear();
+    let later = super::Later::new();
+    Effect::new(move |_| match case.get().filter(|c| !ranges::ranged_inputs(c).is_empty()) {
+        None => {
+            later.cancel();
+            spread.set(None);
         }
-        match case.filter(|c| !ranges::ranged_inputs(c).is_empty()) {
-            None => spread.set(None),
-            Some(case) => {
-                let handle = set_timeout_with_handle(move || spread.set(ranges::spread(&case)), SETTLE).ok();
-                pending.set_value(handle);
-            }
-        }
+        Some(case) => later.run(SETTLE, move || spread.set(ranges::spread(&case))),
     });
 }
 

@@ -60,7 +60,7 @@ pub fn provide_workbench() -> Workbench {
     // would otherwise double the time of every keystroke), and at once when the page is hidden
     // or closed, so that nothing typed is lost.
     for form in bench.forms.clone() {
-        let pending: StoredValue<Option<TimeoutHandle>, LocalStorage> = StoredValue::new_local(None);
+        let later = super::Later::new();
         Effect::new(move |first: Option<()>| {
             form.track_all();
             // The first run (the page opening) saves at once, as the stored record is checked then.
@@ -68,11 +68,8 @@ pub fn provide_workbench() -> Workbench {
                 library.autosave(&form);
                 return;
             }
-            if let Some(handle) = pending.try_update_value(Option::take).flatten() {
-                handle.clear();
-            }
             let form = form.clone();
-            pending.set_value(set_timeout_with_handle(move || library.autosave(&form), SAVE_AFTER).ok());
+            later.run(SAVE_AFTER, move || library.autosave(&form));
         });
     }
     let save_all = {

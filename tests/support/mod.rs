@@ -201,6 +201,20 @@ impl Browser {
         !self.client.find_all(Locator::Css(css)).await.unwrap().is_empty()
     }
 
+    /// Polls (up to 5 s) until the value `script` returns satisfies `ok` (for what the page does a
+    /// moment after an edit: saving, the map); returns it.
+    pub async fn js_when(&self, script: &str, ok: impl Fn(&Value) -> bool) -> Value {
+        let mut last = Value::Null;
+        for _ in 0..50 {
+            last = self.js(script).await;
+            if ok(&last) {
+                return last;
+            }
+            tokio::time::sleep(std::time::Duration::from_millis(100)).await;
+        }
+        panic!("{script} gave {last}");
+    }
+
     /// Polls (up to 5 s) until the text of `css` satisfies `ok`; returns the last text seen.
     pub async fn text_when(&self, css: &str, ok: impl Fn(&str) -> bool) -> String {
         let mut last = String::new();

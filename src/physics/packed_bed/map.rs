@@ -72,15 +72,7 @@ pub fn cartridge_map(input: &PackedBedInput, n: usize) -> Map {
         for (ix, &q) in x.values.iter().enumerate() {
             let flow = VolumetricFlow::from_si(q);
             let u = geometry::superficial_velocity(flow, input.tube_diameter);
-            let bed = BedFlow {
-                particle_diameter: input.shape.effective_diameter(particle),
-                voidage: eps,
-                superficial_velocity: u,
-                density: input.density,
-                viscosity: input.viscosity,
-                length: input.bed_length,
-                tube_diameter: input.tube_diameter,
-            };
+            let bed = BedFlow { superficial_velocity: u, ..at_case_flow };
             let recommended = RECOMMENDED.pressure_drop(&bed).si();
             let worst = PressureDropModel::ALL.iter().map(|m| m.pressure_drop(&bed).si()).fold(recommended, f64::max);
             let i = iy * n + ix;
