@@ -348,17 +348,23 @@ async fn gas_liquid_cartridge_demo_shows_pressure_holdup_transfer_and_lifting_in
     b.close().await;
 }
 
-/// The chart `key` is drawn: its canvas backing store is the CSS size times the device pixel
-/// ratio, and it has ink on it (not a blank white canvas).
+/// The chart `key` is drawn once scrolled to: its canvas backing store is the CSS size times the
+/// device pixel ratio, and it has ink on it (not a blank or transparent canvas).
 async fn assert_chart_drawn(b: &Browser, key: &str) {
     b.wait_for(&format!("[data-testid=plot-{key}] canvas")).await;
+    // Charts are drawn when on screen: bring this one there.
+    b.js(&format!("document.querySelector('[data-testid=plot-{key}]').scrollIntoView(); return true;")).await;
     let v = b
-        .js(&format!(
+        .js_when(&format!(
             "const c = document.querySelector('[data-testid=plot-{key}] canvas');
              const d = c.getContext('2d').getImageData(0, 0, c.width, c.height).data;
-             let ink = 0; for (let i = 0; i < d.length; i += 4) if (d[i] < 200 || d[i+1] < 200 || d[i+2] < 200) ink++;
+             let ink = 0; for (let i = 0; i < d.length; i += 4) if (d[i+3] > 0 && (d[i] < 200 || d[i+1] < 200 || d[i+2] < 200)) ink++;
              return {{ w: c.width, h: c.height, cw: c.clientWidth, ch: c.clientHeight, r: window.devicePixelRatio, ink }};"
-        ))
+            ),
+            // Drawn: its backing store sized for the screen and ink on it (a canvas not drawn yet
+            // is 300 px wide and transparent).
+            |v| v["ink"].as_f64().is_some_and(|ink| ink > 2000.0) && v["w"].as_f64() != Some(300.0),
+        )
         .await;
     let f = |k: &str| v[k].as_f64().unwrap();
     assert_eq!(f("r"), 2.0, "device pixel ratio forced to 2");

@@ -39,14 +39,26 @@ fn PlotView(plot: Signal<Option<Plot>>, key: &'static str) -> impl IntoView {
     // more than drawing the chart.
     let width: StoredValue<Option<f64>> = StoredValue::new(None);
     let resized = RwSignal::new(0u32);
+    // What the canvas shows now (drawn again when it changes or the window is resized).
+    let drawn: StoredValue<Option<Plot>> = StoredValue::new(None);
     let on_resize = window_event_listener(leptos::ev::resize, move |_| {
         width.set_value(None);
+        drawn.set_value(None);
         resized.update(|n| *n = n.wrapping_add(1));
     });
     on_cleanup(move || on_resize.remove());
+    // Drawn only while on screen (or about to be): a chart below the fold is drawn when it is
+    // scrolled to, not on every edit of an entry above it.
+    let visible = on_screen(canvas);
     Effect::new(move |_| {
         resized.track();
+        if !visible.get() {
+            return;
+        }
         let (Some(plot), Some(canvas)) = (plot.get(), canvas.get()) else { return };
+        if drawn.with_value(|d| d.as_ref() == Some(&plot)) {
+            return;
+        }
         let ratio = web_sys::window().map(|w| w.device_pixel_ratio()).unwrap_or(1.0).max(1.0);
         let css_width = width.get_value().unwrap_or_else(|| {
             let shown = canvas.client_width();
@@ -63,8 +75,9 @@ fn PlotView(plot: Signal<Option<Plot>>, key: &'static str) -> impl IntoView {
             failure.set(Some("This browser gave no 2-D canvas to draw on.".to_owned()));
             return;
         };
-        let backend = MeasuredCanvas { inner, context };
+        let backend = MeasuredCanvas { inner, context, font: std::cell::RefCell::new(String::new()), align: "", baseline: "" };
         failure.set(crate::plot::draw(&backend.into_drawing_area(), &plot, ratio).err().map(|e| format!("The chart could not be drawn: {e}")));
+        drawn.set_value(Some(plot));
     });
     let save = move |_| {
         if let Some(p) = plot.get_untracked() {
@@ -105,6 +118,39 @@ fn PlotView(plot: Signal<Option<Plot>>, key: &'static str) -> impl IntoView {
     }
 }
 
+/// Whether `target` is on screen or within a screen's height of it, followed by an
+/// intersection observer (true where the browser has none, so that everything is drawn).
+fn on_screen(target: NodeRef<Canvas>) -> ReadSignal<bool> {
+    use wasm_bindgen::closure::Closure;
+    let (visible, set_visible) = signal(false);
+    let watching = StoredValue::new_local(None::<(web_sys::IntersectionObserver, Closure<dyn FnMut(js_sys::Array)>)>);
+    Effect::new(move |_| {
+        let Some(canvas) = target.get() else { return };
+        let seen = Closure::<dyn FnMut(js_sys::Array)>::new(move |entries: js_sys::Array| {
+            if let Some(entry) = entries.iter().last().and_then(|e| e.dyn_into::<web_sys::IntersectionObserverEntry>().ok()) {
+                set_visible.set(entry.is_intersecting());
+            }
+        });
+        let options = web_sys::IntersectionObserverInit::new();
+        options.set_root_margin("100% 0px");
+        match web_sys::IntersectionObserver::new_with_options(seen.as_ref().unchecked_ref(), &options) {
+            Ok(observer) => {
+                observer.observe(&canvas);
+                if let Some((old, _)) = watching.try_update_value(|w| w.replace((observer, seen))).flatten() {
+                    old.disconnect();
+                }
+            }
+            Err(_) => set_visible.set(true),
+        }
+    });
+    on_cleanup(move || {
+        if let Some((observer, _)) = watching.try_update_value(Option::take).flatten() {
+            observer.disconnect();
+        }
+    });
+    visible
+}
+
 /// The canvas backend with text measured by the canvas itself (`measureText`). Plotters'
 /// default measures text by adding a span to the page and reading its size, which makes the
 /// browser lay out the whole page for every label: over a third of an edit's time on the slurry
@@ -114,6 +160,17 @@ type CanvasError = <CanvasBackend as DrawingBackend>::ErrorType;
 struct MeasuredCanvas {
     inner: CanvasBackend,
     context: web_sys::CanvasRenderingContext2d,
+    /// The font, alignment and baseline the context was last given: setting a font makes the
+    /// browser parse it again even when it is the same (a fifth of a slurry-tab edit when every
+    /// label set it), so each is set only when it changes.
+    font: std::cell::RefCell<String>,
+    align: &'static str,
+    baseline: &'static str,
+}
+
+/// A font as the canvas takes it.
+fn font_of<T: BackendTextStyle>(style: &T) -> String {
+    format!("{} {}px {}", style.style().as_str(), style.size(), style.family().as_str())
 }
 
 impl DrawingBackend for MeasuredCanvas {
@@ -156,13 +213,47 @@ impl DrawingBackend for MeasuredCanvas {
     }
 
     fn draw_text<T: BackendTextStyle>(&mut self, text: &str, style: &T, pos: BackendCoord) -> Result<(), DrawingErrorKind<CanvasError>> {
-        self.inner.draw_text(text, style, pos)
+        let color = style.color();
+        // Turned text (saved and restored around its rotation) is drawn as the canvas backend
+        // draws it.
+        if color.alpha == 0.0 || !matches!(style.transform(), plotters_backend::FontTransform::None) {
+            return self.inner.draw_text(text, style, pos);
+        }
+        // The same drawing as the canvas backend's, with the font, alignment and baseline set
+        // only when they change.
+        let anchor = style.anchor();
+        let baseline = match anchor.v_pos {
+            plotters_backend::text_anchor::VPos::Top => "top",
+            plotters_backend::text_anchor::VPos::Center => "middle",
+            plotters_backend::text_anchor::VPos::Bottom => "bottom",
+        };
+        let align = match anchor.h_pos {
+            plotters_backend::text_anchor::HPos::Left => "start",
+            plotters_backend::text_anchor::HPos::Right => "end",
+            plotters_backend::text_anchor::HPos::Center => "center",
+        };
+        if self.baseline != baseline {
+            self.context.set_text_baseline(baseline);
+            self.baseline = baseline;
+        }
+        if self.align != align {
+            self.context.set_text_align(align);
+            self.align = align;
+        }
+        let (r, g, b) = color.rgb;
+        self.context.set_fill_style_str(&format!("rgba({r},{g},{b},{})", color.alpha));
+        self.use_font(&font_of(style));
+        match self.context.fill_text(text, f64::from(pos.0), f64::from(pos.1)) {
+            Ok(()) => Ok(()),
+            // The canvas backend says what went wrong in its own error.
+            Err(_) => self.inner.draw_text(text, style, pos),
+        }
     }
 
     fn estimate_text_size<T: BackendTextStyle>(&self, text: &str, style: &T) -> Result<(u32, u32), DrawingErrorKind<CanvasError>> {
         // The same font string the canvas backend draws with. Setting a font is itself slow, and
         // the labels repeat from one drawing to the next: sizes are kept once measured.
-        let font = format!("{} {}px {}", style.style().as_str(), style.size(), style.family().as_str());
+        let font = font_of(style);
         let key = format!("{font}\u{0}{text}");
         if let Some(size) = TEXT_SIZES.with_borrow(|sizes| sizes.get(&key).copied()) {
             return Ok(size);
@@ -184,9 +275,18 @@ thread_local! {
 }
 
 impl MeasuredCanvas {
+    /// Gives the context `font` unless it has it already.
+    fn use_font(&self, font: &str) {
+        let mut current = self.font.borrow_mut();
+        if *current != font {
+            self.context.set_font(font);
+            font.clone_into(&mut current);
+        }
+    }
+
     /// Width and height of `text` in `font` (its size `size` px), measured by the canvas.
     fn measure(&self, font: &str, text: &str, size: f64) -> (u32, u32) {
-        self.context.set_font(font);
+        self.use_font(font);
         let Ok(metrics) = self.context.measure_text(text) else {
             return ((size * 0.6 * text.chars().count() as f64).ceil() as u32, (size * 1.2).ceil() as u32);
         };
