@@ -405,6 +405,9 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
         });
     }
     let line = Memo::new(move |_| report.with(|r| r.as_ref().and_then(line_of)));
+    // Whether there is a line at all: the drawing, table and detail are built once for it, not
+    // again for each new value.
+    let has_line = Memo::new(move |_| line.with(Option::is_some));
     let slugs = Memo::new(move |_| report.with(|r| r.as_ref().and_then(slugs_of)));
     // The element whose detail is open: the worst one when the report changes, or the one picked.
     let selected = RwSignal::new(0usize);
@@ -530,7 +533,7 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                 </form>
                 <div class="detail-area">
                     <SlugView strip=slugs.into() />
-                    {move || line.with(Option::is_some).then(|| view! {
+                    {move || has_line.get().then(|| view! {
                         <LineStrip line=line.into() selected=selected />
                         <PartTable line=line.into() selected=selected />
                         <section class="element-detail" data-testid="element-detail">

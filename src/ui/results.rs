@@ -47,8 +47,9 @@ pub fn ResultTable(report: Signal<Option<Report>>, #[prop(into)] keys: Signal<Ve
 fn ResultRow(key: &'static str, report: Signal<Option<Report>>) -> impl IntoView {
     let sig = use_display().sig;
     let figure = Memo::new(move |_| report.with(|r| r.as_ref().and_then(|r| r.figure(key)).cloned()));
-    // The details are rebuilt only when what they say changes (models, warnings), not on every
-    // new value: the numbers in them follow `figure` in place, and an open fold stays open.
+    // The details are rebuilt only when what they say changes (models, how many warnings), not
+    // on every new value: the numbers in them follow `figure` in place, and an open fold stays
+    // open.
     let basis = Memo::new(move |_| figure.with(|f| f.as_ref().map(Basis::of)));
     let dimension = figure.with_untracked(|f| f.as_ref().map(|f| f.dimension)).unwrap_or(Dimension::Number);
     let label = figure.with_untracked(|f| f.as_ref().map(|f| f.label)).unwrap_or("");
@@ -104,7 +105,9 @@ struct Basis {
     key: &'static str,
     /// Every estimate's model and whether it is the recommended one, in report order.
     models: Vec<(ModelInfo, bool)>,
-    warnings: Vec<String>,
+    /// How many range warnings there are (their words, which carry the values, follow the
+    /// figure in place).
+    warnings: usize,
     recommendation: &'static str,
 }
 
@@ -113,7 +116,7 @@ impl Basis {
         Basis {
             key: figure.key,
             models: figure.estimates.iter().map(|e| (e.model, e.recommended)).collect(),
-            warnings: figure.estimates.iter().flat_map(|e| e.warnings.iter().map(warning_text)).collect(),
+            warnings: figure.estimates.iter().map(|e| e.warnings.len()).sum(),
             recommendation: figure.recommendation,
         }
     }
@@ -129,7 +132,10 @@ fn ModelDetails(basis: Basis, figure: Memo<Option<Figure>>, unit: Signal<Unit>) 
     let recommended = basis.recommended();
     let tag = recommended.as_ref().and_then(|m| recalled_tag(m, format!("recalled-{}", basis.key)));
     let several = basis.models.len() > 1;
-    let warned = !basis.warnings.is_empty();
+    let warned = basis.warnings > 0;
+    let warning = move |n: usize| {
+        move || figure.with(|f| f.as_ref().and_then(|f| f.estimates.iter().flat_map(|e| e.warnings.iter()).nth(n).map(warning_text))).unwrap_or_default()
+    };
     view! {
         <details>
             <summary>{recommended.map(|m| m.name).unwrap_or("")}{tag}{warned.then_some(" ⚠")}</summary>
@@ -138,7 +144,7 @@ fn ModelDetails(basis: Basis, figure: Memo<Option<Figure>>, unit: Signal<Unit>) 
                 <p class="source">"Source: " {m.source}</p>
             })}
             {several.then(|| view! { <ModelSpread basis=basis.clone() figure=figure unit=unit /> })}
-            <ul class="warnings">{basis.warnings.into_iter().map(|w| view! { <li>{w}</li> }).collect_view()}</ul>
+            <ul class="warnings">{(0..basis.warnings).map(|n| view! { <li>{warning(n)}</li> }).collect_view()}</ul>
         </details>
     }
 }
@@ -220,58 +226,73 @@ fn listed(checks: &[Check]) -> Vec<Listed> {
         .collect()
 }
 
+/// The reason and caution now shown for the check `key` of `list` (empty when it has gone).
+fn words_of(list: Memo<Vec<Listed>>, key: &'static str) -> (Signal<String>, Signal<Option<String>>) {
+    let find = move |f: fn(&Listed) -> Option<String>| list.with(|l| l.iter().find(|x| x.check.key == key).and_then(f));
+    (Signal::derive(move || find(|x| Some(x.check.reason.clone())).unwrap_or_default()), Signal::derive(move || find(|x| x.check.caution.clone())))
+}
+
 /// The checks of `report` whose keys satisfy `wanted`: those that need attention in full, in
 /// report order; the fine ones folded into one line that names them. A safety caution stands
-/// beside the first verdict it belongs to; later checks with the same caution refer to it.
+/// beside the first verdict it belongs to; later checks with the same caution refer to it. A card
+/// is built again only when its verdict or where its caution stands changes; its words follow
+/// each edit in place.
 #[component]
 pub fn CheckList(report: Signal<Option<Report>>, wanted: Callback<&'static str, bool>, #[prop(optional)] testid: Option<&'static str>) -> impl IntoView {
     let checks = Memo::new(move |_| report.with(|r| r.as_ref().map(|r| r.checks.iter().filter(|c| wanted.run(c.key)).cloned().collect::<Vec<_>>()).unwrap_or_default()));
     let attention = Memo::new(move |_| checks.with(|c| listed(&c.iter().filter(|c| c.verdict != Verdict::Fine).cloned().collect::<Vec<_>>())));
-    let fine = Memo::new(move |_| checks.with(|c| c.iter().filter(|c| c.verdict == Verdict::Fine).cloned().collect::<Vec<_>>()));
+    let fine = Memo::new(move |_| {
+        checks.with(|c| c.iter().filter(|c| c.verdict == Verdict::Fine).map(|c| Listed { check: c.clone(), caution_shown_with: None }).collect::<Vec<_>>())
+    });
+    let any_fine = Memo::new(move |_| fine.with(|f| !f.is_empty()));
+    let card = move |list: Memo<Vec<Listed>>| {
+        move |item: Listed| {
+            let (reason, caution) = words_of(list, item.check.key);
+            view! { <CheckCard item=item reason=reason caution=caution /> }
+        }
+    };
+    let shape = |l: &Listed| (l.check.key, l.check.verdict, l.caution_shown_with, l.check.caution.is_some());
     view! {
         <div class="check-list" data-testid=testid.unwrap_or("checks")>
             <ul class="checks">
-                <For each=move || attention.get() key=|l: &Listed| (l.check.key, l.check.verdict, l.check.reason.clone(), l.caution_shown_with) let:item>
-                    <CheckCard item=item />
-                </For>
+                <For each=move || attention.get() key=shape children=card(attention) />
             </ul>
-            {move || {
-                let fine = fine.get();
-                (!fine.is_empty()).then(|| {
-                    let names = fine.iter().map(|c| c.topic.to_lowercase()).collect::<Vec<_>>().join(", ");
-                    view! {
-                        <details class="fine-checks">
-                            <summary>
-                                <span class="verdict fine">"✓ fine"</span>
-                                {format!(" {} more: {names}", fine.len())}
-                            </summary>
-                            <ul class="checks">
-                                {fine.into_iter().map(|check| view! { <CheckCard item=Listed { check, caution_shown_with: None } /> }).collect_view()}
-                            </ul>
-                        </details>
-                    }
-                })
-            }}
+            {move || any_fine.get().then(|| {
+                let summary = move || {
+                    fine.with(|f| format!(" {} more: {}", f.len(), f.iter().map(|l| l.check.topic.to_lowercase()).collect::<Vec<_>>().join(", ")))
+                };
+                view! {
+                    <details class="fine-checks">
+                        <summary>
+                            <span class="verdict fine">"✓ fine"</span>
+                            {summary}
+                        </summary>
+                        <ul class="checks">
+                            <For each=move || fine.get() key=shape children=card(fine) />
+                        </ul>
+                    </details>
+                }
+            })}
         </div>
     }
 }
 
 /// One check: verdict, topic, reason, and its caution (or where it was shown).
 #[component]
-fn CheckCard(item: Listed) -> impl IntoView {
+fn CheckCard(item: Listed, reason: Signal<String>, caution: Signal<Option<String>>) -> impl IntoView {
     let check = item.check;
-    let caution = match (check.caution.clone(), item.caution_shown_with) {
-        (Some(_), Some(topic)) => Some(view! {
+    let caution = match (check.caution.is_some(), item.caution_shown_with) {
+        (true, Some(topic)) => Some(view! {
             <p class="caution again" role="note" data-testid=format!("caution-{}", check.key)>
                 {format!("⚠ Safety: the same caution as under “{topic}” above.")}
             </p>
         }
         .into_any()),
-        (Some(text), None) => Some(view! {
-            <p class="caution" role="note" data-testid=format!("caution-{}", check.key)>"⚠ Safety: " {text}</p>
+        (true, None) => Some(view! {
+            <p class="caution" role="note" data-testid=format!("caution-{}", check.key)>"⚠ Safety: " {move || caution.get().unwrap_or_default()}</p>
         }
         .into_any()),
-        (None, _) => None,
+        (false, _) => None,
     };
     view! {
         <li class="check" id=format!("check-{}", check.key) data-testid=format!("check-{}", check.key) data-verdict=check.verdict.word()>
@@ -279,7 +300,7 @@ fn CheckCard(item: Listed) -> impl IntoView {
                 <span data-testid=format!("verdict-{}", check.key)><VerdictBadge verdict=check.verdict /></span>
                 <strong>{check.topic}</strong>
             </div>
-            <p class="reason">{check.reason.clone()}</p>
+            <p class="reason">{move || reason.get()}</p>
             {caution}
         </li>
     }

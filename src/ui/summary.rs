@@ -62,21 +62,17 @@ pub fn AnswerSummary(calculator: Calculator, report: Signal<Option<Report>>, sel
     let sig = use_display().sig;
     let overall = Memo::new(move |_| report.with(|r| r.as_ref().map(Report::overall)));
     let items = Memo::new(move |_| report.with(|r| r.as_ref().map(act_on).unwrap_or_default()));
-    let figures = move || {
-        report.with(|r| {
-            r.as_ref()
-                .map(|r| {
-                    calculator
-                        .headline()
-                        .iter()
-                        .filter_map(|k| r.figure(k))
-                        .map(|f| (f.key, f.label, f.dimension.show(f.value.get(), sig.get())))
-                        .collect::<Vec<_>>()
-                })
-                .unwrap_or_default()
-        })
-    };
+    // The headline figures the report has, built once for them; their values follow each edit.
+    let headline_keys = Memo::new(move |_| {
+        report.with(|r| r.as_ref().map(|r| calculator.headline().iter().filter_map(|k| r.figure(k)).map(|f| (f.key, f.label)).collect::<Vec<_>>()).unwrap_or_default())
+    });
+    let value_of = move |key: &'static str| move || report.with(|r| r.as_ref().and_then(|r| r.figure(key)).map(|f| f.dimension.show(f.value.get(), sig.get()))).unwrap_or_default();
     let shown_items = 6;
+    // What to do for a listed item, as it now reads.
+    let what_of = move |key: &'static str| move || items.with(|i| i.iter().find(|i| i.key == key).and_then(|i| i.what_to_do.clone()));
+    let listed = Memo::new(move |_| items.with(|i| i.iter().take(shown_items).map(|i| (i.key, i.topic, i.verdict)).collect::<Vec<_>>()));
+    let more = Memo::new(move |_| items.with(|i| i.len().saturating_sub(shown_items)));
+    let any = Memo::new(move |_| items.with(|i| !i.is_empty()));
     view! {
         <section class="summary" aria-labelledby=format!("summary-{}", calculator.key()) data-testid="summary">
             <h3 class="visually-hidden" id=format!("summary-{}", calculator.key())>"Answer"</h3>
@@ -87,41 +83,34 @@ pub fn AnswerSummary(calculator: Calculator, report: Signal<Option<Report>>, sel
                 </div>
             })}
             <dl class="headline">
-                {move || figures().into_iter().map(|(key, label, value)| view! {
+                <For each=move || headline_keys.get() key=|k| *k let((key, label))>
                     <div class="headline-figure">
                         <dt>{label}</dt>
-                        <dd data-testid=format!("headline-{key}")>{value}</dd>
+                        <dd data-testid=format!("headline-{key}")>{value_of(key)}</dd>
                     </div>
-                }).collect_view()}
+                </For>
             </dl>
-            {move || {
-                let items = items.get();
-                let more = items.len().saturating_sub(shown_items);
-                (!items.is_empty()).then(|| view! {
-                    <ol class="act-on" data-testid="act-on">
-                        {items.into_iter().take(shown_items).map(|i| {
-                            let key = i.key;
-                            view! {
-                                <li class=format!("act act-{}", i.verdict.word())>
-                                    <a href=format!("#check-{key}") data-testid=format!("act-{key}")
-                                        on:click=move |ev| {
-                                            // Scroll without writing the fragment: the address may carry a shared case.
-                                            ev.prevent_default();
-                                            select.run(key);
-                                            super::scroll_to(format!("check-{key}"));
-                                        }>
-                                        <VerdictBadge verdict=i.verdict />
-                                        " "
-                                        <strong>{i.topic}</strong>
-                                    </a>
-                                    {i.what_to_do.map(|t| view! { <span class="act-what">{t}</span> })}
-                                </li>
-                            }
-                        }).collect_view()}
-                        {(more > 0).then(|| view! { <li class="act-more">{format!("and {more} more below")}</li> })}
-                    </ol>
-                })
-            }}
+            {move || any.get().then(|| view! {
+                <ol class="act-on" data-testid="act-on">
+                    <For each=move || listed.get() key=|i| *i let((key, topic, verdict))>
+                        <li class=format!("act act-{}", verdict.word())>
+                            <a href=format!("#check-{key}") data-testid=format!("act-{key}")
+                                on:click=move |ev| {
+                                    // Scroll without writing the fragment: the address may carry a shared case.
+                                    ev.prevent_default();
+                                    select.run(key);
+                                    super::scroll_to(format!("check-{key}"));
+                                }>
+                                <VerdictBadge verdict=verdict />
+                                " "
+                                <strong>{topic}</strong>
+                            </a>
+                            {move || what_of(key)().map(|t| view! { <span class="act-what">{t}</span> })}
+                        </li>
+                    </For>
+                    {move || (more.get() > 0).then(|| view! { <li class="act-more">{format!("and {} more below", more.get())}</li> })}
+                </ol>
+            })}
         </section>
     }
 }
