@@ -338,6 +338,12 @@ fn the_demo_evaluates_and_draws_every_stage() {
     assert_eq!(line.node_pressures.len(), demo.elements.len() + 1);
     // The demo's piston pump (40 bar) is stronger than the 20 bar coil: said as a caution.
     assert_eq!(verdict(&r, "stage_2_pump_check"), Verdict::Caution);
+    // Its carbon dioxide joins at the junction, supplied well above the line's pressure; it
+    // neither burns nor feeds a fire; and it expands along the coil towards the regulator.
+    assert_eq!(verdict(&r, "stage_3_gas_supply"), Verdict::Fine);
+    assert_eq!(verdict(&r, "gas_hazard"), Verdict::Fine);
+    assert!(value(&r, "stage_5_gas_flow_outlet") > value(&r, "stage_4_gas_flow_outlet"));
+    assert!(value(&r, "stage_6_gas_flow_outlet") > value(&r, "stage_5_gas_flow_outlet"));
     // Its case survives JSON unchanged.
     assert_eq!(CaseFile::from_json(&demo.to_json()).unwrap(), demo);
 }
