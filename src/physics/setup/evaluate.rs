@@ -475,16 +475,10 @@ fn supply_check(i: usize, supply: &GasSupply, joining: f64, stages: &[Stage]) ->
     } else {
         (Verdict::Fine, format!("The gas feed of stage {} is supplied at {} bar(g), {} bar above the {} bar(g) where it joins.", i + 1, bar(p), bar(margin), bar(joining)))
     };
-    let exposed = weakest_downstream(stages, i).filter(|(_, weakest)| p > *weakest);
-    if let Some((j, weakest)) = exposed {
+    let exposed = blockage_note(stages, i, p, "gas supply", "set the cylinder's regulator below that rating or fit a relief valve on the gas line");
+    if let Some(note) = &exposed {
         verdict = verdict.max(Verdict::Caution);
-        reason.push_str(&format!(
-            " A blockage downstream would let the gas supply push up to {} bar(g) onto the {} at stage {}, rated {} bar(g): set the cylinder's regulator below that rating or fit a relief valve on the gas line.",
-            bar(p),
-            stages[j].kind().word(),
-            j + 1,
-            bar(weakest)
-        ));
+        reason.push_str(note);
     }
     // The over-pressure caution goes with an exposed part; a supply too low to enter is not a
     // pressure hazard.
@@ -517,6 +511,20 @@ fn weakest_downstream(stages: &[Stage], i: usize) -> Option<(usize, f64)> {
     stages.iter().enumerate().skip(i + 1).filter_map(|(j, s)| rating(s).map(|r| (j, r))).min_by(|a, b| a.1.total_cmp(&b.1))
 }
 
+/// The sentence for a source at stage `i` (`what`: "pump", "gas supply") that can push `largest`
+/// (gauge, Pa) onto a part downstream rated lower, with the `remedy`; `None` when every part
+/// downstream is rated for it.
+fn blockage_note(stages: &[Stage], i: usize, largest: f64, what: &str, remedy: &str) -> Option<String> {
+    let (j, weakest) = weakest_downstream(stages, i).filter(|(_, weakest)| largest > *weakest)?;
+    Some(format!(
+        " A blockage downstream would let the {what} push up to {} bar(g) onto the {} at stage {}, rated {} bar(g): {remedy}.",
+        bar(largest),
+        stages[j].kind().word(),
+        j + 1,
+        bar(weakest)
+    ))
+}
+
 fn pump_check(i: usize, feed: &Feed, joining: f64, stages: &[Stage], what: LineContents) -> Check {
     let pump = feed.pump;
     let largest = pump.largest_pressure();
@@ -541,17 +549,9 @@ fn pump_check(i: usize, feed: &Feed, joining: f64, stages: &[Stage], what: LineC
             bar(barrel_rating.si())
         ));
     }
-    if let Some((j, weakest)) = weakest_downstream(stages, i)
-        && largest > weakest
-    {
+    if let Some(note) = blockage_note(stages, i, largest, "pump", "set the pump's pressure limit below that rating") {
         verdict = verdict.max(Verdict::Caution);
-        reason.push_str(&format!(
-            " A blockage downstream would let the pump push up to {} bar(g) onto the {} at stage {}, rated {} bar(g): set the pump's pressure limit below that rating.",
-            bar(largest),
-            stages[j].kind().word(),
-            j + 1,
-            bar(weakest)
-        ));
+        reason.push_str(&note);
     }
     let caution = over_pressure_caution(verdict, what);
     let flow = practical::pump_flow_check(feed.flow, feed.max_flow);
