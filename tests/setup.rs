@@ -451,6 +451,8 @@ fn one_coil_with_a_gas_feed_equals_the_segmented_flow_calculator_on_its_demo() {
     for key in ["gas_hazard", "boiling"] {
         assert_eq!(verdict(&r, key), verdict(&alone, key), "{key}");
     }
+    let (mine, theirs) = (r.check("stage_3_flow_regime").unwrap(), alone.check("flow_regime").unwrap());
+    assert_eq!((mine.verdict, &mine.reason), (theirs.verdict, &theirs.reason));
     // The gas feed joins at the coil's inlet: its pressure there is the coil's inlet pressure.
     assert_eq!(value(&r, "stage_2_inlet_pressure"), value(&r, "stage_3_inlet_pressure"));
     assert_eq!(verdict(&r, "stage_2_gas_supply"), Verdict::Fine);

@@ -626,7 +626,9 @@ fn solubility_figure(input: &SegmentedFlowInput, reactive: Gas, t: Temperature, 
     spread(key, label, Dimension::Concentration, recommendation, estimates)
 }
 
-fn regime_check(outlet: &UnitCell, junction: &UnitCell) -> Check {
+/// The flow-regime check (key `flow_regime`): whether Taylor flow is expected, from the cells at
+/// the junction and the outlet.
+pub fn regime_check(outlet: &UnitCell, junction: &UnitCell) -> Check {
     let f = &outlet.flow;
     let bond = f.bond();
     let mut problems = Vec::new();

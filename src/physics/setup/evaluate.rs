@@ -231,12 +231,14 @@ struct StageResult {
     /// Liquid residence time (s), and how it was found.
     time: Option<(f64, ModelInfo)>,
     gas: Option<GasResult>,
+    /// The flow regime of the run of gas tubes this stage starts.
+    regime: Option<Check>,
 }
 
 fn liquid_result(input: &SetupInput, stage: &Stage, c: Carried) -> StageResult {
     let (drop, info, warnings, volume) = stage_drop(input, stage, c);
     let volume_info = if matches!(stage, Stage::Passage { packing: Some(_), .. }) { BED_VOLUME_INFO } else { VOLUME_INFO };
-    StageResult { drop, info, warnings, volume: volume.map(|v| (v, volume_info)), time: volume.map(|v| (v / c.flow, RESIDENCE_TIME_INFO)), gas: None }
+    StageResult { drop, info, warnings, volume: volume.map(|v| (v, volume_info)), time: volume.map(|v| (v / c.flow, RESIDENCE_TIME_INFO)), gas: None, regime: None }
 }
 
 /// A tube-like stage (junction, tubing, coil, fitting): segmented flow when gas is present.
@@ -283,10 +285,17 @@ fn gas_run(input: &SetupInput, g: &GasLine, members: &[usize], flows: &[Option<C
     let (frequency, _) = pressure_profile::settle_run(&tubes, None)?;
     let states = pressure_profile::run_states(&tubes, frequency)?;
     let flow_info = if g.vapour.is_some() { pressure_profile::SATURATED_FLOW_INFO } else { pressure_profile::DRY_FLOW_INFO };
+    // The coil calculator's regime check, between the cells where the bubbles form and where the
+    // run ends.
+    let mut regime = match (tubes.first(), states.first(), states.last()) {
+        (Some(first), Some(inlet), Some(outlet)) => Some(segmented::regime_check(&outlet.outlet, &first.junction_cell(inlet.inlet_pressure)?)),
+        _ => None,
+    };
     Ok(states
         .iter()
         .zip(&tubes)
         .map(|(s, tube)| StageResult {
+            regime: regime.take(),
             drop: s.inlet_pressure - s.outlet_pressure,
             info: pressure_profile::RECOMMENDED.info(),
             warnings: pressure_profile::RECOMMENDED.warnings(&s.outlet),
@@ -338,6 +347,7 @@ fn gas_bed(g: &GasLine, stage: &Stage, c: Carried, p_out: f64) -> Result<Option<
             time_info: bed_profile::GAS_TIME_INFO,
             cell: None,
         }),
+        regime: None,
     }))
 }
 
@@ -661,6 +671,9 @@ pub fn evaluate(input: &SetupInput) -> Result<Report, SetupError> {
                     }
                 }
                 stage_figures.push(Figure::single(keys::PRESSURE_DROP[i].key, keys::PRESSURE_DROP[i].label, Dimension::PressureDifference, r.info, drops[i], r.warnings.clone())?);
+                if let Some(check) = &r.regime {
+                    add(Check { key: keys::FLOW_REGIME[i].key, topic: keys::FLOW_REGIME[i].label, ..check.clone() }, &mut verdicts, &mut stage_checks);
+                }
                 stage_figures.push(fig(&keys::INLET_PRESSURE[i], Dimension::PressureDifference, NODE_INFO, inlet(i))?);
                 if let Some(r) = rating(stage) {
                     add(pressure_check(i, stage, inlet(i), r, what), &mut verdicts, &mut stage_checks);

@@ -103,6 +103,8 @@ numbered_keys! {
     PRESSURE = "pressure", "pressure against its rating";
     /// Check: pump.
     PUMP_CHECK = "pump_check", "pump";
+    /// Check: the flow regime of a run of gas tubes (at its first tube).
+    FLOW_REGIME = "flow_regime", "flow regime";
     /// Check: gas supply pressure against the pressure where the gas joins.
     GAS_SUPPLY = "gas_supply", "gas supply pressure";
     /// Check: clogging.
