@@ -595,3 +595,40 @@ fn a_gas_feed_reads_only_its_own_entries_and_one_gas_feed_per_line() {
     let c = case(water_inputs(), vec![piston(1.0, 100.0, 0.0), gas_feed("nitrogen", 100.0, 10.0, 20.0), passage("coil", 1.0, 1.0, 50.0), regulator(3.0, 50.0)]);
     assert_eq!(input_errors(&c).into_iter().map(|e| e.field).collect::<Vec<_>>(), vec!["liquid_surface_tension"]);
 }
+
+#[test]
+fn tubes_in_a_row_after_the_gas_share_one_bubble_frequency() {
+    // 2 m of tubing and 3 m of coil of the same 1 mm bore carry the same bubbles: together they
+    // are the 5 m coil (the integration split at 2 m; equal to its 1e-10 per-step tolerance).
+    let line = |tubes: Vec<Value>| {
+        let mut stages = vec![piston(1.0, 100.0, 0.0), gas_feed("nitrogen", 100.0, 10.0, 20.0)];
+        stages.extend(tubes);
+        stages.push(regulator(2.0, 50.0));
+        run(water_with_gas(), stages)
+    };
+    let split = line(vec![passage("tubing", 1.0, 2.0, 50.0), passage("coil", 1.0, 3.0, 50.0)]);
+    let whole = line(vec![passage("coil", 1.0, 5.0, 50.0)]);
+    close(value(&split, "stage_3_inlet_pressure"), value(&whole, "stage_3_inlet_pressure"), 1e-8);
+    close(value(&split, "gas_residence_time"), value(&whole, "gas_residence_time"), 1e-8);
+    close(value(&split, "stage_4_gas_flow_outlet"), value(&whole, "stage_3_gas_flow_outlet"), 1e-12);
+    // One regime check for the run, at its first stage.
+    assert!(split.check("stage_3_flow_regime").is_some());
+    assert!(split.check("stage_4_flow_regime").is_none());
+}
+
+#[test]
+fn bubbles_form_again_after_a_gas_cartridge() {
+    // A coil after a gas cartridge is a run of its own, its bubbles formed at its inlet: its drop
+    // is the same as with the coil straight after the gas feed (the same outlet pressure, flows
+    // and gas), and the cartridge adds its own drop upstream.
+    let mut bed = passage("cartridge", 4.0, 0.05, 50.0);
+    bed["particle_diameter"] = q(75.0, "µm");
+    bed["voidage"] = q(42.0, "%");
+    let coil = passage("coil", 1.0, 5.0, 50.0);
+    let with_bed = run(water_with_gas(), vec![piston(1.0, 100.0, 0.0), gas_feed("nitrogen", 100.0, 10.0, 20.0), bed, coil.clone(), regulator(2.0, 50.0)]);
+    let without = run(water_with_gas(), vec![piston(1.0, 100.0, 0.0), gas_feed("nitrogen", 100.0, 10.0, 20.0), coil, regulator(2.0, 50.0)]);
+    assert_eq!(value(&with_bed, "stage_4_pressure_drop"), value(&without, "stage_3_pressure_drop"));
+    assert!(value(&with_bed, "stage_3_pressure_drop") > 0.0);
+    assert!(with_bed.check("stage_4_flow_regime").is_some());
+    close(value(&with_bed, "stage_3_inlet_pressure"), value(&with_bed, "stage_4_inlet_pressure") + value(&with_bed, "stage_3_pressure_drop"), 1e-12);
+}
