@@ -247,7 +247,6 @@ pub struct Production {
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
 pub struct GasLiquid {
     /// Density, viscosity, surface tension and vapour pressure (none for an entered liquid).
-    #[serde(skip)]
     pub liquid: Liquid,
     /// The line's temperature.
     pub temperature: Temperature,
