@@ -305,6 +305,7 @@ const SETUP_LAYOUT: &[FormItem] = &[
     Field(fluids::selection::TEMPERATURE),
     Field(tubular::DENSITY),
     Field(tubular::VISCOSITY),
+    Field(fluids::CUSTOM_SURFACE_TENSION),
     Heading("Solids"),
     Field(setup::D90),
     Heading("Product"),
@@ -327,6 +328,15 @@ const SETUP_STAGE_LAYOUT: &[FormItem] = &[
     Field(setup::BARREL_BORE),
     Field(setup::BARREL_RATING),
     Field(setup::SOLIDS),
+    Choice(crate::physics::segmented_flow::GAS),
+    Field(crate::physics::segmented_flow::GAS_MOLE_FRACTION),
+    Field(crate::physics::segmented_flow::GAS_FLOW),
+    Choice(crate::physics::segmented_flow::REFERENCE_STATE),
+    Field(crate::physics::segmented_flow::REFERENCE_TEMPERATURE),
+    Field(crate::physics::segmented_flow::REFERENCE_PRESSURE),
+    Field(setup::SUPPLY_PRESSURE),
+    Choice(crate::physics::hazards::oxygen::LOC_SOURCE),
+    Field(crate::physics::hazards::oxygen::LIMITING_OXYGEN_FIELD),
     Field(setup::INNER_DIAMETER),
     Field(setup::LENGTH),
     Field(setup::PARTICLE_DIAMETER),
@@ -543,7 +553,10 @@ impl Calculator {
             }
             Calculator::Setup => {
                 let input = SetupInput::from_source(src, elements).map_err(CaseError::Inputs)?;
-                setup::evaluate(&input).map_err(CaseError::Numerical)
+                setup::evaluate(&input).map_err(|e| match e {
+                    setup::evaluate::SetupError::Numerical(e) => CaseError::Numerical(e),
+                    e => CaseError::Calculation(e.to_string()),
+                })
             }
         }
     }

@@ -118,7 +118,9 @@ const ELEMENT_CHECKS: &[(&str, &[ElementKey; keys::MAX_ELEMENTS])] = &[("Settlin
 /// The per-stage figures of a setup, with their headings.
 const STAGE_FIGURES: &[(&str, &[ElementKey; keys::MAX_ELEMENTS])] = &[
     ("Liquid flow", &stage::LIQUID_FLOW),
+    ("Actual gas flow at the outlet", &stage::GAS_FLOW_OUTLET),
     ("Residence time", &stage::RESIDENCE_TIME),
+    ("Gas residence time", &stage::GAS_RESIDENCE_TIME),
     ("Pressure drop", &stage::PRESSURE_DROP),
     ("Inlet pressure (gauge)", &stage::INLET_PRESSURE),
     ("Largest pump pressure", &stage::PUMP_PRESSURE),
@@ -128,7 +130,7 @@ const STAGE_FIGURES: &[(&str, &[ElementKey; keys::MAX_ELEMENTS])] = &[
 
 /// The per-stage checks of a setup, with their headings.
 const STAGE_CHECKS: &[(&str, &[ElementKey; keys::MAX_ELEMENTS])] =
-    &[("Pressure against rating", &stage::PRESSURE), ("Pump check", &stage::PUMP_CHECK), ("Clogging", &stage::CLOGGING)];
+    &[("Pressure against rating", &stage::PRESSURE), ("Pump check", &stage::PUMP_CHECK), ("Gas supply", &stage::GAS_SUPPLY), ("Clogging", &stage::CLOGGING)];
 
 /// A line's table: the word for a row, the sheet's title, and its figure and check tables.
 type LineTables = (&'static str, &'static str, &'static [(&'static str, &'static [ElementKey; keys::MAX_ELEMENTS])], &'static [(&'static str, &'static [ElementKey; keys::MAX_ELEMENTS])]);

@@ -708,17 +708,21 @@ async fn a_setup_is_built_reordered_and_kept_across_a_reload() {
     b.click("[data-testid=tab-setup]").await;
     b.wait_for("[data-testid=panel-setup]").await;
     b.wait_for("[data-testid=verdict-pressure_budget]").await;
-    wait_for_stages(&b, 6).await;
-    // Down to three stages: the piston feed, the 10 m coil and the regulator.
+    wait_for_stages(&b, 7).await;
+    // Down to three stages: the piston feed, the 10 m coil and the regulator (the syringe feed,
+    // the fitting, the junction and the gas feed removed).
     b.click("[data-testid=remove-element-1]").await;
+    wait_for_stages(&b, 6).await;
+    b.click("[data-testid=remove-element-5]").await;
     wait_for_stages(&b, 5).await;
-    b.click("[data-testid=remove-element-4]").await;
+    b.click("[data-testid=remove-element-3]").await;
     wait_for_stages(&b, 4).await;
     b.click("[data-testid=remove-element-2]").await;
     wait_for_stages(&b, 3).await;
     let mut demo: Value = serde_json::from_str(Calculator::Setup.demo_json()).unwrap();
     let stages = demo["elements"].as_array().unwrap().clone();
-    demo["elements"] = Value::Array(vec![stages[1].clone(), stages[3].clone(), stages[5].clone()]);
+    assert_eq!(stages[4]["kind"], "coil");
+    demo["elements"] = Value::Array(vec![stages[1].clone(), stages[4].clone(), stages[6].clone()]);
     let three = CaseFile::from_json(&demo.to_string()).unwrap().evaluate().unwrap();
     b.text_when("[data-testid=node-0]", |t| t == node_text(&three, 0)).await;
     assert!(b.text("[data-testid=check-pressure_budget]").await.contains("coil at stage 2"));
@@ -765,7 +769,7 @@ async fn a_setup_is_built_reordered_and_kept_across_a_reload() {
         "length": { "value": 10, "unit": "mm" },
         "pressure_rating": { "value": 5.01, "unit": "bar" }
     });
-    four["elements"] = Value::Array(vec![stages[1].clone(), fitting, stages[3].clone(), stages[5].clone()]);
+    four["elements"] = Value::Array(vec![stages[1].clone(), fitting, stages[4].clone(), stages[6].clone()]);
     let reordered = CaseFile::from_json(&four.to_string()).unwrap().evaluate().unwrap();
     assert_eq!(after, node_text(&reordered, 2));
     b.screenshot("setup-reordered").await;

@@ -277,5 +277,5 @@ fn stage_errors_name_the_stage() {
     let out = run(&["-"], Some(&bad));
     assert_eq!(out.status.code(), Some(1));
     let err = String::from_utf8(out.stderr).unwrap();
-    assert!(err.contains("stage_4_length") && err.contains("-10 m"), "{err}");
+    assert!(err.contains("stage_5_length") && err.contains("-10 m"), "{err}");
 }

@@ -85,13 +85,15 @@ fn case_of(c: Calculator) -> BoxedStrategy<CaseFile> {
 }
 
 /// A setup's stages put in an order it accepts (a feed first, a regulator only last, a stage
-/// after every feed); one case in five keeps the drawn order, so that refusal is exercised too.
+/// after every feed, one gas feed at most); one case in five keeps the drawn order, so that
+/// refusal is exercised too.
 fn order_stages(stages: &mut Vec<Entries>) {
     let kind = |name: &str| Entry::Choice(name.to_owned());
     if stages.len() < 2 {
         stages.extend(stages.first().cloned());
     }
     let last = stages.len() - 1;
+    let mut gas_fed = false;
     for (i, stage) in stages.iter_mut().enumerate() {
         let now = match stage.get("kind") {
             Some(Entry::Choice(k)) => k.clone(),
@@ -100,9 +102,11 @@ fn order_stages(stages: &mut Vec<Entries>) {
         let wanted = match (i, now.as_str()) {
             (0, _) => "liquid_feed",
             (i, "regulator") if i < last => "coil",
-            (i, "liquid_feed") if i == last => "regulator",
+            (i, "liquid_feed" | "gas_feed") if i == last => "regulator",
+            (_, "gas_feed") if gas_fed => "coil",
             (_, other) => other,
         };
+        gas_fed |= wanted == "gas_feed";
         stage.insert("kind".to_owned(), kind(wanted));
     }
 }

@@ -1113,3 +1113,23 @@ fn the_slug_strip_shows_the_junction_and_outlet_lengths_to_scale() {
     assert!(rel(strip.places[1].bubble.get() + strip.places[1].slug.get(), cell) < 1e-12);
     assert!(strip.film.get() > 0.0 && strip.film.get() < strip.bore.get() / 2.0);
 }
+
+#[test]
+fn a_coil_cut_in_two_is_one_run_with_the_same_drop() {
+    // Two 5 m tubes in series carrying the same bubbles (one frequency, set at the first one's
+    // inlet) are the 10 m coil: the same ODE split at its middle (identity of the model, no
+    // external source; equal to the integration tolerance, 1e-10 relative per step).
+    let whole = Coil { diameter: Length::from_mm(0.5), ..coil(10.0, 1.2, GasExpansion::Isothermal) };
+    let p = whole.profile().unwrap();
+    let half = Coil { length: Length::from_m(5.0), ..whole };
+    let tubes = [half, half];
+    let (frequency, _) = sf::pressure_profile::settle_run(&tubes, None).unwrap();
+    assert!(rel(frequency, p.frequency) < 1e-8, "{frequency} vs {}", p.frequency);
+    let states = sf::pressure_profile::run_states(&tubes, frequency).unwrap();
+    assert!(rel(states[0].inlet_pressure, p.inlet_pressure) < 1e-8);
+    assert_eq!(states[0].outlet_pressure, states[1].inlet_pressure);
+    assert_eq!(states[1].outlet_pressure, whole.outlet_pressure.si());
+    assert!(rel(states[0].residence_time + states[1].residence_time, p.residence_time) < 1e-8);
+    // The gas expands towards the outlet: the first half's outlet cell holds less gas per volume.
+    assert!(states[0].outlet.flow.gas_flow.si() < states[1].outlet.flow.gas_flow.si());
+}

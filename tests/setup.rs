@@ -338,6 +338,12 @@ fn the_demo_evaluates_and_draws_every_stage() {
     assert_eq!(line.node_pressures.len(), demo.elements.len() + 1);
     // The demo's piston pump (40 bar) is stronger than the 20 bar coil: said as a caution.
     assert_eq!(verdict(&r, "stage_2_pump_check"), Verdict::Caution);
+    // Its carbon dioxide joins at the junction, supplied well above the line's pressure; it
+    // neither burns nor feeds a fire; and it expands along the coil towards the regulator.
+    assert_eq!(verdict(&r, "stage_3_gas_supply"), Verdict::Fine);
+    assert_eq!(verdict(&r, "gas_hazard"), Verdict::Fine);
+    assert!(value(&r, "stage_5_gas_flow_outlet") > value(&r, "stage_4_gas_flow_outlet"));
+    assert!(value(&r, "stage_6_gas_flow_outlet") > value(&r, "stage_5_gas_flow_outlet"));
     // Its case survives JSON unchanged.
     assert_eq!(CaseFile::from_json(&demo.to_json()).unwrap(), demo);
 }
@@ -381,4 +387,248 @@ proptest! {
             prop_assert!((t(&twice) / t(&r) - 0.5).abs() < 1e-9);
         }
     }
+}
+
+// ------------------------------------------------------------------ gas feeds
+
+fn gas_feed(gas: &str, percent: f64, flow_ml_min: f64, supply_bar: f64) -> Value {
+    json!({
+        "kind": "gas_feed", "gas": gas, "gas_mole_fraction": q(percent, "%"), "gas_flow": q(flow_ml_min, "mL/min"),
+        "reference_state": "normal", "supply_pressure": q(supply_bar, "bar"), "loc_source": "typical"
+    })
+}
+
+/// The setup-level inputs of a single calculator's demo: its liquid, temperature, concentration,
+/// atmosphere and tubing (the product entries are the setup's own).
+fn inputs_from(demo: &CaseFile, liquid_key: &str, renames: &[(&str, &str)]) -> Value {
+    let all = serde_json::to_value(&demo.inputs).unwrap();
+    let mut inputs = json!({ "yield": q(90.0, "%"), "molar_mass": q(200.0, "g/mol"), "liquid": all[liquid_key].clone() });
+    for k in ["temperature", "concentration", "ambient_pressure", "tubing_material", "tubing_size"] {
+        inputs[k] = all[k].clone();
+    }
+    for (to, from) in renames {
+        inputs[*to] = all[*from].clone();
+    }
+    inputs
+}
+
+fn demo_with(calculator: Calculator, changes: &[(&str, Value)]) -> CaseFile {
+    let mut doc: Value = serde_json::from_str(calculator.demo_json()).unwrap();
+    for (k, v) in changes {
+        doc["inputs"][*k] = v.clone();
+    }
+    CaseFile::from_json(&doc.to_string()).unwrap()
+}
+
+#[test]
+fn one_coil_with_a_gas_feed_equals_the_segmented_flow_calculator_on_its_demo() {
+    // The coil calculator's demo (4.5 % O₂ in N₂, acetonitrile at 60 °C, 1 mm × 15 m, 15 bar)
+    // without gas consumption: the setup takes the fed gas through unconsumed.
+    let demo = demo_with(Calculator::SegmentedFlow, &[("consumption", json!("none"))]);
+    let alone = demo.evaluate().unwrap();
+    let inputs = inputs_from(&demo, "solvent", &[]);
+    let stages = vec![
+        piston(1.5, 100.0, 0.0),
+        gas_feed("oxygen", 4.5, 30.0, 20.0),
+        passage("coil", 1.0, 15.0, 20.0),
+        regulator(15.0, 40.0),
+    ];
+    let r = run(inputs, stages);
+    let ambient = 1.01325e5;
+    for (setup_key, coil_key) in [
+        ("stage_3_pressure_drop", "pressure_drop"),
+        ("stage_3_residence_time", "residence_time"),
+        ("stage_3_gas_residence_time", "residence_time"),
+        ("stage_3_gas_flow_outlet", "gas_flow_outlet"),
+        ("stage_3_gas_fraction_outlet", "gas_fraction_outlet"),
+        ("stage_3_bubble_length_outlet", "bubble_length_outlet"),
+        ("gas_equivalents", "gas_equivalents"),
+    ] {
+        close(value(&r, setup_key), value(&alone, coil_key), 1e-12);
+    }
+    close(value(&r, "stage_3_inlet_pressure") + ambient, value(&alone, "inlet_pressure"), 1e-12);
+    close(value(&r, "gas_molar_flow") * 60e3, value(&alone, "gas_molar_flow_mmol_per_min"), 1e-12);
+    for key in ["gas_hazard", "boiling"] {
+        assert_eq!(verdict(&r, key), verdict(&alone, key), "{key}");
+    }
+    let (mine, theirs) = (r.check("stage_3_flow_regime").unwrap(), alone.check("flow_regime").unwrap());
+    assert_eq!((mine.verdict, &mine.reason), (theirs.verdict, &theirs.reason));
+    // The gas feed joins at the coil's inlet: its pressure there is the coil's inlet pressure.
+    assert_eq!(value(&r, "stage_2_inlet_pressure"), value(&r, "stage_3_inlet_pressure"));
+    assert_eq!(verdict(&r, "stage_2_gas_supply"), Verdict::Fine);
+}
+
+/// A water-like entered liquid (no vapour pressure known: the gas is dry) with its surface tension.
+fn water_with_gas() -> Value {
+    let mut inputs = water_inputs();
+    inputs["liquid_surface_tension"] = q(72.0, "mN/m");
+    inputs
+}
+
+#[test]
+fn the_gas_expands_only_after_its_feed() {
+    // Liquid 1 mL/min through 1 mm × 1 m of tubing, then 10 mL/min (0 °C, 1 atm) of N₂ joins and
+    // the two pass 1 mm × 5 m of coil to a 5 bar regulator, at 25 °C.
+    let stages = vec![
+        piston(1.0, 100.0, 0.0),
+        passage("tubing", 1.0, 1.0, 50.0),
+        gas_feed("nitrogen", 100.0, 10.0, 20.0),
+        passage("coil", 1.0, 5.0, 50.0),
+        regulator(5.0, 50.0),
+    ];
+    let r = run(water_with_gas(), stages);
+    // Upstream of the feed, liquid only: Hagen–Poiseuille 128 μ L Q / (π D⁴) = 679.061 Pa and no gas.
+    close(value(&r, "stage_2_pressure_drop"), 679.061, 1e-5);
+    assert!(r.figure("stage_2_gas_flow_outlet").is_none());
+    // ṅ = Q_ref P_ref / (R T_ref) = 1.666667e-7 m³/s × 101 325 Pa / (8.314 462 618 × 273.15 K)
+    //   = 7.435839e-6 mol/s; at the coil's outlet, 5 bar(g) + 1.01325 bar = 601 325 Pa and
+    //   298.15 K: Q_G = ṅ R T / P = 3.065418e-8 m³/s (1.83925 mL/min).
+    close(value(&r, "gas_molar_flow"), 7.435839e-6, 1e-6);
+    close(value(&r, "stage_4_gas_flow_outlet"), 3.065418e-8, 1e-6);
+    // Where it joins, at the coil's inlet pressure, the same gas takes less room.
+    let p_join = value(&r, "stage_3_inlet_pressure") + 1.01325e5;
+    close(value(&r, "stage_3_gas_flow_outlet"), 7.435839e-6 * 8.314_462_618 * 298.15 / p_join, 1e-6);
+    assert!(value(&r, "stage_3_gas_flow_outlet") < value(&r, "stage_4_gas_flow_outlet"));
+    // Node pressures still add the drops downstream: tubing inlet = coil inlet + its own drop.
+    close(value(&r, "stage_2_inlet_pressure"), value(&r, "stage_4_inlet_pressure") + value(&r, "stage_2_pressure_drop"), 1e-12);
+    close(value(&r, "stage_4_inlet_pressure"), 5e5 + value(&r, "stage_4_pressure_drop"), 1e-12);
+    // The line's gas residence time is the coil's.
+    close(value(&r, "gas_residence_time"), value(&r, "stage_4_gas_residence_time"), 1e-12);
+    assert_eq!(verdict(&r, "gas_hazard"), Verdict::Fine); // nitrogen
+}
+
+#[test]
+fn gas_supplied_below_the_joining_pressure_is_a_problem_naming_the_feed() {
+    let at = |supply_bar: f64| {
+        run(water_with_gas(), vec![piston(1.0, 100.0, 0.0), gas_feed("nitrogen", 100.0, 10.0, supply_bar), passage("coil", 1.0, 5.0, 50.0), regulator(5.0, 50.0)])
+    };
+    let low = at(4.0);
+    let check = low.check("stage_2_gas_supply").unwrap();
+    assert_eq!(check.verdict, Verdict::Problem);
+    assert!(check.reason.contains("gas feed of stage 2") && check.reason.contains("cannot enter"), "{}", check.reason);
+    // Half a bar above where it joins: a caution (a flow controller needs about 1 bar, common
+    // practice, no source); 10 bar above: fine.
+    let joining = value(&low, "stage_2_inlet_pressure") / 1e5;
+    assert_eq!(verdict(&at(joining + 0.5), "stage_2_gas_supply"), Verdict::Caution);
+    assert_eq!(verdict(&at(joining + 10.0), "stage_2_gas_supply"), Verdict::Fine);
+    // A supply above a downstream part's rating: a caution naming the part, with its caution.
+    let strong = at(60.0);
+    let check = strong.check("stage_2_gas_supply").unwrap();
+    assert_eq!(check.verdict, Verdict::Caution);
+    assert!(check.reason.contains("coil at stage 3"), "{}", check.reason);
+    assert!(check.caution.is_some());
+}
+
+#[test]
+fn the_gas_hazard_is_the_gas_liquid_calculators_verdict() {
+    // Pure oxygen over acetonitrile at 60 °C: a problem in the coil calculator and in the setup;
+    // 4.5 % O₂ (its demo): the same verdict in both; hydrogen: a caution with its caution text.
+    for (gas, percent) in [("oxygen", 100.0), ("oxygen", 4.5), ("hydrogen", 100.0), ("carbon_dioxide", 100.0)] {
+        let demo = demo_with(Calculator::SegmentedFlow, &[("consumption", json!("none")), ("gas", json!(gas)), ("gas_mole_fraction", q(percent, "%"))]);
+        let alone = demo.evaluate().unwrap();
+        let stages = vec![piston(1.5, 100.0, 0.0), gas_feed(gas, percent, 30.0, 25.0), passage("coil", 1.0, 15.0, 20.0), regulator(15.0, 40.0)];
+        let r = run(inputs_from(&demo, "solvent", &[]), stages);
+        let (mine, theirs) = (r.check("gas_hazard").unwrap(), alone.check("gas_hazard").unwrap());
+        assert_eq!(mine.verdict, theirs.verdict, "{gas} {percent} %");
+        assert_eq!(mine.reason, theirs.reason, "{gas} {percent} %");
+        assert_eq!(mine.caution, theirs.caution, "{gas} {percent} %");
+        if (gas, percent) == ("oxygen", 100.0) {
+            assert_eq!(mine.verdict, Verdict::Problem);
+        }
+        if gas == "hydrogen" {
+            assert_eq!(mine.verdict, Verdict::Caution);
+            assert!(mine.caution.is_some());
+        }
+    }
+}
+
+#[test]
+fn one_cartridge_with_gas_equals_the_gas_liquid_cartridge_on_its_demo() {
+    // The cartridge calculator's demo: H₂ over Pd/C in methanol at 40 °C, 4 mm × 50 mm, voidage
+    // 42 %, down-flow, 10 bar back-pressure; its particles as one size, d_v = 100 µm, irregular
+    // with sphericity 0.75 (the setup takes φ d_v = 75 µm; the demo's distribution would use d10).
+    let demo = demo_with(Calculator::GasLiquidBed, &[("size_mode", json!("single"))]);
+    let alone = demo.evaluate().unwrap();
+    let inputs = inputs_from(&demo, "liquid", &[]);
+    let mut bed = passage("cartridge", 4.0, 0.05, 50.0);
+    bed["particle_diameter"] = q(75.0, "µm");
+    bed["voidage"] = q(42.0, "%");
+    let r = run(inputs, vec![piston(1.0, 100.0, 0.0), gas_feed("hydrogen", 100.0, 30.0, 30.0), bed, regulator(10.0, 40.0)]);
+    for (setup_key, bed_key) in [
+        ("stage_3_inlet_pressure", "inlet_pressure"),
+        ("stage_3_residence_time", "liquid_residence_time"),
+        ("stage_3_gas_residence_time", "gas_residence_time"),
+        ("stage_3_gas_flow_outlet", "gas_flow_outlet"),
+        ("gas_equivalents", "gas_equivalents"),
+        ("gas_molar_flow", "gas_molar_flow"),
+    ] {
+        close(value(&r, setup_key), value(&alone, bed_key), 1e-12);
+    }
+    assert_eq!(verdict(&r, "gas_hazard"), verdict(&alone, "gas_hazard"));
+}
+
+#[test]
+fn a_gas_feed_reads_only_its_own_entries_and_one_gas_feed_per_line() {
+    let mut air = gas_feed("air", 100.0, 10.0, 20.0);
+    air["gas_mole_fraction"] = q(-5.0, "%"); // not read for air
+    let c = case(water_with_gas(), vec![piston(1.0, 100.0, 0.0), gas_feed("oxygen", 5.0, 10.0, 20.0), air, passage("coil", 1.0, 1.0, 50.0), regulator(3.0, 50.0)]);
+    // Two gas feeds: named at the second.
+    assert_eq!(input_errors(&c).into_iter().map(|e| e.field).collect::<Vec<_>>(), vec!["stage_3_kind"]);
+    let c = case(water_with_gas(), vec![piston(1.0, 100.0, 0.0), gas_feed("oxygen", 5.0, 10.0, 20.0), passage("coil", 1.0, 1.0, 50.0), regulator(3.0, 50.0)]);
+    let sources: Vec<EntrySource> = c.elements.iter().map(EntrySource).collect();
+    let watched: Vec<Watcher> = sources.iter().map(|s| Watcher::new(s)).collect();
+    let dyns: Vec<&dyn FieldSource> = watched.iter().map(|w| w as &dyn FieldSource).collect();
+    Calculator::Setup.evaluate(&EntrySource(&c.inputs), &dyns).unwrap();
+    let mut asked: Vec<Vec<&str>> = watched.into_iter().map(Watcher::into_asked).collect();
+    asked[1].sort_unstable();
+    let mut expected = vec!["kind", "gas", "gas_mole_fraction", "gas_flow", "reference_state", "supply_pressure", "loc_source"];
+    expected.sort_unstable();
+    assert_eq!(asked[1], expected);
+    // A bad gas entry is named at its stage.
+    let mut bad = gas_feed("oxygen", 5.0, -10.0, 20.0);
+    bad["supply_pressure"] = q(-1.0, "bar");
+    let c = case(water_with_gas(), vec![piston(1.0, 100.0, 0.0), bad, passage("coil", 1.0, 1.0, 50.0), regulator(3.0, 50.0)]);
+    let mut fields: Vec<&str> = input_errors(&c).into_iter().map(|e| e.field).collect();
+    fields.sort_unstable();
+    assert_eq!(fields, vec!["stage_2_gas_flow", "stage_2_supply_pressure"]);
+    // An entered liquid with a gas feed needs its surface tension.
+    let c = case(water_inputs(), vec![piston(1.0, 100.0, 0.0), gas_feed("nitrogen", 100.0, 10.0, 20.0), passage("coil", 1.0, 1.0, 50.0), regulator(3.0, 50.0)]);
+    assert_eq!(input_errors(&c).into_iter().map(|e| e.field).collect::<Vec<_>>(), vec!["liquid_surface_tension"]);
+}
+
+#[test]
+fn tubes_in_a_row_after_the_gas_share_one_bubble_frequency() {
+    // 2 m of tubing and 3 m of coil of the same 1 mm bore carry the same bubbles: together they
+    // are the 5 m coil (the integration split at 2 m; equal to its 1e-10 per-step tolerance).
+    let line = |tubes: Vec<Value>| {
+        let mut stages = vec![piston(1.0, 100.0, 0.0), gas_feed("nitrogen", 100.0, 10.0, 20.0)];
+        stages.extend(tubes);
+        stages.push(regulator(2.0, 50.0));
+        run(water_with_gas(), stages)
+    };
+    let split = line(vec![passage("tubing", 1.0, 2.0, 50.0), passage("coil", 1.0, 3.0, 50.0)]);
+    let whole = line(vec![passage("coil", 1.0, 5.0, 50.0)]);
+    close(value(&split, "stage_3_inlet_pressure"), value(&whole, "stage_3_inlet_pressure"), 1e-8);
+    close(value(&split, "gas_residence_time"), value(&whole, "gas_residence_time"), 1e-8);
+    close(value(&split, "stage_4_gas_flow_outlet"), value(&whole, "stage_3_gas_flow_outlet"), 1e-12);
+    // One regime check for the run, at its first stage.
+    assert!(split.check("stage_3_flow_regime").is_some());
+    assert!(split.check("stage_4_flow_regime").is_none());
+}
+
+#[test]
+fn bubbles_form_again_after_a_gas_cartridge() {
+    // A coil after a gas cartridge is a run of its own, its bubbles formed at its inlet: its drop
+    // is the same as with the coil straight after the gas feed (the same outlet pressure, flows
+    // and gas), and the cartridge adds its own drop upstream.
+    let mut bed = passage("cartridge", 4.0, 0.05, 50.0);
+    bed["particle_diameter"] = q(75.0, "µm");
+    bed["voidage"] = q(42.0, "%");
+    let coil = passage("coil", 1.0, 5.0, 50.0);
+    let with_bed = run(water_with_gas(), vec![piston(1.0, 100.0, 0.0), gas_feed("nitrogen", 100.0, 10.0, 20.0), bed, coil.clone(), regulator(2.0, 50.0)]);
+    let without = run(water_with_gas(), vec![piston(1.0, 100.0, 0.0), gas_feed("nitrogen", 100.0, 10.0, 20.0), coil, regulator(2.0, 50.0)]);
+    assert_eq!(value(&with_bed, "stage_4_pressure_drop"), value(&without, "stage_3_pressure_drop"));
+    assert!(value(&with_bed, "stage_3_pressure_drop") > 0.0);
+    assert!(with_bed.check("stage_4_flow_regime").is_some());
+    close(value(&with_bed, "stage_3_inlet_pressure"), value(&with_bed, "stage_4_inlet_pressure") + value(&with_bed, "stage_3_pressure_drop"), 1e-12);
 }

@@ -33,7 +33,7 @@ use self::profile::{BedConditions, Profile};
 use super::fluids::selection::{self, LiquidSelection};
 use super::fluids::{self, Liquid, Solvent};
 use super::form::{ChoiceSpec, Collector, FieldSource};
-use super::gases::{Gas, HenrySolubility, MolarFlow, ReferenceFlow, ReferenceState, henry, wilke_chang};
+use super::gases::{Gas, HenrySolubility, MolarFlow, ReferenceFlow, henry, wilke_chang};
 use super::input::{Allowed, FieldSpec, InputError, field, lab};
 use super::packed_bed::packing::Voidage;
 use super::packed_bed::{self as bed, FlowDirection, Particles};
@@ -161,33 +161,12 @@ pub struct GasLiquidBedInput {
     pub limiting_oxygen: Option<f64>,
 }
 
-fn gas_of(index: usize) -> Gas {
-    Gas::ALL.get(index).copied().unwrap_or(Gas::Air)
-}
+/// The shared gas entries ([`segmented::read_gas`]).
+pub use super::segmented_flow::read_gas;
 
-/// Reads the gas, its mole fraction in the feed (not asked for air and nitrogen) and its flow
-/// with the reference state, from the gas fields of the segmented-flow calculator.
-pub fn read_gas(src: &dyn FieldSource, c: &mut Collector) -> Option<(Gas, f64, ReferenceFlow)> {
-    let gas = c.take(src.choice(&segmented::GAS)).map(gas_of);
-    let y = match gas {
-        Some(Gas::Air | Gas::Nitrogen) => Some(1.0),
-        Some(_) => c.take(src.quantity(&segmented::GAS_MOLE_FRACTION)),
-        None => None,
-    };
-    let flow = c.take(src.quantity(&segmented::GAS_FLOW));
-    let state = match c.take(src.choice(&segmented::REFERENCE_STATE)) {
-        Some(3) => {
-            let t = c.take(src.quantity(&segmented::REFERENCE_TEMPERATURE));
-            let p = c.take(src.quantity(&segmented::REFERENCE_PRESSURE));
-            Some(ReferenceState::UserDefined { temperature: Temperature::from_si(t?), pressure: Pressure::from_si(p?) })
-        }
-        Some(i) => ReferenceState::BUILT_IN.get(i).copied(),
-        None => None,
-    };
-    Some((gas?, y?, ReferenceFlow { flow: VolumetricFlow::from_si(flow?), state: state? }))
-}
-
-fn liquid_properties(liquid: &LiquidSelection, surface_tension: Option<f64>) -> Result<Liquid, fluids::PropertyError> {
+/// Density, viscosity, surface tension and vapour pressure of the chosen liquid at its
+/// temperature (an entered liquid: its entries, `surface_tension` entered, no vapour pressure).
+pub fn liquid_properties(liquid: &LiquidSelection, surface_tension: Option<f64>) -> Result<Liquid, fluids::PropertyError> {
     match *liquid {
         LiquidSelection::Solvent { solvent, temperature } => Ok(solvent.liquid(temperature)?.value),
         LiquidSelection::Mixture { mixture, temperature } => Ok(mixture.properties(temperature)?.liquid),
@@ -309,26 +288,12 @@ impl GasLiquidBedInput {
 
     /// The dissolving, reacting species and its mole fraction in the feed.
     pub fn reactive(&self) -> (Gas, f64) {
-        match self.gas {
-            Gas::Air => Gas::Air.reactive_component(),
-            g => (g, self.gas_mole_fraction),
-        }
+        self.gas.reactive_in_feed(self.gas_mole_fraction)
     }
 
-    /// Molar mass and viscosity of the feed: the gas's own for a pure gas and for air; for a
-    /// mixture with nitrogen, mole-fraction averages (a simple rule: both enter only through the
-    /// gas's own Ergun gradient and density, small beside the liquid's in a cartridge).
+    /// Molar mass and viscosity of the feed ([`Gas::feed_properties`]).
     pub fn feed_properties(&self) -> (MolarMass, DynamicViscosity, Vec<RangeWarning>) {
-        let t = self.temperature;
-        let own = self.gas.viscosity(t);
-        let y = self.gas_mole_fraction;
-        if self.gas == Gas::Air || y >= 1.0 {
-            return (self.gas.molar_mass(), own.value, own.warnings);
-        }
-        let n2 = Gas::Nitrogen;
-        let m = MolarMass::from_si(y * self.gas.molar_mass().si() + (1.0 - y) * n2.molar_mass().si());
-        let mu = DynamicViscosity::from_si(y * own.value.si() + (1.0 - y) * n2.viscosity(t).value.si());
-        (m, mu, own.warnings)
+        self.gas.feed_properties(self.gas_mole_fraction, self.temperature)
     }
 
     /// Outlet pressure, absolute.

@@ -82,6 +82,30 @@ impl Gas {
         }
     }
 
+    /// The species that dissolves and reacts in a feed of this gas at mole fraction `y` (the rest
+    /// nitrogen), and its mole fraction: air's own oxygen for air, `y` of the gas otherwise.
+    pub fn reactive_in_feed(self, y: f64) -> (Gas, f64) {
+        match self {
+            Gas::Air => self.reactive_component(),
+            g => (g, y),
+        }
+    }
+
+    /// Molar mass and viscosity of a feed of this gas at mole fraction `y`, the rest nitrogen, at
+    /// `t`: the gas's own for air and a pure gas; for a mixture with nitrogen, mole-fraction
+    /// averages (a simple rule; both enter only weakly, through the gas density and the gas's own
+    /// Reynolds number), with the gas's viscosity range warnings.
+    pub fn feed_properties(self, y: f64, t: Temperature) -> (MolarMass, DynamicViscosity, Vec<crate::physics::report::RangeWarning>) {
+        let own = self.viscosity(t);
+        if self == Gas::Air || y >= 1.0 {
+            return (self.molar_mass(), own.value, own.warnings);
+        }
+        let n2 = Gas::Nitrogen;
+        let m = MolarMass::from_si(y * self.molar_mass().si() + (1.0 - y) * n2.molar_mass().si());
+        let mu = DynamicViscosity::from_si(y * own.value.si() + (1.0 - y) * n2.viscosity(t).value.si());
+        (m, mu, own.warnings)
+    }
+
     /// Dynamic viscosity at `t` (Sutherland fit), with a warning outside 0–200 °C.
     pub fn viscosity(self, t: Temperature) -> Evaluated<DynamicViscosity> {
         Evaluated { value: self.data().viscosity.viscosity(t), warnings: range_warnings(&sutherland::INFO, t) }

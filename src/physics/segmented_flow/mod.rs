@@ -207,30 +207,36 @@ fn gas_of(index: usize) -> Gas {
     Gas::ALL.get(index).copied().unwrap_or(Gas::Air)
 }
 
+/// Reads the gas, its mole fraction in the feed (not asked for air and nitrogen) and its flow
+/// with the reference state: the gas entries every gas–liquid calculator and the setup's gas
+/// feed share.
+pub fn read_gas(src: &dyn FieldSource, c: &mut Collector) -> Option<(Gas, f64, ReferenceFlow)> {
+    let gas = c.take(src.choice(&GAS)).map(gas_of);
+    let y = match gas {
+        Some(Gas::Air | Gas::Nitrogen) => Some(1.0),
+        Some(_) => c.take(src.quantity(&GAS_MOLE_FRACTION)),
+        None => None,
+    };
+    let flow = c.take(src.quantity(&GAS_FLOW));
+    let state = match c.take(src.choice(&REFERENCE_STATE)) {
+        Some(3) => {
+            let t = c.take(src.quantity(&REFERENCE_TEMPERATURE));
+            let p = c.take(src.quantity(&REFERENCE_PRESSURE));
+            Some(ReferenceState::UserDefined { temperature: Temperature::from_si(t?), pressure: Pressure::from_si(p?) })
+        }
+        Some(i) => ReferenceState::BUILT_IN.get(i).copied(),
+        None => None,
+    };
+    Some((gas?, y?, ReferenceFlow { flow: VolumetricFlow::from_si(flow?), state: state? }))
+}
+
 impl SegmentedFlowInput {
     /// Builds validated inputs from a source, reporting every bad field at once. Fields that the
     /// choices make irrelevant are not read.
     pub fn from_source(src: &dyn FieldSource) -> Result<Self, Vec<InputError>> {
         let mut c = Collector::default();
-        let gas = c.take(src.choice(&GAS)).map(gas_of);
-        let gas_mole_fraction = match gas {
-            Some(Gas::Air | Gas::Nitrogen) => Some(1.0),
-            Some(_) => c.take(src.quantity(&GAS_MOLE_FRACTION)),
-            None => None,
-        };
-        let flow = c.take(src.quantity(&GAS_FLOW));
-        let state = match c.take(src.choice(&REFERENCE_STATE)) {
-            Some(3) => {
-                let t = c.take(src.quantity(&REFERENCE_TEMPERATURE));
-                let p = c.take(src.quantity(&REFERENCE_PRESSURE));
-                match (t, p) {
-                    (Some(t), Some(p)) => Some(ReferenceState::UserDefined { temperature: Temperature::from_si(t), pressure: Pressure::from_si(p) }),
-                    _ => None,
-                }
-            }
-            Some(i) => ReferenceState::BUILT_IN.get(i).copied(),
-            None => None,
-        };
+        let gas_feed = read_gas(src, &mut c);
+        let gas = gas_feed.map(|g| g.0);
         let liquid_flow = c.take(src.quantity(&LIQUID_FLOW));
         let concentration = c.take(src.quantity(&CONCENTRATION));
         let inner_diameter = c.take(src.quantity(&INNER_DIAMETER));
@@ -278,8 +284,8 @@ impl SegmentedFlowInput {
             None => None,
         };
         let tubing = tubing::read(src, &mut c, &TEMPERATURE);
-        let (Some(gas), Some(y), Some(flow), Some(state), Some(ql), Some(cn), Some(d), Some(l), Some(t), Some(bp), Some(rating), Some(liquid), Some(consumed), Some(cross), Some(w), Some(ambient), Some(limiting_oxygen), Some(tubing)) = (
-            gas, gas_mole_fraction, flow, state, liquid_flow, concentration, inner_diameter, length, temperature, back_pressure, rating,
+        let (Some((gas, y, gas_flow)), Some(ql), Some(cn), Some(d), Some(l), Some(t), Some(bp), Some(rating), Some(liquid), Some(consumed), Some(cross), Some(w), Some(ambient), Some(limiting_oxygen), Some(tubing)) = (
+            gas_feed, liquid_flow, concentration, inner_diameter, length, temperature, back_pressure, rating,
             liquid, consumed_fraction, cross_junction, junction_width, ambient, limiting_oxygen, tubing,
         ) else {
             return Err(c.into_errors());
@@ -287,7 +293,7 @@ impl SegmentedFlowInput {
         Ok(Self {
             gas,
             gas_mole_fraction: y,
-            gas_flow: ReferenceFlow { flow: VolumetricFlow::from_si(flow), state },
+            gas_flow,
             liquid_flow: VolumetricFlow::from_si(ql),
             concentration: Concentration::from_si(cn),
             inner_diameter: Length::from_si(d),
@@ -307,26 +313,12 @@ impl SegmentedFlowInput {
 
     /// The dissolving, reacting species and its mole fraction in the feed.
     pub fn reactive(&self) -> (Gas, f64) {
-        match self.gas {
-            Gas::Air => Gas::Air.reactive_component(),
-            g => (g, self.gas_mole_fraction),
-        }
+        self.gas.reactive_in_feed(self.gas_mole_fraction)
     }
 
-    /// Molar mass and viscosity of the feed: the gas's own for air and pure gases; for a mixture
-    /// with nitrogen, mole-fraction averages (a simple rule; both enter only weakly, through the
-    /// gas density and the gas Reynolds number of one k_L a correlation).
+    /// Molar mass and viscosity of the feed ([`Gas::feed_properties`]).
     fn feed_properties(&self) -> (MolarMass, DynamicViscosity, Vec<RangeWarning>) {
-        let t = self.temperature;
-        let own = self.gas.viscosity(t);
-        let y = self.gas_mole_fraction;
-        if self.gas == Gas::Air || y >= 1.0 {
-            return (self.gas.molar_mass(), own.value, own.warnings);
-        }
-        let n2 = Gas::Nitrogen;
-        let m = MolarMass::from_si(y * self.gas.molar_mass().si() + (1.0 - y) * n2.molar_mass().si());
-        let mu = DynamicViscosity::from_si(y * own.value.si() + (1.0 - y) * n2.viscosity(t).value.si());
-        (m, mu, own.warnings)
+        self.gas.feed_properties(self.gas_mole_fraction, self.temperature)
     }
 }
 
@@ -634,7 +626,9 @@ fn solubility_figure(input: &SegmentedFlowInput, reactive: Gas, t: Temperature, 
     spread(key, label, Dimension::Concentration, recommendation, estimates)
 }
 
-fn regime_check(outlet: &UnitCell, junction: &UnitCell) -> Check {
+/// The flow-regime check (key `flow_regime`): whether Taylor flow is expected, from the cells at
+/// the junction and the outlet.
+pub fn regime_check(outlet: &UnitCell, junction: &UnitCell) -> Check {
     let f = &outlet.flow;
     let bond = f.bond();
     let mut problems = Vec::new();

@@ -343,6 +343,12 @@ impl Coil {
     /// also the states at the ends of the [`SEGMENTS`] equal segments (outlet first), read from
     /// the integrator's dense output of the same integration.
     fn march(&self, frequency: f64, record: bool) -> Result<March, SegmentedFlowError> {
+        self.march_from(self.outlet_pressure.pascals(), frequency, record)
+    }
+
+    /// [`Coil::march`] from absolute outlet pressure `p_out` (Pa), for a tube of a run whose
+    /// outlet is the next tube's inlet.
+    fn march_from(&self, p_out: f64, frequency: f64, record: bool) -> Result<March, SegmentedFlowError> {
         let l = self.length.si();
         let rate = self.consumption.si() / l;
         let rhs = |x: f64, y: &[f64; 3]| -> Option<[f64; 3]> {
@@ -354,7 +360,7 @@ impl Coil {
             let cell = UnitCell::with_frequency(self.flow_at(p, n), frequency).ok()?;
             Some([self.pressure_model.gradient(&cell), rate, 1.0 / cell.bubble.velocity])
         };
-        let y = [self.outlet_pressure.pascals(), self.gas_at(0.0), 0.0];
+        let y = [p_out, self.gas_at(0.0), 0.0];
         let tol = OdeTolerance { relative: 1e-10, absolute: 1e-12, max_steps: 100_000, min_step_fraction: 1e-12 };
         let xs: Vec<f64> = if record { (0..=SEGMENTS).map(|i| if i == SEGMENTS { l } else { l * i as f64 / SEGMENTS as f64 }).collect() } else { Vec::new() };
         let (sol, states) = dormand_prince_dense(rhs, 0.0, l, y, tol, &xs)?;
@@ -362,54 +368,9 @@ impl Coil {
         Ok(March { last, states, xs })
     }
 
-    /// The inlet pressure the march from the outlet gives when the bubbles form at inlet pressure
-    /// `p_in` (Pa): the map whose fixed point is the inlet pressure.
-    fn inlet_after(&self, p_in: f64) -> Result<f64, SegmentedFlowError> {
-        let frequency = self.junction_cell(p_in)?.frequency();
-        Ok(self.march(frequency, false)?.last[0])
-    }
-
-    /// The fixed point on the inlet pressure, started from `guess` (Pa absolute; the outlet
-    /// pressure when `None`): the inlet pressure sets the bubble frequency at the junction, the
-    /// frequency the pressure drop (Brent between two iterates that bracket it, where the plain
-    /// iteration swings). Returns the settled frequency and the iterations taken.
+    /// The fixed point on the inlet pressure ([`settle_run`] of this coil alone).
     fn settle(&self, guess: Option<f64>) -> Result<(f64, u32), SegmentedFlowError> {
-        if self.gas_at(0.0) <= 0.0 {
-            return Err(SegmentedFlowError::GasExhausted);
-        }
-        if self.vapour_pressure() >= self.outlet_pressure.pascals() {
-            return Err(SegmentedFlowError::Boils);
-        }
-        let mut p_in = guess.filter(|p| p.is_finite() && *p >= self.outlet_pressure.pascals()).unwrap_or(self.outlet_pressure.pascals());
-        let mut frequency = self.junction_cell(p_in)?.frequency();
-        let mut iterations = 0;
-        let mut before = None;
-        loop {
-            iterations += 1;
-            let next = self.march(frequency, false)?.last[0];
-            let settled = (next - p_in).abs() <= 1e-9 * next;
-            // Where the plain iteration swings between two pressures on either side of the fixed
-            // point (drops of hundreds of bar, where the bubble frequency reacts strongly to the
-            // inlet pressure), the two bracket it: solve p = march(p) there with Brent.
-            // If that fails (the march breaks down somewhere between them), the plain iteration
-            // goes on.
-            if !settled && iterations >= BRACKET_AFTER && before.is_some_and(|b: f64| (next - p_in) * (p_in - b) < 0.0) {
-                let (low, high) = (p_in.min(next), p_in.max(next));
-                let gap = |p: f64| self.inlet_after(p).map_or(f64::NAN, |q| q - p);
-                if let Ok(root) = brent(gap, low, high, Tolerance { absolute: 0.0, relative: 1e-10, max_iterations: 100 }) {
-                    return Ok((self.junction_cell(root)?.frequency(), iterations));
-                }
-            }
-            before = Some(p_in);
-            p_in = next;
-            frequency = self.junction_cell(p_in)?.frequency();
-            if settled {
-                return Ok((frequency, iterations));
-            }
-            if iterations >= MAX_INLET_ITERATIONS {
-                return Err(SegmentedFlowError::NoConvergence { quantity: "inlet pressure", iterations });
-            }
-        }
+        settle_run(std::slice::from_ref(self), guess)
     }
 
     /// Pressure drop over the coil, Pa: the same fixed point and final integration as
@@ -454,4 +415,99 @@ impl Coil {
         profile.residence_time = last[2];
         Ok(profile)
     }
+}
+
+/// The inlet pressure of a run of tubes (flow order) marched from the last tube's outlet
+/// pressure at bubble frequency `frequency`: each tube's outlet is the next one's inlet.
+fn march_run(tubes: &[Coil], frequency: f64) -> Result<f64, SegmentedFlowError> {
+    let mut p = tubes.last().map_or(0.0, |t| t.outlet_pressure.pascals());
+    for tube in tubes.iter().rev() {
+        p = tube.march_from(p, frequency, false)?.last[0];
+    }
+    Ok(p)
+}
+
+/// The inlet pressure the march of the run from its outlet gives when the bubbles form at the
+/// first tube's inlet at pressure `p_in` (Pa): the map whose fixed point is the inlet pressure.
+fn inlet_after(tubes: &[Coil], junction: &Coil, p_in: f64) -> Result<f64, SegmentedFlowError> {
+    march_run(tubes, junction.junction_cell(p_in)?.frequency())
+}
+
+/// The bubble frequency of a run of tubes in series (flow order) that carry the same bubbles:
+/// formed at the inlet of the first tube (its [`Coil::junction_width`] and length correlation),
+/// neither made nor lost after, so one frequency holds in every tube; the run's outlet is the last
+/// tube's [`Coil::outlet_pressure`]. A fixed point on the run's inlet pressure, started from
+/// `guess` (Pa absolute; the outlet pressure when `None`): the inlet pressure sets the bubble
+/// frequency at the junction, the frequency the pressure drop (Brent between two iterates that
+/// bracket it, where the plain iteration swings). Returns the settled frequency and the
+/// iterations taken. A single coil is a run of one.
+pub fn settle_run(tubes: &[Coil], guess: Option<f64>) -> Result<(f64, u32), SegmentedFlowError> {
+    let (Some(junction), Some(last)) = (tubes.first(), tubes.last()) else {
+        return Err(SegmentedFlowError::Profile(crate::physics::ode::OdeError::InvalidInitialState));
+    };
+    let p_out = last.outlet_pressure.pascals();
+    if tubes.iter().any(|t| t.gas_at(0.0) <= 0.0) {
+        return Err(SegmentedFlowError::GasExhausted);
+    }
+    if tubes.iter().any(|t| t.vapour_pressure() >= p_out) {
+        return Err(SegmentedFlowError::Boils);
+    }
+    let mut p_in = guess.filter(|p| p.is_finite() && *p >= p_out).unwrap_or(p_out);
+    let mut frequency = junction.junction_cell(p_in)?.frequency();
+    let mut iterations = 0;
+    let mut before = None;
+    loop {
+        iterations += 1;
+        let next = march_run(tubes, frequency)?;
+        let settled = (next - p_in).abs() <= 1e-9 * next;
+        // Where the plain iteration swings between two pressures on either side of the fixed
+        // point (drops of hundreds of bar, where the bubble frequency reacts strongly to the
+        // inlet pressure), the two bracket it: solve p = march(p) there with Brent.
+        // If that fails (the march breaks down somewhere between them), the plain iteration
+        // goes on.
+        if !settled && iterations >= BRACKET_AFTER && before.is_some_and(|b: f64| (next - p_in) * (p_in - b) < 0.0) {
+            let (low, high) = (p_in.min(next), p_in.max(next));
+            let gap = |p: f64| inlet_after(tubes, junction, p).map_or(f64::NAN, |q| q - p);
+            if let Ok(root) = brent(gap, low, high, Tolerance { absolute: 0.0, relative: 1e-10, max_iterations: 100 }) {
+                return Ok((junction.junction_cell(root)?.frequency(), iterations));
+            }
+        }
+        before = Some(p_in);
+        p_in = next;
+        frequency = junction.junction_cell(p_in)?.frequency();
+        if settled {
+            return Ok((frequency, iterations));
+        }
+        if iterations >= MAX_INLET_ITERATIONS {
+            return Err(SegmentedFlowError::NoConvergence { quantity: "inlet pressure", iterations });
+        }
+    }
+}
+
+/// One tube of a run at the settled frequency.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct TubeState {
+    /// Absolute inlet pressure, Pa.
+    pub inlet_pressure: f64,
+    /// Absolute outlet pressure, Pa.
+    pub outlet_pressure: f64,
+    /// Liquid residence time ∫ dz / U_B, s (the gas rides in the bubbles at the same velocity).
+    pub residence_time: f64,
+    /// The unit cell at the outlet.
+    pub outlet: UnitCell,
+}
+
+/// Every tube of a run (flow order) at bubble frequency `frequency`, marched from the run's
+/// outlet: the same integration as [`settle_run`]'s.
+pub fn run_states(tubes: &[Coil], frequency: f64) -> Result<Vec<TubeState>, SegmentedFlowError> {
+    let mut p = tubes.last().map_or(0.0, |t| t.outlet_pressure.pascals());
+    let mut states = Vec::with_capacity(tubes.len());
+    for tube in tubes.iter().rev() {
+        let last = tube.march_from(p, frequency, false)?.last;
+        let outlet = UnitCell::with_frequency(tube.flow_at(p, tube.gas_at(0.0)), frequency)?;
+        states.push(TubeState { inlet_pressure: last[0], outlet_pressure: p, residence_time: last[2], outlet });
+        p = last[0];
+    }
+    states.reverse();
+    Ok(states)
 }

@@ -1,7 +1,9 @@
-//! Whole setup: an ordered line of stages — liquid feeds with their pumps, junctions, tubing,
-//! coils, fittings, packed cartridges and the back-pressure regulator — computed stage by stage
-//! with the physics that exists for each (Hagen–Poiseuille, Ergun, the clogging criterion), with
-//! one pressure budget from the regulator upstream. A stage is one entry of the case's `elements`.
+//! Whole setup: an ordered line of stages — liquid feeds with their pumps, a gas feed, junctions,
+//! tubing, coils, fittings, packed cartridges and the back-pressure regulator — computed stage by
+//! stage with the physics that exists for each (Hagen–Poiseuille, Ergun, the clogging criterion
+//! upstream of the gas; segmented flow in tubes and the gas–liquid packed bed downstream of it),
+//! with one pressure budget from the regulator upstream. A stage is one entry of the case's
+//! `elements`. One liquid and one temperature hold for the whole line.
 
 pub mod evaluate;
 pub mod keys;
@@ -12,10 +14,15 @@ use serde::Serialize;
 use self::keys::{ElementKey, MAX_STAGES};
 use self::pump::Pump;
 use super::fluids::selection::{self, LiquidSelection};
+use super::fluids::{self, Liquid};
 use super::form::{ChoiceSpec, Collector, FieldSource};
+use super::gases::{Gas, ReferenceFlow};
 use super::input::{Allowed, FieldSpec, InputError, field, lab};
-use super::units::{Concentration, Density, Dimension, DynamicViscosity, Fraction, Length, MolarMass, Pressure, PressureDifference, VolumetricFlow};
-use super::{ambient, slurry, tubing, tubular};
+use super::units::{
+    Concentration, Density, Dimension, DynamicViscosity, Fraction, Length, MolarMass, Pressure, PressureDifference, Temperature, VolumetricFlow,
+    format_significant,
+};
+use super::{ambient, gas_liquid_bed, hazards, segmented_flow, slurry, tubing, tubular};
 
 pub use self::evaluate::evaluate;
 
@@ -27,6 +34,7 @@ pub const KIND: ChoiceSpec = ChoiceSpec {
     label: "Stage",
     options: &[
         ("liquid_feed", "Liquid feed (pump)"),
+        ("gas_feed", "Gas feed (flow controller)"),
         ("junction", "Junction or mixer"),
         ("tubing", "Tubing"),
         ("coil", "Coil"),
@@ -81,6 +89,14 @@ pub const RATING: FieldSpec = field("pressure_rating", "Pressure rating (gauge)"
 pub const PARTICLE_DIAMETER: FieldSpec = field("particle_diameter", "Packing particle diameter", Dimension::Length, lab::PARTICLE_SIZE, "Diameter of the packed particles (φ d_v for non-spheres).");
 /// Bed voidage of a cartridge.
 pub const VOIDAGE: FieldSpec = field("voidage", "Bed voidage", Dimension::Fraction, OPEN_FRACTION, "Volume fraction between the particles; about 0.36–0.42 for a randomly packed bed of spheres.");
+/// Gas supply pressure.
+pub const SUPPLY_PRESSURE: FieldSpec = field(
+    "supply_pressure",
+    "Gas supply pressure (gauge)",
+    Dimension::PressureDifference,
+    lab::PRESSURE,
+    "Pressure the cylinder's regulator delivers to the gas flow controller, above atmosphere.",
+);
 /// Regulator set point.
 pub const SET_POINT: FieldSpec = field("set_point", "Set point (gauge)", Dimension::PressureDifference, lab::BACK_PRESSURE, "Pressure the regulator holds at its inlet, above atmosphere.");
 
@@ -96,6 +112,8 @@ pub const D90: FieldSpec = slurry::D90;
 pub enum StageKind {
     /// A pumped liquid (clean or with suspended solids).
     LiquidFeed,
+    /// A gas from a cylinder through a flow controller.
+    GasFeed,
     /// A junction or mixer where streams meet.
     Junction,
     /// Straight tubing.
@@ -112,13 +130,14 @@ pub enum StageKind {
 
 impl StageKind {
     /// In the order of [`KIND`]'s options.
-    pub const ALL: [StageKind; 7] =
-        [StageKind::LiquidFeed, StageKind::Junction, StageKind::Tubing, StageKind::Coil, StageKind::Fitting, StageKind::Cartridge, StageKind::Regulator];
+    pub const ALL: [StageKind; 8] =
+        [StageKind::LiquidFeed, StageKind::GasFeed, StageKind::Junction, StageKind::Tubing, StageKind::Coil, StageKind::Fitting, StageKind::Cartridge, StageKind::Regulator];
 
     /// Lower-case name for messages.
     pub const fn word(self) -> &'static str {
         match self {
             StageKind::LiquidFeed => "liquid feed",
+            StageKind::GasFeed => "gas feed",
             StageKind::Junction => "junction",
             StageKind::Tubing => "tubing",
             StageKind::Coil => "coil",
@@ -142,6 +161,21 @@ pub struct Feed {
     pub solids: Fraction,
 }
 
+/// A gas feed: the gas entries of the gas–liquid calculators and the supply pressure.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct GasSupply {
+    /// The gas.
+    pub gas: Gas,
+    /// Mole fraction of the named gas, the rest nitrogen (air: its own composition).
+    pub mole_fraction: f64,
+    /// Flow at its reference state (the flow controller's reading).
+    pub flow: ReferenceFlow,
+    /// Supply pressure (gauge) upstream of the flow controller.
+    pub supply: PressureDifference,
+    /// The limiting oxygen concentration entered for the liquid, if any (oxidising gases only).
+    pub limiting_oxygen: Option<f64>,
+}
+
 /// A packed bed.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
 pub struct Packing {
@@ -157,6 +191,8 @@ pub struct Packing {
 pub enum Stage {
     /// A feed joins at the inlet of the next stage that carries flow.
     Feed(Feed),
+    /// The gas feed joins at the inlet of the next stage that carries flow.
+    Gas(GasSupply),
     /// A passage the liquid flows through (junction, tubing, coil, fitting or cartridge).
     Passage {
         /// Which.
@@ -180,10 +216,16 @@ pub enum Stage {
 }
 
 impl Stage {
+    /// Whether it is a feed (liquid or gas): it carries no flow of its own.
+    pub fn is_feed(&self) -> bool {
+        matches!(self, Stage::Feed(_) | Stage::Gas(_))
+    }
+
     /// Its kind.
     pub fn kind(&self) -> StageKind {
         match self {
             Stage::Feed(_) => StageKind::LiquidFeed,
+            Stage::Gas(_) => StageKind::GasFeed,
             Stage::Passage { kind, .. } => *kind,
             Stage::Regulator { .. } => StageKind::Regulator,
         }
@@ -199,6 +241,15 @@ pub struct Production {
     pub yield_fraction: Fraction,
     /// Product molar mass.
     pub molar_mass: MolarMass,
+}
+
+/// What the gas stages need of the liquid: its properties at the line's temperature.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct GasLiquid {
+    /// Density, viscosity, surface tension and vapour pressure (none for an entered liquid).
+    pub liquid: Liquid,
+    /// The line's temperature.
+    pub temperature: Temperature,
 }
 
 /// Validated inputs of a setup.
@@ -218,6 +269,8 @@ pub struct SetupInput {
     pub tubing: Option<tubing::TubingChoice>,
     /// d90 of the solids, when a feed carries solids.
     pub d90: Option<Length>,
+    /// The liquid's properties for the gas stages, when the line has a gas feed.
+    pub gas_liquid: Option<GasLiquid>,
     /// The product balance.
     pub production: Production,
 }
@@ -270,6 +323,19 @@ fn read_stage(src: &dyn FieldSource, i: usize, c: &mut Collector) -> Option<Stag
                 solids: Fraction::from_si(solids?),
             }))
         }
+        StageKind::GasFeed => {
+            // The gas entries are those of the gas–liquid calculators, read by their own reader
+            // and named at this stage.
+            let mut inner = Collector::default();
+            let gas = segmented_flow::read_gas(src, &mut inner);
+            let limiting_oxygen = hazards::oxygen::read(src, &mut inner, gas.map(|g| g.0));
+            let supply = inner.take(src.quantity(&SUPPLY_PRESSURE));
+            for e in inner.into_errors() {
+                c.take::<()>(Err(keys::named(i, e)));
+            }
+            let (gas, y, flow) = gas?;
+            Some(Stage::Gas(GasSupply { gas, mole_fraction: y, flow, supply: PressureDifference::from_si(supply?), limiting_oxygen: limiting_oxygen? }))
+        }
         StageKind::Regulator => {
             let set_point = q(&SET_POINT, &keys::SET_POINT);
             let rating = q(&RATING, &keys::RATING);
@@ -311,10 +377,13 @@ pub fn order_errors(stages: &[Stage]) -> Vec<InputError> {
     {
         errors.push(error(0, "the line starts with a feed: put a liquid feed first"));
     }
+    for (i, _) in stages.iter().enumerate().filter(|(_, s)| matches!(s, Stage::Gas(_))).skip(1).take(MAX_STAGES) {
+        errors.push(error(i, "one gas feed per line: mix the gases before the flow controller and enter the mixture as one feed"));
+    }
     for (i, s) in stages.iter().enumerate().take(MAX_STAGES) {
         match s {
             Stage::Regulator { .. } if i + 1 != n => errors.push(error(i, "the back-pressure regulator is the last stage: move it to the end")),
-            Stage::Feed(_) if !stages[i + 1..].iter().any(|s| !matches!(s, Stage::Feed(_))) => {
+            s if s.is_feed() && !stages[i + 1..].iter().any(|s| !s.is_feed()) => {
                 errors.push(error(i, "a feed joins the next stage that carries flow: add a junction, tubing or other stage after it"));
             }
             _ => {}
@@ -334,6 +403,12 @@ impl SetupInput {
         let tubing = tubing::read(src, &mut c, &selection::TEMPERATURE);
         let solids = read.iter().flatten().any(|s| matches!(s, Stage::Feed(f) if f.solids.si() > 0.0));
         let d90 = if solids { c.take(src.quantity(&D90)).map(|d| Some(Length::from_si(d))) } else { Some(None) };
+        let gassed = read.iter().flatten().any(|s| matches!(s, Stage::Gas(_)));
+        let gas_liquid = match (gassed, liquid) {
+            (false, _) => Some(None),
+            (true, Some(l)) => read_gas_liquid(src, &mut c, &l).map(Some),
+            (true, None) => None,
+        };
         let concentration = c.take(src.quantity(&tubular::CONCENTRATION));
         let yield_fraction = c.take(src.quantity(&tubular::YIELD));
         let molar_mass = c.take(src.quantity(&tubular::MOLAR_MASS));
@@ -344,8 +419,8 @@ impl SetupInput {
         } else if stages.len() > MAX_STAGES || stages.len() < 2 {
             errors.push(InputError { field: STAGES_KEY, label: "Stages", given: format!("{} stages", stages.len()), problem: format!("allowed: 2 to {MAX_STAGES} stages") });
         }
-        let (Some(stages), Some(liquid), Some(rho), Some(mu), Some(ambient), Some(tubing), Some(d90), Some(cn), Some(y), Some(m), true) =
-            (all_read, liquid, density, viscosity, ambient, tubing, d90, concentration, yield_fraction, molar_mass, errors.is_empty())
+        let (Some(stages), Some(liquid), Some(rho), Some(mu), Some(ambient), Some(tubing), Some(d90), Some(gas_liquid), Some(cn), Some(y), Some(m), true) =
+            (all_read, liquid, density, viscosity, ambient, tubing, d90, gas_liquid, concentration, yield_fraction, molar_mass, errors.is_empty())
         else {
             return Err(errors);
         };
@@ -357,11 +432,35 @@ impl SetupInput {
             ambient,
             tubing,
             d90,
+            gas_liquid,
             production: Production {
                 concentration: Concentration::from_si(cn),
                 yield_fraction: Fraction::from_si(y),
                 molar_mass: MolarMass::from_si(m),
             },
         })
+    }
+}
+
+/// The liquid's properties for the gas stages: those of the gas–liquid cartridge
+/// ([`gas_liquid_bed::liquid_properties`]) at the line's temperature; an entered liquid also needs
+/// its surface tension and a temperature for the gas.
+fn read_gas_liquid(src: &dyn FieldSource, c: &mut Collector, liquid: &LiquidSelection) -> Option<GasLiquid> {
+    let (temperature, surface_tension) = match *liquid {
+        LiquidSelection::Solvent { temperature, .. } | LiquidSelection::Mixture { temperature, .. } => (temperature, None),
+        LiquidSelection::Custom { .. } => {
+            let t = c.take(src.quantity(&selection::TEMPERATURE));
+            let sigma = c.take(src.quantity(&fluids::CUSTOM_SURFACE_TENSION));
+            (Temperature::from_si(t?), Some(sigma?))
+        }
+    };
+    match gas_liquid_bed::liquid_properties(liquid, surface_tension) {
+        Ok(liquid) => Some(GasLiquid { liquid, temperature }),
+        Err(e) => c.take(Err(InputError {
+            field: selection::TEMPERATURE.key,
+            label: selection::TEMPERATURE.label,
+            given: format!("{} K", format_significant(e.temperature_k, 4)),
+            problem: e.to_string(),
+        })),
     }
 }
