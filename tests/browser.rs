@@ -788,3 +788,49 @@ async fn a_setup_is_built_reordered_and_kept_across_a_reload() {
     assert_clean(&b).await;
     b.close().await;
 }
+
+#[tokio::test]
+async fn a_gas_feed_in_a_setup_expands_is_checked_at_its_supply_and_for_its_hazard() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    b.click("[data-testid=tab-setup]").await;
+    b.wait_for("[data-testid=panel-setup]").await;
+    wait_for_stages(&b, 7).await;
+    // The demo's carbon dioxide joins at stage 3: its stage shows the gas's own entries, the gas
+    // figures are in the part table, and the gas and its supply are fine.
+    assert_eq!(b.js("return document.querySelector('[data-testid=\"choice-stage_3_kind\"]').value;").await, "gas_feed");
+    assert!(b.exists("[data-testid=input-stage_3_supply_pressure]").await);
+    assert!(!b.exists("[data-testid=input-stage_3_inner_diameter]").await, "a gas feed has no bore to enter");
+    assert!(b.text("[data-testid=part-table]").await.contains("Gas flow"));
+    let demo = CaseFile::from_json(Calculator::Setup.demo_json()).unwrap().evaluate().unwrap();
+    let check = |key: &str| demo.checks.iter().find(|c| c.key == key).unwrap().verdict.word().to_owned();
+    assert_eq!(check("gas_hazard"), "fine");
+    b.js_when("return document.querySelector('[data-testid=verdict-gas_hazard]')?.textContent ?? '';", |t| t.as_str().is_some_and(|t| t.contains("fine"))).await;
+    // Supplied below the pressure where it joins, the gas cannot enter: a problem at the feed,
+    // in its stage's detail.
+    // (A fine check sits folded in the list of fine ones: read its words whether shown or not.)
+    let supply = "return document.querySelector('[data-testid=verdict-stage_3_gas_supply]')?.textContent ?? '';";
+    b.click("[data-testid=panel-setup] [data-testid=part-3]").await;
+    b.js_when(supply, |t| t.as_str().is_some_and(|t| t.contains("fine"))).await;
+    b.type_into("stage_3_supply_pressure", "3").await;
+    b.text_when("[data-testid=verdict-stage_3_gas_supply]", |t| t.to_lowercase().contains("problem")).await;
+    b.type_into("stage_3_supply_pressure", "10").await;
+    // Fine again, the detail opens on the worst stage (the pump's caution at stage 2); stage 3's is
+    // one click away.
+    b.text_when("[data-testid=panel-setup] [data-testid=element-detail] h3", |t| t.starts_with("Stage 2")).await;
+    b.click("[data-testid=panel-setup] [data-testid=part-3]").await;
+    b.js_when(supply, |t| t.as_str().is_some_and(|t| t.contains("fine"))).await;
+    // Pure oxygen over hot acetonitrile: the hazard is a problem, its caution beside it, as on
+    // the gas-liquid tabs (the same rule).
+    b.choose("choice-stage_3_gas", "oxygen").await;
+    b.text_when("[data-testid=verdict-gas_hazard]", |t| t.to_lowercase().contains("problem")).await;
+    assert!(b.text("[data-testid=caution-gas_hazard]").await.contains("Safety"));
+    let mut o2: Value = serde_json::from_str(Calculator::Setup.demo_json()).unwrap();
+    o2["elements"][2]["gas"] = Value::from("oxygen");
+    o2["elements"][2]["loc_source"] = Value::from("typical");
+    let o2 = CaseFile::from_json(&o2.to_string()).unwrap().evaluate().unwrap();
+    assert_eq!(o2.checks.iter().find(|c| c.key == "gas_hazard").unwrap().verdict.word(), "problem");
+    b.screenshot("setup-oxygen").await;
+    assert_clean(&b).await;
+    b.close().await;
+}
