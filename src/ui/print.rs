@@ -84,7 +84,7 @@ pub fn PrintRecord(
                     {entries.into_iter().map(|(label, value)| view! { <li>{format!("{label}: ")}<strong>{value}</strong></li> }).collect_view()}
                 </ul>
                 {(!elements.is_empty()).then(|| view! {
-                    <table class="record-table">
+                    <table class="record-table record-entries">
                         <tr><th scope="col">"#"</th><th scope="col">{if calculator.element_prefix() == "stage" { "Stage" } else { "Element" }}</th></tr>
                         {elements.into_iter().enumerate().map(|(i, e)| view! {
                             <tr><td>{i + 1}</td><td>{e}</td></tr>
