@@ -127,8 +127,12 @@ impl<'a> Line<'a> {
     /// Hindered settling speed (Richardson–Zaki on the recommended drag law) of particles of
     /// diameter `d` in a passage of bore `bore`.
     pub(super) fn hindered(&self, d: Length, bore: Length) -> Result<f64, NumericalError> {
-        let s = Suspension { particle: self.input.particle(d), solids_fraction: self.phi, tube_diameter: bore };
-        Ok(s.hindered(HinderedModel::RichardsonZaki)?.velocity.si())
+        Ok(self.suspension(d, bore).hindered(HinderedModel::RichardsonZaki)?.velocity.si())
+    }
+
+    /// Particles of diameter `d` at the line's solids fraction in a passage of bore `bore`.
+    pub(super) fn suspension(&self, d: Length, bore: Length) -> Suspension {
+        Suspension { particle: self.input.particle(d), solids_fraction: self.phi, tube_diameter: bore }
     }
 
     fn delta_rho(&self) -> f64 {

@@ -15,7 +15,8 @@ use crate::physics::map::{Map, MapAxis, MapLayer};
 use crate::physics::pipe_flow;
 use crate::physics::report::Verdict;
 use crate::physics::settling::Drift;
-use crate::physics::units::{Dimension, Length, VolumetricFlow, format_significant};
+use crate::physics::settling::hindered::HinderedModel;
+use crate::physics::units::{Dimension, Length, Velocity, VolumetricFlow, format_significant};
 
 /// Cells along each axis.
 pub const CELLS: usize = 256;
@@ -48,16 +49,30 @@ struct Passage {
     clogging: Verdict,
 }
 
-fn passage(line: &Line, element: LineElement) -> Option<Passage> {
+/// Terminal speeds (recommended drag law) of the size classes and of the d90 particles: they do
+/// not depend on the bore or the flow, so they are computed once per map.
+struct Terminal {
+    classes: Vec<Velocity>,
+    largest: Velocity,
+}
+
+fn terminal(line: &Line) -> Option<Terminal> {
+    let at = |d: Length| line.suspension(d, d).terminal().ok();
+    Some(Terminal { classes: line.classes.iter().map(|c| at(c.diameter)).collect::<Option<Vec<_>>>()?, largest: at(line.largest)? })
+}
+
+fn passage(line: &Line, terminal: &Terminal, element: LineElement) -> Passage {
     let ratio = element.inner_diameter.si() / line.largest.si();
     let sieving = matches!(clogging::risk(ratio), clogging::ClogRisk::Sieving);
     let speeds = if line.drift == Drift::Neutral || sieving {
         None
     } else {
-        let classes = line.classes.iter().map(|c| line.hindered(c.diameter, element.inner_diameter)).collect::<Result<Vec<_>, _>>().ok()?;
-        Some((classes, line.hindered(line.largest, element.inner_diameter).ok()?))
+        let bore = element.inner_diameter;
+        let hindered = |d: Length, t: Velocity| line.suspension(d, bore).hindered_on(t, HinderedModel::RichardsonZaki).velocity.si();
+        let classes = line.classes.iter().zip(&terminal.classes).map(|(c, &t)| hindered(c.diameter, t)).collect();
+        Some((classes, hindered(line.largest, terminal.largest)))
     };
-    Some(Passage { element, speeds, clogging: clogging_verdict(ratio, line.phi) })
+    Passage { element, speeds, clogging: clogging_verdict(ratio, line.phi) }
 }
 
 /// The settling verdict of `p` at flow `q` (as the point evaluation decides it).
@@ -119,7 +134,9 @@ pub fn line_map(input: &SlurryInput, n: usize) -> Option<Map> {
     let rating = input.rating.si();
     let mu_s = line.mu_s;
     // The passages whose opening is kept, once.
-    let kept: Vec<Option<Passage>> = input.elements.iter().map(|e| (!swept(e.kind)).then(|| passage(&line, *e)).flatten()).collect();
+    // The terminal speeds once (the point evaluation fails where they cannot be found).
+    let terminal = terminal(&line)?;
+    let kept: Vec<Option<Passage>> = input.elements.iter().map(|e| (!swept(e.kind)).then(|| passage(&line, &terminal, *e))).collect();
     // The checks in the report's order: each element's settling then clogging, then the budget.
     let count = input.elements.len().min(keys::MAX_ELEMENTS);
     let mut limit_names: Vec<String> = Vec::with_capacity(2 * count + 1);
@@ -135,14 +152,13 @@ pub fn line_map(input: &SlurryInput, n: usize) -> Option<Map> {
         let elements: Vec<LineElement> =
             input.elements.iter().map(|e| if swept(e.kind) { LineElement { inner_diameter: tubing, ..*e } } else { *e }).collect();
         // Every swept element shares the row's bore, so their speeds are computed once per row.
-        let row = passage(&line, LineElement { inner_diameter: tubing, ..elements[0] });
-        let passages: Option<Vec<Passage>> = elements
+        let row = passage(&line, &terminal, LineElement { inner_diameter: tubing, ..elements[0] });
+        let passages: Vec<Passage> = elements
             .iter()
             .zip(&kept)
             .take(count)
-            .map(|(e, k)| if swept(e.kind) { row.clone().map(|p| Passage { element: *e, ..p }) } else { k.clone() })
+            .filter_map(|(e, k)| if swept(e.kind) { Some(Passage { element: *e, ..row.clone() }) } else { k.clone() })
             .collect();
-        let Some(passages) = passages else { continue };
         let probe = elements.iter().find(|e| swept(e.kind)).map_or(tubing, |e| e.inner_diameter);
         // Each element's settling verdict along the row: it only improves as the flow rises, so
         // it is found at the ends and wherever it changes (bisection), not at every cell.
