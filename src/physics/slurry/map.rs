@@ -119,6 +119,12 @@ fn fill_between(out: &mut [Verdict], lo: usize, a: Verdict, hi: usize, b: Verdic
 /// The map of `input` with `n` × `n` cells, or `None` when the line has no tubing or coil (the
 /// bore axis would change nothing) or its settling speeds cannot be computed.
 pub fn line_map(input: &SlurryInput, n: usize) -> Option<Map> {
+    build(input, n, false)
+}
+
+/// The map; `every_cell` evaluates each element's settling verdict at every cell instead of by
+/// bisection along the rows (for the test that the two agree).
+fn build(input: &SlurryInput, n: usize, every_cell: bool) -> Option<Map> {
     let (line, mu_fig) = Line::new(input).ok()?;
     // The case's tubing bore: the narrowest tubing or coil.
     let bore = input.elements.iter().filter(|e| swept(e.kind)).map(|e| e.inner_diameter.si()).reduce(f64::min)?;
@@ -163,7 +169,12 @@ pub fn line_map(input: &SlurryInput, n: usize) -> Option<Map> {
         // Each element's settling verdict along the row: it only improves as the flow rises, so
         // it is found at the ends and wherever it changes (bisection), not at every cell.
         for (p, out) in passages.iter().zip(settling_rows.iter_mut()) {
-            fill_monotone(out, 0, n - 1, &|ix| settling(&line, p, VolumetricFlow::from_si(x.values[ix])));
+            let at = |ix: usize| settling(&line, p, VolumetricFlow::from_si(x.values[ix]));
+            if every_cell {
+                out.iter_mut().enumerate().for_each(|(ix, v)| *v = at(ix));
+            } else {
+                fill_monotone(out, 0, n - 1, &at);
+            }
         }
         for (ix, &q) in x.values.iter().enumerate() {
             let flow = VolumetricFlow::from_si(q);
@@ -218,6 +229,35 @@ pub fn line_map(input: &SlurryInput, n: usize) -> Option<Map> {
 #[allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
 mod tests {
     use super::*;
+
+    /// The demo line, and with `changes` to its line-level entries.
+    fn demo(changes: &[(&str, serde_json::Value)]) -> SlurryInput {
+        use crate::case::{Calculator, CaseFile, EntrySource};
+        use crate::physics::form::FieldSource;
+        let mut doc: serde_json::Value = serde_json::from_str(Calculator::SlurryLine.demo_json()).unwrap();
+        for (k, v) in changes {
+            doc["inputs"][*k] = v.clone();
+        }
+        let c = CaseFile::from_json(&doc.to_string()).unwrap();
+        let sources: Vec<EntrySource<'_>> = c.elements.iter().map(EntrySource).collect();
+        let refs: Vec<&dyn FieldSource> = sources.iter().map(|s| s as _).collect();
+        SlurryInput::from_source(&EntrySource(&c.inputs), &refs).unwrap()
+    }
+
+    #[test]
+    fn bisection_along_the_rows_gives_every_cell_as_evaluating_each_does() {
+        // The demo (horizontal and up-flow elements, d10/d50/d90), one 40 µm size, and 8 passes of a loop.
+        let single = [("size_mode", serde_json::json!("single")), ("particle_size", serde_json::json!({"value": 40, "unit": "µm"}))];
+        let looped = [("operation", serde_json::json!("recirculation")), ("passes", serde_json::json!({"value": 8, "unit": ""}))];
+        for input in [demo(&[]), demo(&single), demo(&looped)] {
+            let fast = line_map(&input, CELLS).unwrap();
+            let slow = build(&input, CELLS, true).unwrap();
+            assert_eq!(fast.verdicts, slow.verdicts);
+            assert_eq!(fast.limiting, slow.limiting);
+            let kinds: std::collections::BTreeSet<_> = fast.verdicts.iter().collect();
+            assert!(kinds.len() >= 2, "{kinds:?}");
+        }
+    }
 
     #[test]
     fn fill_monotone_gives_every_cell_of_a_step_function_either_way() {
