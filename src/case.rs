@@ -511,19 +511,25 @@ impl Calculator {
 
     /// Whether [`Calculator::map`] gives a map for this calculator.
     pub const fn has_map(self) -> bool {
-        matches!(self, Calculator::PackedBed)
+        matches!(self, Calculator::PackedBed | Calculator::SlurryLine)
     }
 
     /// The operating map of the case, for a calculator that has one: its verdict over a grid of
     /// two entries (`None` for the others; the inputs' errors when they are invalid).
-    pub fn map(self, src: &dyn FieldSource) -> Option<Result<crate::physics::map::Map, CaseError>> {
+    /// `elements` are the line's elements, as for [`Calculator::evaluate`]. The slurry line has none
+    /// without a tubing or coil element (its bore axis would change nothing).
+    pub fn map(self, src: &dyn FieldSource, elements: &[&dyn FieldSource]) -> Option<Result<crate::physics::map::Map, CaseError>> {
         match self {
             Calculator::PackedBed => Some(
                 PackedBedInput::from_source(src)
                     .map(|input| bed::map::cartridge_map(&input, bed::map::CELLS))
                     .map_err(CaseError::Inputs),
             ),
-            Calculator::TubularReactor | Calculator::SlurryLine | Calculator::SegmentedFlow | Calculator::GasLiquidBed | Calculator::Setup => None,
+            Calculator::SlurryLine => match SlurryInput::from_source(src, elements) {
+                Ok(input) => slurry::map::line_map(&input, slurry::map::CELLS).map(Ok),
+                Err(e) => Some(Err(CaseError::Inputs(e))),
+            },
+            Calculator::TubularReactor | Calculator::SegmentedFlow | Calculator::GasLiquidBed | Calculator::Setup => None,
         }
     }
 

@@ -625,18 +625,18 @@ async fn a_range_entry_gives_bands_names_the_entry_that_drives_them_and_a_stradd
 
 /// Sends a mouse event of `kind` to the cartridge map at the fractions (`fx` from the left, `fy`
 /// from the top) of its canvas.
-async fn map_event(b: &Browser, kind: &str, fx: f64, fy: f64) {
+async fn map_event(b: &Browser, map: &str, kind: &str, fx: f64, fy: f64) {
     b.js(&format!(
-        "const c = document.querySelector('[data-testid=map-canvas-cartridge_map]'); const r = c.getBoundingClientRect();
+        "const c = document.querySelector('[data-testid=map-canvas-{map}]'); const r = c.getBoundingClientRect();
          c.dispatchEvent(new MouseEvent('{kind}', {{ bubbles: true, clientX: r.left + {fx} * r.width, clientY: r.top + {fy} * r.height }}));"
     ))
     .await;
 }
 
 /// The map marker's distance from the left (% of the map) once `ok` holds for it (5 s at most).
-async fn marker_left_when(b: &Browser, ok: impl Fn(f64) -> bool) -> f64 {
-    let script = "return parseFloat(document.querySelector('[data-testid=map-marker-cartridge_map]').style.left);";
-    b.js_when(script, |v| v.as_f64().is_some_and(&ok)).await.as_f64().unwrap()
+async fn marker_left_when(b: &Browser, map: &str, ok: impl Fn(f64) -> bool) -> f64 {
+    let script = format!("return parseFloat(document.querySelector('[data-testid=map-marker-{map}]').style.left);");
+    b.js_when(&script, |v| v.as_f64().is_some_and(&ok)).await.as_f64().unwrap()
 }
 
 #[tokio::test]
@@ -664,22 +664,75 @@ async fn the_cartridge_map_renders_reads_out_a_cell_moves_the_case_and_follows_t
     // The read-out names this case until the pointer is on the map, then the cell under it.
     let own = b.text("[data-testid=map-readout-cartridge_map]").await;
     assert!(own.starts_with("This case: Flow 1"), "{own}");
-    map_event(&b, "mousemove", 0.99, 0.99).await;
+    map_event(&b, "cartridge_map", "mousemove", 0.99, 0.99).await;
     let cell = b.text_when("[data-testid=map-readout-cartridge_map]", |t| t.starts_with("Flow")).await;
     assert!(cell.contains("problem") && cell.contains("Bed pressure drop (Ergun)"), "{cell}");
     // A click moves the case: the flow field takes the cell's flow (3 significant figures).
     let before = b.js("return document.querySelector('[data-testid=map-marker-cartridge_map]').style.left;").await;
-    map_event(&b, "click", 0.9, 0.1).await;
+    map_event(&b, "cartridge_map", "click", 0.9, 0.1).await;
     let typed = b.js_when("return document.querySelector('[data-testid=input-flow]').value;", |v| v != "1").await;
     let q: f64 = typed.as_str().unwrap().parse().unwrap();
     assert!(q > 3.0 && q <= 10.0, "flow now {q} mL/min");
     // The marker follows the entry: after the click it sits at the chosen flow, right of where
     // it was; a lower flow typed moves it left again.
     let start = before.as_str().unwrap().trim_end_matches('%').parse::<f64>().unwrap();
-    let clicked = marker_left_when(&b, |x| x > start + 10.0).await;
+    let clicked = marker_left_when(&b, "cartridge_map", |x| x > start + 10.0).await;
     b.type_into("flow", "0.1").await;
-    marker_left_when(&b, |x| x < clicked - 10.0).await;
+    marker_left_when(&b, "cartridge_map", |x| x < clicked - 10.0).await;
     b.screenshot("cartridge-map").await;
+    assert_clean(&b).await;
+    b.close().await;
+}
+
+#[tokio::test]
+async fn the_slurry_map_renders_reads_out_a_cell_and_a_click_sets_the_flow_and_the_tubing_bore() {
+    let b = Browser::start().await;
+    b.open_page().await;
+    b.click("[data-testid=tab-slurry_line]").await;
+    b.wait_for("[data-testid=panel-slurry_line]").await;
+    // Folded (and not computed) until opened.
+    assert!(!b.exists("[data-testid=map-canvas-slurry_map]").await);
+    b.click("[data-testid=panel-slurry_line] [data-testid=map-toggle]").await;
+    b.wait_for("[data-testid=map-canvas-slurry_map]").await;
+    b.wait_for("[data-testid=map-marker-slurry_map]").await;
+    // Drawn as the map evaluated natively: a problem (red) at the narrowest bore and the largest
+    // flow (pressure budget), caution (amber) at 4 mm-ish bores and high flow where the 0.5 mm
+    // fitting's and the seat's margins over d90 are what limits (row 64 from the bottom, column 200).
+    let c = CaseFile::from_json(Calculator::SlurryLine.demo_json()).unwrap();
+    let sources: Vec<clearbore::case::EntrySource<'_>> = c.elements.iter().map(clearbore::case::EntrySource).collect();
+    let refs: Vec<&dyn clearbore::physics::form::FieldSource> = sources.iter().map(|s| s as _).collect();
+    let map = Calculator::SlurryLine.map(&clearbore::case::EntrySource(&c.inputs), &refs).unwrap().unwrap();
+    assert_eq!(map.verdicts[map.index(255, 0)], Some(clearbore::physics::report::Verdict::Problem));
+    assert_eq!(map.verdicts[map.index(200, 64)], Some(clearbore::physics::report::Verdict::Caution));
+    let pixel = |x: usize, y: usize| {
+        format!("const c = document.querySelector('[data-testid=map-canvas-slurry_map]'); return Array.from(c.getContext('2d').getImageData({x}, {y}, 1, 1).data);")
+    };
+    assert_eq!(b.js(&pixel(255, 255)).await, json!([0xec, 0xa5, 0x9f, 255]), "bottom right: narrowest bore, largest flow");
+    assert_eq!(b.js(&pixel(200, 255 - 64)).await, json!([0xf3, 0xd9, 0x8b, 255]), "row 64, column 200");
+    // The read-out names this case, then the cell under the pointer with the check that limits it.
+    let own = b.text("[data-testid=map-readout-slurry_map]").await;
+    // (The case's cell: its centre is within half a cell of 2 mL/min and 1.6 mm.)
+    assert!(own.starts_with("This case: Flow 1.99 mL/min, tubing bore 1.60 mm: problem (limited by Element 1: settling)"), "{own}");
+    map_event(&b, "slurry_map", "mousemove", 0.99, 0.99).await;
+    let cell = b.text_when("[data-testid=map-readout-slurry_map]", |t| t.starts_with("Flow")).await;
+    assert!(cell.contains("problem (limited by Pressure budget)") && cell.contains("Inlet pressure (gauge)"), "{cell}");
+    // A click sets the flow and every tubing and coil bore (elements 1, 3 and 4), not the
+    // fitting's opening (element 2).
+    let before = b.js("return document.querySelector('[data-testid=map-marker-slurry_map]').style.left;").await;
+    map_event(&b, "slurry_map", "click", 0.9, 0.5).await;
+    let typed = b.js_when("return document.querySelector('[data-testid=input-flow]').value;", |v| v != "2").await;
+    let q: f64 = typed.as_str().unwrap().parse().unwrap();
+    assert!(q > 10.0 && q <= 50.0, "flow now {q} mL/min");
+    let bore = |n: usize| format!("return document.querySelector('[data-testid=input-element_{n}_inner_diameter]').value;");
+    let d: f64 = b.js(&bore(1)).await.as_str().unwrap().parse().unwrap();
+    assert!(d > 0.7 && d < 1.3, "tubing bore now {d} mm");
+    assert_eq!(b.js(&bore(3)).await, b.js(&bore(1)).await);
+    assert_eq!(b.js(&bore(4)).await, b.js(&bore(1)).await);
+    assert_eq!(b.js(&bore(2)).await, json!("0.5"));
+    // The marker follows: right of where it was.
+    let start = before.as_str().unwrap().trim_end_matches('%').parse::<f64>().unwrap();
+    marker_left_when(&b, "slurry_map", |x| x > start + 10.0).await;
+    b.screenshot("slurry-map").await;
     assert_clean(&b).await;
     b.close().await;
 }

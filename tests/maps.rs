@@ -16,7 +16,7 @@ fn case(changes: &[(&str, Value)]) -> CaseFile {
 
 /// Compares sampled cells of the map of `c` with point evaluations.
 fn cells_equal_points(c: &CaseFile) -> usize {
-    let map = Calculator::PackedBed.map(&EntrySource(&c.inputs)).unwrap().unwrap();
+    let map = Calculator::PackedBed.map(&EntrySource(&c.inputs), &[]).unwrap().unwrap();
     let n = map.x.values.len();
     assert_eq!(map.verdicts.len(), n * n);
     let mut compared = 0;
@@ -57,14 +57,14 @@ fn cartridge_map_cells_equal_point_evaluations_in_up_flow_with_an_estimated_void
     // Up-flow with the bed free: coarse particles at low flow stay, fine ones at high flow lift.
     let c = case(&[("flow_direction", json!("up")), ("confinement", json!("free")), ("voidage_source", json!("estimated"))]);
     assert!(cells_equal_points(&c) > 100);
-    let map = Calculator::PackedBed.map(&EntrySource(&c.inputs)).unwrap().unwrap();
+    let map = Calculator::PackedBed.map(&EntrySource(&c.inputs), &[]).unwrap().unwrap();
     assert!(map.verdicts.contains(&Some(Verdict::Problem)) && map.verdicts.contains(&Some(Verdict::Fine)));
 }
 
 #[test]
 fn the_map_marks_the_case_and_spans_the_pump() {
     let c = case(&[]);
-    let map = Calculator::PackedBed.map(&EntrySource(&c.inputs)).unwrap().unwrap();
+    let map = Calculator::PackedBed.map(&EntrySource(&c.inputs), &[]).unwrap().unwrap();
     // Demo: 1 mL/min, 150 µm, pump up to 10 mL/min.
     assert!((map.current.0 - 1e-6 / 60.0).abs() < 1e-15 && (map.current.1 - 150e-6).abs() < 1e-15);
     assert!((map.x.values.last().unwrap() - 10e-6 / 60.0).abs() < 1e-15);
@@ -74,5 +74,197 @@ fn the_map_marks_the_case_and_spans_the_pump() {
     let half = |a: &clearbore::physics::map::MapAxis| 0.5 * (a.values[1] / a.values[0]).ln() * (1.0 + 1e-9);
     assert!((map.x.values[ix] / map.current.0).ln().abs() <= half(&map.x));
     assert!((map.y.values[iy] / map.current.1).ln().abs() <= half(&map.y));
-    assert!(Calculator::TubularReactor.map(&EntrySource(&c.inputs)).is_none());
+    assert!(Calculator::TubularReactor.map(&EntrySource(&c.inputs), &[]).is_none());
+}
+
+// ---- The slurry line: flow × tubing bore ----
+
+use clearbore::physics::map::Map;
+use clearbore::physics::slurry::ElementKind;
+use clearbore::physics::slurry::map::swept;
+
+/// The slurry demo with line-level `changes` and, where given, other elements.
+fn slurry_case(changes: &[(&str, Value)], elements: Option<Value>) -> CaseFile {
+    let mut doc: Value = serde_json::from_str(Calculator::SlurryLine.demo_json()).unwrap();
+    for (k, v) in changes {
+        doc["inputs"][*k] = v.clone();
+    }
+    if let Some(e) = elements {
+        doc["elements"] = e;
+    }
+    CaseFile::from_json(&doc.to_string()).unwrap()
+}
+
+fn slurry_map(c: &CaseFile) -> Map {
+    let sources: Vec<EntrySource<'_>> = c.elements.iter().map(EntrySource).collect();
+    let refs: Vec<&dyn clearbore::physics::form::FieldSource> = sources.iter().map(|s| s as _).collect();
+    Calculator::SlurryLine.map(&EntrySource(&c.inputs), &refs).unwrap().unwrap()
+}
+
+fn is_swept(e: &clearbore::case::Entries) -> bool {
+    let Some(clearbore::case::Entry::Choice(k)) = e.get("kind") else { panic!("an element without a kind") };
+    let i = clearbore::physics::slurry::ELEMENT_KIND.index_of(k).unwrap();
+    swept(ElementKind::ALL[i])
+}
+
+/// The case at flow `q` with every tubing and coil element at bore `b` (SI).
+fn slurry_point(c: &CaseFile, q: f64, b: f64) -> CaseFile {
+    let mut point = c.clone();
+    point.inputs.insert("flow".into(), clearbore::case::Entry::Quantity { value: q * 60e6, unit: "mL/min".into(), range: None });
+    for e in &mut point.elements {
+        if is_swept(e) {
+            e.insert("inner_diameter".into(), clearbore::case::Entry::Quantity { value: b * 1e3, unit: "mm".into(), range: None });
+        }
+    }
+    point
+}
+
+/// The verdict over the checks the map colours by (each element's settling and clogging, the
+/// pressure budget) and the first check, in the report's order, that has it (`None` when fine).
+fn map_checks(report: &clearbore::physics::report::Report) -> (Verdict, Option<&'static str>) {
+    let on_map = |k: &str| k == "pressure_budget" || (k.starts_with("element_") && (k.ends_with("_settling") || k.ends_with("_clogging")));
+    let checks: Vec<_> = report.checks.iter().filter(|c| on_map(c.key)).collect();
+    let worst = checks.iter().map(|c| c.verdict).max().unwrap();
+    let first = checks.iter().find(|c| c.verdict == worst).unwrap();
+    (worst, (worst != Verdict::Fine).then_some(first.topic))
+}
+
+/// Compares cell `(ix, iy)` of `map` with the point evaluation; the verdict it has.
+fn slurry_cell_equals_point(c: &CaseFile, map: &Map, ix: usize, iy: usize) -> Option<Verdict> {
+    let (q, b) = (map.x.values[ix], map.y.values[iy]);
+    let i = map.index(ix, iy);
+    let Ok(report) = slurry_point(c, q, b).evaluate() else {
+        assert_eq!(map.verdicts[i], None, "a cell the point refuses at {q} m³/s, {b} m");
+        return None;
+    };
+    let (worst, limit) = map_checks(&report);
+    assert_eq!(map.verdicts[i], Some(worst), "verdict at flow {q} m³/s, bore {b} m");
+    assert_eq!(map.limit(i), limit, "limiting check at flow {q} m³/s, bore {b} m");
+    let inlet = report.figure("inlet_pressure").unwrap().value.get();
+    let drop = report.figure("total_pressure_drop").unwrap().value.get();
+    assert!((map.layers[2].values[i] / inlet - 1.0).abs() < 1e-12, "inlet at {ix},{iy}");
+    assert!((map.layers[1].values[i] / drop - 1.0).abs() < 1e-12, "drop at {ix},{iy}");
+    Some(worst)
+}
+
+/// Sampled cells on a coarse grid and on both sides of every boundary met along sampled rows and
+/// columns (at most `near` pairs) equal the point evaluations; returns (grid cells, boundary cells).
+fn slurry_cells_equal_points(c: &CaseFile, near: usize) -> (usize, usize) {
+    let map = slurry_map(c);
+    let n = map.x.values.len();
+    assert_eq!(map.verdicts.len(), n * n);
+    let mut seen = std::collections::BTreeSet::new();
+    let mut grid = 0;
+    for iy in (0..n).step_by(37) {
+        for ix in (0..n).step_by(41) {
+            if let Some(v) = slurry_cell_equals_point(c, &map, ix, iy) {
+                seen.insert(v);
+                grid += 1;
+            }
+        }
+    }
+    // Boundaries: neighbouring cells of different verdict or limiting check, along rows and columns.
+    let mut pairs = Vec::new();
+    for iy in (0..n).step_by(15) {
+        for ix in 0..n - 1 {
+            let (a, b) = (map.index(ix, iy), map.index(ix + 1, iy));
+            if map.verdicts[a] != map.verdicts[b] || map.limiting[a] != map.limiting[b] {
+                pairs.push(((ix, iy), (ix + 1, iy)));
+            }
+        }
+    }
+    for ix in (0..n).step_by(15) {
+        for iy in 0..n - 1 {
+            let (a, b) = (map.index(ix, iy), map.index(ix, iy + 1));
+            if map.verdicts[a] != map.verdicts[b] || map.limiting[a] != map.limiting[b] {
+                pairs.push(((ix, iy), (ix, iy + 1)));
+            }
+        }
+    }
+    let step = (pairs.len() / near.max(1)).max(1);
+    let mut boundary = 0;
+    for (a, b) in pairs.iter().step_by(step).take(near) {
+        slurry_cell_equals_point(c, &map, a.0, a.1);
+        slurry_cell_equals_point(c, &map, b.0, b.1);
+        boundary += 2;
+    }
+    assert!(seen.len() >= 2, "the sampled cells should cross a boundary: {seen:?}");
+    (grid, boundary)
+}
+
+#[test]
+fn slurry_map_cells_equal_point_evaluations_for_the_demo_line() {
+    // The demo: 1.6 mm tubing and coil (one run upwards), a 0.5 mm fitting and a 0.25 mm seat
+    // kept as entered, d90 60 µm, 20 bar rating.
+    let (grid, boundary) = slurry_cells_equal_points(&slurry_case(&[], None), 15);
+    println!("{grid} grid cells, {boundary} at boundaries");
+    assert!(grid >= 30 && boundary >= 20, "{grid} grid cells, {boundary} at boundaries");
+}
+
+#[test]
+fn slurry_map_cells_equal_point_evaluations_for_a_tubing_only_line_with_one_size() {
+    // Tubing and a coil alone (up, down, a short horizontal run), one 10 µm size, 5 wt %:
+    // settling and pressure draw boundaries, and fine cells exist.
+    let elements = json!([
+        {"kind": "tubing", "orientation": "up", "inner_diameter": {"value": 1.0, "unit": "mm"}, "length": {"value": 0.5, "unit": "m"}},
+        {"kind": "coil", "orientation": "down", "inner_diameter": {"value": 1.0, "unit": "mm"}, "length": {"value": 2, "unit": "m"}},
+        {"kind": "tubing", "orientation": "horizontal", "inner_diameter": {"value": 1.0, "unit": "mm"}, "length": {"value": 0.05, "unit": "m"}}
+    ]);
+    let c = slurry_case(&[("size_mode", json!("single")), ("particle_size", json!({"value": 10, "unit": "µm"}))], Some(elements));
+    let (grid, boundary) = slurry_cells_equal_points(&c, 15);
+    println!("{grid} grid cells, {boundary} at boundaries");
+    assert!(grid >= 30 && boundary >= 20, "{grid} grid cells, {boundary} at boundaries");
+    let map = slurry_map(&c);
+    // Cells by verdict and limiting check.
+    let mut counts = std::collections::BTreeMap::new();
+    for i in 0..map.verdicts.len() {
+        *counts.entry((map.verdicts[i], map.limit(i))).or_insert(0) += 1;
+    }
+    println!("{counts:?}");
+    for v in [Verdict::Fine, Verdict::Caution, Verdict::Problem] {
+        assert!(map.verdicts.contains(&Some(v)), "no {v:?} cell: {counts:?}");
+    }
+}
+
+#[test]
+fn slurry_map_marks_the_case_and_its_cell_has_the_reports_verdict() {
+    let c = slurry_case(&[], None);
+    let map = slurry_map(&c);
+    // Demo: 2 mL/min, every tubing and coil 1.6 mm; axes 0.05–50 mL/min, 0.25–4 mm.
+    assert!((map.current.0 - 2e-6 / 60.0).abs() < 1e-15 && (map.current.1 - 1.6e-3).abs() < 1e-15);
+    assert!((map.x.values[0] - 0.05e-6 / 60.0).abs() < 1e-18 && (map.x.values.last().unwrap() - 50e-6 / 60.0).abs() < 1e-15);
+    assert!((map.y.values[0] - 0.25e-3).abs() < 1e-15 && (map.y.values.last().unwrap() - 4e-3).abs() < 1e-15);
+    let (ix, iy) = (map.x.nearest(map.current.0), map.y.nearest(map.current.1));
+    let report = c.evaluate().unwrap();
+    let (worst, limit) = map_checks(&report);
+    let i = map.index(ix, iy);
+    assert_eq!(map.verdicts[i], Some(worst));
+    assert_eq!(map.limit(i), limit);
+    // The case's line verdict is no milder than the map's (the report adds the tubing and liquid checks).
+    assert!(report.check("line_verdict").unwrap().verdict >= worst);
+}
+
+#[test]
+fn slurry_map_needs_a_tubing_or_coil_element() {
+    let elements = json!([{"kind": "fitting", "orientation": "horizontal", "inner_diameter": {"value": 0.5, "unit": "mm"}, "length": {"value": 5, "unit": "mm"}}]);
+    let c = slurry_case(&[], Some(elements));
+    let sources: Vec<EntrySource<'_>> = c.elements.iter().map(EntrySource).collect();
+    let refs: Vec<&dyn clearbore::physics::form::FieldSource> = sources.iter().map(|s| s as _).collect();
+    assert!(Calculator::SlurryLine.map(&EntrySource(&c.inputs), &refs).is_none());
+}
+
+/// Native time of the 256² slurry map (printed; run with `--profile bench` for the optimised figure).
+#[test]
+fn slurry_map_time() {
+    let c = slurry_case(&[], None);
+    let sources: Vec<EntrySource<'_>> = c.elements.iter().map(EntrySource).collect();
+    let refs: Vec<&dyn clearbore::physics::form::FieldSource> = sources.iter().map(|s| s as _).collect();
+    let mut best = f64::INFINITY;
+    for _ in 0..10 {
+        let t = std::time::Instant::now();
+        let map = Calculator::SlurryLine.map(&EntrySource(&c.inputs), &refs).unwrap().unwrap();
+        best = best.min(t.elapsed().as_secs_f64() * 1e3);
+        assert_eq!(map.verdicts.len(), 256 * 256);
+    }
+    println!("slurry map 256 × 256 (demo line, 5 elements): best of 10 {best:.2} ms");
 }

@@ -64,6 +64,12 @@ pub struct Map {
     pub verdicts: Vec<Option<Verdict>>,
     /// Values behind the verdicts, per cell.
     pub layers: Vec<MapLayer>,
+    /// Names of the checks that can set a cell's verdict (empty when the map does not name them).
+    pub limit_names: Vec<String>,
+    /// Per cell (in the order of [`Map::verdicts`]), the index in [`Map::limit_names`] of the
+    /// check that sets a caution or problem (the first of the worst, in the report's order);
+    /// `None` for a fine or uncomputed cell. Empty when the map does not name them.
+    pub limiting: Vec<Option<usize>>,
     /// The case's own entries (SI): where it sits on the map.
     pub current: (f64, f64),
 }
@@ -72,5 +78,10 @@ impl Map {
     /// The cell index of column `ix` and row `iy`.
     pub fn index(&self, ix: usize, iy: usize) -> usize {
         iy * self.x.values.len() + ix
+    }
+
+    /// The name of the check that limits cell `i`, where the map names them.
+    pub fn limit(&self, i: usize) -> Option<&str> {
+        self.limiting.get(i).copied().flatten().and_then(|k| self.limit_names.get(k)).map(String::as_str)
     }
 }

@@ -149,6 +149,14 @@ impl FieldSource for FormState {
     }
 }
 
+/// The folded map's heading for a calculator with a map.
+const fn map_title(calculator: Calculator) -> &'static str {
+    match calculator {
+        Calculator::SlurryLine => "Operating map: where this line works (flow × tubing bore)",
+        _ => "Operating map: where this cartridge works (flow × particle size)",
+    }
+}
+
 /// One element of a line on the page: a stable id (for the list) and its entries.
 #[derive(Debug, Clone, PartialEq)]
 pub struct ElementForm {
@@ -380,6 +388,7 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
     let map_open = RwSignal::new(false);
     let pick = {
         let main = form.main.clone();
+        let elements = form.elements;
         Callback::new(move |(x, y): (f64, f64)| {
             let fields = map.with_untracked(|m: &Option<crate::physics::map::Map>| m.as_ref().map(|m| (m.x.field, m.y.field)));
             if let Some((fx, fy)) = fields {
@@ -387,6 +396,16 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                 for (key, si) in [(fx, x), (fy, y)] {
                     if shown.contains(&key) {
                         main.set_si(key, si);
+                    } else if key == crate::physics::slurry::ELEMENT_INNER_DIAMETER.key && calculator == Calculator::SlurryLine {
+                        // The slurry map's bore axis: every tubing and coil element takes the bore.
+                        elements.with_untracked(|list| {
+                            for e in list {
+                                let kind = e.state.choice(&crate::physics::slurry::ELEMENT_KIND).ok().and_then(|k| crate::physics::slurry::ElementKind::ALL.get(k).copied());
+                                if kind.is_some_and(crate::physics::slurry::map::swept) {
+                                    e.state.set_si(key, si);
+                                }
+                            }
+                        });
                     }
                 }
             }
@@ -394,6 +413,7 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
     };
     if calculator.has_map() {
         let main = form.main.clone();
+        let form_elements = form.elements;
         let later = super::Later::new();
         Effect::new(move |_| {
             if !map_open.get() || outcome.with(|o| o.stale) {
@@ -401,7 +421,14 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
             }
             report.track();
             let main = main.clone();
-            later.run(std::time::Duration::from_millis(150), move || map.set(untrack(|| calculator.map(&main).and_then(Result::ok))));
+            let elements = form_elements;
+            later.run(std::time::Duration::from_millis(150), move || {
+                map.set(untrack(|| {
+                    let list = elements.get_untracked();
+                    let sources: Vec<&dyn FieldSource> = list.iter().map(|e| &e.state as &dyn FieldSource).collect();
+                    calculator.map(&main, &sources).and_then(Result::ok)
+                }));
+            });
         });
     }
     let line = Memo::new(move |_| report.with(|r| r.as_ref().and_then(line_of)));
@@ -546,7 +573,7 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                     <h3>"Checks"</h3>
                     <CheckList report=report wanted=main_checks />
                     <AdviceView report=report wanted=shared_advice select=select />
-                    {calculator.has_map().then(|| view! { <MapView map=map pick=pick open=map_open title="Operating map: where this cartridge works (flow × particle size)" /> })}
+                    {calculator.has_map().then(|| view! { <MapView map=map pick=pick open=map_open title=map_title(calculator) /> })}
                     <h3>"Results"</h3>
                     <ResultTable report=report keys=main_figures />
                     <PlotList report=report />

@@ -47,7 +47,8 @@ fn cell_words(map: &Map, ix: usize, iy: usize) -> String {
         None => format!("{at}: not computed here"),
         Some(v) => {
             let values: Vec<String> = map.layers.iter().map(|l| format!("{} {}", l.label, l.dimension.show(l.values[i], 3))).collect();
-            format!("{at}: {} — {}", v.word(), values.join("; "))
+            let limit = map.limit(i).map(|l| format!(" (limited by {l})")).unwrap_or_default();
+            format!("{at}: {}{limit} — {}", v.word(), values.join("; "))
         }
     }
 }

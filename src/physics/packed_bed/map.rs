@@ -108,6 +108,8 @@ pub fn cartridge_map(input: &PackedBedInput, n: usize) -> Map {
             MapLayer { label: "Inlet pressure (gauge)", dimension: Dimension::PressureDifference, values: inlet },
             MapLayer { label: "Residence time between particles", dimension: Dimension::Duration, values: tau },
         ],
+        limit_names: Vec::new(),
+        limiting: Vec::new(),
         current: (input.flow.si(), input.particle_diameter.si()),
     }
 }

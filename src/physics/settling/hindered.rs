@@ -84,11 +84,22 @@ impl Suspension {
 
     /// Hindered settling speed by `model`, on the terminal speed of the recommended drag law.
     pub fn hindered(&self, model: HinderedModel) -> Result<Hindered, NumericalError> {
-        let terminal = SettlingModel::recommended(self.particle.sphericity).terminal_velocity(&self.particle).map_err(|_| SOLVE_FAILURE)?;
+        Ok(self.hindered_on(self.terminal()?, model))
+    }
+
+    /// The single particle's terminal speed by the recommended drag law (it does not depend on
+    /// the bore or the solids fraction: a map over bores computes it once).
+    pub fn terminal(&self) -> Result<Velocity, NumericalError> {
+        SettlingModel::recommended(self.particle.sphericity).terminal_velocity(&self.particle).map_err(|_| SOLVE_FAILURE)
+    }
+
+    /// Hindered settling speed by `model` on the given `terminal` speed of this particle (from
+    /// [`Suspension::terminal`]).
+    pub fn hindered_on(&self, terminal: Velocity, model: HinderedModel) -> Hindered {
         let reynolds = self.particle.reynolds(terminal);
         let exponent = model.exponent(reynolds, self.diameter_ratio());
         let velocity = Velocity::from_si(terminal.si() * richardson_zaki::hindrance_factor(self.voidage(), exponent));
-        Ok(Hindered { terminal, reynolds, exponent, velocity })
+        Hindered { terminal, reynolds, exponent, velocity }
     }
 
     /// Inputs outside `model`'s range, at terminal Reynolds number `re`.

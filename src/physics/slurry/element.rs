@@ -85,17 +85,27 @@ fn fig(k: &ElementKey, dimension: Dimension, model: ModelInfo, value: f64, warni
     Figure::single(k.key, k.label, dimension, model, value, warnings)
 }
 
-/// What the line knows before looking at an element.
-struct Line<'a> {
-    input: &'a SlurryInput,
-    phi: f64,
-    mu_s: f64,
-    drift: Drift,
-    classes: Vec<SizeClass>,
-    largest: Length,
+/// What the line knows before looking at an element (shared with the operating map).
+pub(super) struct Line<'a> {
+    pub(super) input: &'a SlurryInput,
+    pub(super) phi: f64,
+    pub(super) mu_s: f64,
+    pub(super) drift: Drift,
+    pub(super) classes: Vec<SizeClass>,
+    pub(super) largest: Length,
 }
 
-impl Line<'_> {
+impl<'a> Line<'a> {
+    /// The line of `input`, with its suspension-viscosity figure (every model's estimate).
+    pub(super) fn new(input: &'a SlurryInput) -> Result<(Self, Figure), NumericalError> {
+        let phi = input.volume_fraction();
+        let mu_fig = viscosity::suspension_viscosity_spread(input.viscosity, phi)?;
+        let mu_s = mu_fig.value.get();
+        let largest = input.size.largest();
+        let drift = input.particle(largest).drift();
+        Ok((Line { input, phi, mu_s, drift, classes: input.size.classes(), largest }, mu_fig))
+    }
+
     /// Flow at which a tube of bore `d` reaches the laminar limit (Re = 2000 with the suspension
     /// viscosity): the top of the range of the laminar deposition and resuspension results.
     fn laminar_flow_limit(&self, d: f64) -> f64 {
@@ -116,9 +126,13 @@ impl Line<'_> {
 
     /// Hindered settling speed (Richardson–Zaki on the recommended drag law) of particles of
     /// diameter `d` in a passage of bore `bore`.
-    fn hindered(&self, d: Length, bore: Length) -> Result<f64, NumericalError> {
-        let s = Suspension { particle: self.input.particle(d), solids_fraction: self.phi, tube_diameter: bore };
-        Ok(s.hindered(HinderedModel::RichardsonZaki)?.velocity.si())
+    pub(super) fn hindered(&self, d: Length, bore: Length) -> Result<f64, NumericalError> {
+        Ok(self.suspension(d, bore).hindered(HinderedModel::RichardsonZaki)?.velocity.si())
+    }
+
+    /// Particles of diameter `d` at the line's solids fraction in a passage of bore `bore`.
+    pub(super) fn suspension(&self, d: Length, bore: Length) -> Suspension {
+        Suspension { particle: self.input.particle(d), solids_fraction: self.phi, tube_diameter: bore }
     }
 
     fn delta_rho(&self) -> f64 {
@@ -128,7 +142,7 @@ impl Line<'_> {
 
 /// Mass fraction deposited in a horizontal element over the classes, for speeds `speeds` (one per
 /// class), at mean velocity `u`.
-fn deposited_mass_fraction(classes: &[SizeClass], speeds: &[f64], e: &LineElement, u: f64) -> f64 {
+pub(super) fn deposited_mass_fraction(classes: &[SizeClass], speeds: &[f64], e: &LineElement, u: f64) -> f64 {
     classes
         .iter()
         .zip(speeds)
@@ -141,6 +155,74 @@ fn deposited_mass_fraction(classes: &[SizeClass], speeds: &[f64], e: &LineElemen
 /// the element: 1 − (1 − η)ⁿ (the reservoir is stirred, so every pass starts uniform).
 pub fn over_passes(per_pass: f64, passes: u32) -> f64 {
     1.0 - (1.0 - per_pass).powf(f64::from(passes))
+}
+
+/// Settling verdict of a horizontal element from the mass fraction reaching the wall `eta` and
+/// the d90 Shields number `theta`: fine below 1 %, caution below 10 % or while the layer is
+/// pushed along, a problem otherwise.
+pub(super) fn horizontal_verdict(eta: f64, theta: f64) -> Verdict {
+    if eta < DEPOSIT_CAUTION {
+        Verdict::Fine
+    } else if theta > shields::CRITICAL_SHIELDS || eta < DEPOSIT_PROBLEM {
+        Verdict::Caution
+    } else {
+        Verdict::Problem
+    }
+}
+
+/// Settling verdict of an up-flow element: a problem when the d90 particles are not `carried`
+/// or pack (`holdup` at the maximum packing), caution below the margin U ≥ 5 v_h.
+pub(super) fn up_flow_verdict(carried: bool, holdup: f64, u: f64, v90: f64) -> Verdict {
+    if !carried || holdup >= krieger_dougherty::MAX_PACKING {
+        Verdict::Problem
+    } else if u < UPFLOW_MARGIN * v90 {
+        Verdict::Caution
+    } else {
+        Verdict::Fine
+    }
+}
+
+/// Clogging verdict of a passage from its passage-to-d90 ratio and the solids fraction.
+pub(super) fn clogging_verdict(ratio: f64, phi: f64) -> Verdict {
+    match clogging::risk(ratio) {
+        clogging::ClogRisk::Sieving | clogging::ClogRisk::Bridging => Verdict::Problem,
+        clogging::ClogRisk::SmallMargin => Verdict::Caution,
+        clogging::ClogRisk::Clear if phi > clogging::CONCENTRATED_FRACTION => Verdict::Caution,
+        clogging::ClogRisk::Clear => Verdict::Fine,
+    }
+}
+
+/// Pressure-budget verdict from the inlet pressure (recommended viscosity model), the
+/// back-pressure, the highest line drop over the viscosity models and the rating (all gauge).
+pub(super) fn pressure_verdict(inlet: f64, back: f64, worst_drop: f64, rating: f64) -> Verdict {
+    budget_verdict(inlet / rating, (back + worst_drop) / rating)
+}
+
+/// How the particles move relative to an element of orientation `o`: particles lighter than the
+/// liquid rise, so up-flow then carries them ahead (as down-flow does sinking ones) and down-flow
+/// holds them back.
+pub(super) fn effective_orientation(o: Orientation, drift: Drift) -> Orientation {
+    match (o, drift) {
+        (Orientation::Up, Drift::Rises) => Orientation::Down,
+        (Orientation::Down, Drift::Rises) => Orientation::Up,
+        (o, _) => o,
+    }
+}
+
+/// Line pressure drop at `flow` with the suspension viscosity `mu_s`: Hagen–Poiseuille summed over
+/// the elements in flow order, frits left out.
+pub(super) fn line_drop(elements: &[LineElement], mu_s: f64, flow: VolumetricFlow) -> f64 {
+    elements
+        .iter()
+        .filter(|e| e.kind != ElementKind::Frit)
+        .map(|e| hagen_poiseuille::pressure_drop(DynamicViscosity::from_si(mu_s), e.length, e.inner_diameter, flow).si())
+        .sum::<f64>()
+}
+
+/// The line drop `total` (recommended viscosity `mu_s`) for the viscosity model of estimate `m`:
+/// Hagen–Poiseuille is linear in μ, so the total scales (the recommended one is `total` itself).
+pub(super) fn drop_for_model(total: f64, m: &Estimate, mu_s: f64) -> f64 {
+    if m.recommended { total } else { total * m.value.get() / mu_s }
 }
 
 struct ElementResult {
@@ -209,13 +291,7 @@ fn horizontal(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<
     figures.push(fig(&keys::SHIELDS_NUMBER[i], Dimension::Number, shields::INFO, theta, Vec::new())?);
 
     let moving = theta > shields::CRITICAL_SHIELDS;
-    let verdict = if eta < DEPOSIT_CAUTION {
-        Verdict::Fine
-    } else if moving || eta < DEPOSIT_PROBLEM {
-        Verdict::Caution
-    } else {
-        Verdict::Problem
-    };
+    let verdict = horizontal_verdict(eta, theta);
     let tau = e.length.si() / u;
     let mut reason = format!(
         "Horizontal {}: d90 particles fall across the {} mm bore in {} s (v_h = {} mm/s, Richardson–Zaki on the recommended drag law) against a liquid residence time of {} s (Z = {}); {} % of the solids reach the wall{} (Thomas/Fuchs laminar formula, integrated over the size distribution). Laminar Shields number {} for d90: {} (θ_c ≈ 0.12, Ouriemi et al. 2009, from memory).",
@@ -343,13 +419,7 @@ fn up_flow(line: &Line, i: usize, e: &LineElement, u: f64, figures: &mut Vec<Fig
     if holdup <= 1.0 {
         figures.push(fig(&keys::SOLIDS_HOLDUP[i], Dimension::Fraction, vertical::INFO, holdup, Vec::new())?);
     }
-    let verdict = if carried.is_none() || holdup >= krieger_dougherty::MAX_PACKING {
-        Verdict::Problem
-    } else if u < UPFLOW_MARGIN * v90 {
-        Verdict::Caution
-    } else {
-        Verdict::Fine
-    };
+    let verdict = up_flow_verdict(carried.is_some(), holdup, u, v90);
     let reason = match carried {
         Some(s) => format!(
             "Up-flow {}: U = {} mm/s against v_h = {} mm/s for d90 (Richardson–Zaki); the particles travel at {} mm/s and stay {} s against the liquid's {} s; the solids fraction rises from {} to {} %; the liquid near the wall is slower than v_h over {} % of the bore, where particles slide back (margin U ≥ 5 v_h: common practice, no source).",
@@ -486,12 +556,7 @@ fn clogging_check(line: &Line, i: usize, e: &LineElement, figures: &mut Vec<Figu
     figures.push(fig(&keys::PASSAGE_RATIO[i], Dimension::Number, clogging::INFO, ratio, Vec::new())?);
     let risk = clogging::risk(ratio);
     let concentrated = line.phi > clogging::CONCENTRATED_FRACTION;
-    let verdict = match risk {
-        clogging::ClogRisk::Sieving | clogging::ClogRisk::Bridging => Verdict::Problem,
-        clogging::ClogRisk::SmallMargin => Verdict::Caution,
-        clogging::ClogRisk::Clear if concentrated => Verdict::Caution,
-        clogging::ClogRisk::Clear => Verdict::Fine,
-    };
+    let verdict = clogging_verdict(ratio, line.phi);
     let what = match risk {
         clogging::ClogRisk::Sieving if e.kind == ElementKind::Frit => "the frit retains these particles: it works as a filter and will block",
         clogging::ClogRisk::Sieving => "particles larger than the opening cannot pass (sieving)",
@@ -585,11 +650,7 @@ fn element(line: &Line, i: usize, e: &LineElement, figures: &mut Vec<Figure>, ch
         let suspension = Suspension { particle: input.particle(line.largest), solids_fraction: line.phi, tube_diameter: e.inner_diameter };
         figures.push(hindered_velocity_spread(&suspension, keys::HINDERED_VELOCITY[i].key, keys::HINDERED_VELOCITY[i].label)?);
         // Particles lighter than the liquid rise: up-flow then carries them ahead, down-flow holds them back.
-        let effective = match (e.orientation, line.drift) {
-            (Orientation::Up, Drift::Rises) => Orientation::Down,
-            (Orientation::Down, Drift::Rises) => Orientation::Up,
-            (o, _) => o,
-        };
+        let effective = effective_orientation(e.orientation, line.drift);
         let (v, mut r) = match effective {
             Orientation::Horizontal => horizontal(line, i, e, u, figures, advice)?,
             Orientation::Up => up_flow(line, i, e, u, figures, advice)?,
@@ -641,7 +702,7 @@ fn pressure_check(inlet: f64, total: &Figure, back: f64, rating: f64) -> Check {
     let bar = |p: f64| format_significant(p / 1e5, 3);
     let ratio = inlet / rating;
     let (_, worst) = total.spread();
-    let verdict = budget_verdict(ratio, (back + worst) / rating);
+    let verdict = pressure_verdict(inlet, back, worst, rating);
     let note = budget_note(verdict, ": over the rating");
     Check {
         key: "pressure_budget",
@@ -662,12 +723,8 @@ fn pressure_check(inlet: f64, total: &Figure, back: f64, rating: f64) -> Check {
 
 /// Computes every figure and check for the slurry line.
 pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
-    let phi = input.volume_fraction();
-    let mu_fig = viscosity::suspension_viscosity_spread(input.viscosity, phi)?;
-    let mu_s = mu_fig.value.get();
-    let largest = input.size.largest();
-    let drift = input.particle(largest).drift();
-    let line = Line { input, phi, mu_s, drift, classes: input.size.classes(), largest };
+    let (line, mu_fig) = Line::new(input)?;
+    let (phi, mu_s, largest, drift) = (line.phi, line.mu_s, line.largest, line.drift);
 
     let mut figures = input.liquid.figures()?;
     figures.push(input.solid.figure(true, input.density)?);
@@ -707,12 +764,7 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
     }
 
     // Hagen–Poiseuille is linear in μ: the total for each viscosity model scales the recommended one.
-    let total = input
-        .elements
-        .iter()
-        .filter(|e| e.kind != ElementKind::Frit)
-        .map(|e| hagen_poiseuille::pressure_drop(DynamicViscosity::from_si(mu_s), e.length, e.inner_diameter, input.flow).si())
-        .sum::<f64>();
+    let total = line_drop(&input.elements, mu_s, input.flow);
     let estimates = mu_fig
         .estimates
         .iter()
@@ -720,7 +772,7 @@ pub fn evaluate(input: &SlurryInput) -> Result<Report, NumericalError> {
             Ok(Estimate {
                 model: m.model,
                 // The recommended estimate is the figure's value itself, not the same to the last bit.
-                value: Finite::new("line pressure drop", if m.recommended { total } else { total * m.value.get() / mu_s })?,
+                value: Finite::new("line pressure drop", drop_for_model(total, m, mu_s))?,
                 recommended: m.recommended,
                 warnings: m.warnings.clone(),
             })

@@ -9,6 +9,7 @@ pub mod element;
 pub mod fuchs_thomas;
 pub mod keys;
 pub mod krieger_dougherty;
+pub mod map;
 pub mod oroskar_turian;
 pub mod plots;
 pub mod series;
