@@ -26,11 +26,13 @@ async fn smoke(engine: Engine) {
         b.wait_for(&format!("[data-testid=panel-{tab}] [data-testid=verdict-{verdict}]")).await;
     }
     b.wait_for("[data-testid=panel-segmented_flow] canvas").await;
+    // A chart is drawn once on screen (an intersection observer, in every engine): bring it there.
+    b.js("document.querySelector('[data-testid=panel-segmented_flow] canvas').scrollIntoView(); return true;").await;
     let drawn = b
-        .js("const c = document.querySelector('[data-testid=panel-segmented_flow] canvas'); \
+        .js_when("const c = document.querySelector('[data-testid=panel-segmented_flow] canvas'); \
              const d = c.getContext('2d').getImageData(0, 0, c.width, c.height).data; \
              let ink = 0; for (let i = 0; i < d.length; i += 4) { if (d[i + 3] > 0 && (d[i] < 200 || d[i + 1] < 200)) ink++; } \
-             return ink;")
+             return ink;", |v| v.as_u64().is_some_and(|ink| ink > 500))
         .await;
     assert!(drawn.as_u64().unwrap() > 500, "{engine:?}: chart not drawn ({drawn})");
     b.screenshot(&format!("{name}-gas-liquid")).await;
