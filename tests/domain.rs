@@ -11,7 +11,7 @@ use clearbore::physics::report::{Report, Verdict};
 use clearbore::physics::settling::drag::SettlingModel;
 use clearbore::physics::settling::hindered::{HinderedModel, Suspension};
 use clearbore::physics::settling::{Particle, clift_grace_weber};
-use clearbore::physics::units::{Density, DynamicViscosity, Length, Unit};
+use clearbore::physics::units::{Density, Dimension, DynamicViscosity, Length, Unit};
 use proptest::prelude::*;
 use proptest::test_runner::TestCaseError;
 
@@ -19,7 +19,7 @@ mod common;
 use common::strategies::entries;
 
 /// A value in SI anywhere in `allowed`: log-uniform over the decades when the range spans more than
-/// two of them (from 10⁻⁹ of the top when the bottom is zero: see the README for what lies below),
+/// two of them (from 10⁻⁹ of the top where zero is the bottom: a back-pressure, a share),
 /// linear otherwise, and the ends themselves when they are allowed.
 fn si_value(allowed: Allowed) -> BoxedStrategy<f64> {
     let low = allowed.low;
@@ -715,4 +715,58 @@ fn a_down_flow_bed_with_its_inlet_below_ambient_keeps_a_consistent_budget() {
 fn a_coil_gives_the_same_outcome_whichever_units_hold_it() {
     let case = CaseFile::from_json(r#"{"clearbore_case": 2, "title": "", "calculator": "segmented_flow", "inputs": {"ambient_pressure": {"value": 103.52000159115752, "unit": "kPa"}, "back_pressure": {"value": 1e-05, "unit": "bar"}, "concentration": {"value": 15.0, "unit": "mol/L"}, "consumed_fraction": {"value": 0.0, "unit": "%"}, "consumption": "none", "diffusivity": {"value": 0.004999999999999999, "unit": "cm²/s"}, "gas": "oxygen", "gas_flow": {"value": 15116.109676876777, "unit": "mL/min"}, "gas_mole_fraction": {"value": 50.0, "unit": "%"}, "inner_diameter": {"value": 85.22656095498282, "unit": "mm"}, "junction": "tee", "junction_width": {"value": 100.0, "unit": "mm"}, "length": {"value": 256714.92037945142, "unit": "mm"}, "limiting_oxygen": {"value": 0.5, "unit": "%"}, "liquid_density": {"value": 0.3, "unit": "g/mL"}, "liquid_flow": {"value": 6.92892899625142e-05, "unit": "mL/min"}, "liquid_surface_tension": {"value": 500.0, "unit": "mN/m"}, "liquid_viscosity": {"value": 5000.0, "unit": "mPa·s"}, "loc_source": "typical", "pressure_rating": {"value": 500.0, "unit": "bar"}, "reference_pressure": {"value": 471.10218091232673, "unit": "bar"}, "reference_state": "user_defined", "reference_temperature": {"value": 59.79675904931605, "unit": "°C"}, "solubility": {"value": 15.0, "unit": "mol/L"}, "solubility_source": "built_in", "solvent": "thf", "temperature": {"value": -99.99999999999997, "unit": "°C"}, "tubing_material": "none", "tubing_size": "1_16x0_010"}}"#).unwrap();
     common(&case, &[10, 0, 0, 0, 0, 0, 0, 0]).unwrap();
+}
+
+/// Found by the domain properties sampled below 10⁻⁹ of each field's largest value: a tubular
+/// reactor with a rating of 8×10⁻²⁸⁴ bar behind a drop of 7×10⁷⁷ bar said its inlet was "inf %"
+/// of the rating. Every field now has a smallest value (`input::lab`): such a rating is refused at
+/// its field, and the worst corner left (the smallest rating behind the narrowest bore, the
+/// longest tube, the most viscous liquid and the largest flow) states a finite share.
+#[test]
+fn a_rating_of_next_to_nothing_is_refused_and_the_smallest_states_a_finite_share() {
+    let demo: serde_json::Value = serde_json::from_str(Calculator::TubularReactor.demo_json()).unwrap();
+    let with = |changes: &[(&str, serde_json::Value)]| {
+        let mut case = demo.clone();
+        for (k, v) in changes {
+            case["inputs"][*k] = v.clone();
+        }
+        CaseFile::from_json(&case.to_string()).unwrap().evaluate()
+    };
+    let q = |value: f64, unit: &str| serde_json::json!({"value": value, "unit": unit});
+    match with(&[("pressure_rating", q(8.36e-284, "bar"))]) {
+        Err(CaseError::Inputs(errors)) => assert!(errors.iter().any(|e| e.field == "pressure_rating"), "{errors:?}"),
+        other => panic!("{other:?}"),
+    }
+    let report = with(&[
+        ("pressure_rating", q(1.0, "Pa")),
+        ("inner_diameter", q(0.01, "µm")),
+        ("length", q(1000.0, "m")),
+        ("flow", q(1000.0, "mL/min")),
+        ("liquid", serde_json::json!("custom")),
+        ("viscosity", q(10.0, "Pa·s")),
+    ])
+    .unwrap();
+    report_is_sound(&report).unwrap();
+    let budget = report.check("pressure_budget").unwrap();
+    assert_eq!(budget.verdict, Verdict::Problem);
+    assert!(stated_share_of_rating(&budget.reason).is_some_and(|s| s.is_finite() && s > 1e20), "{}", budget.reason);
+    assert!(!budget.reason.contains("inf"), "{}", budget.reason);
+}
+
+/// Every field of every form has a smallest value above zero, unless zero itself is a value
+/// (a back-pressure, a share of solids) or the field is a share of one, so that no entry can be so small that what follows
+/// from it overflows; the domain properties above draw each field up to both its ends.
+#[test]
+fn every_field_has_a_smallest_value() {
+    for c in Calculator::ALL {
+        let layouts = std::iter::once(c.layout()).chain(c.element_layout());
+        for item in layouts.flatten() {
+            if let FormItem::Field(f) = item {
+                let a = f.allowed;
+                // Fractions and sphericities above zero stay shares: their products shrink, never overflow.
+                let share = matches!(f.dimension, Dimension::Fraction | Dimension::Number) && a.high.is_some_and(|h| h <= 1.0);
+                assert!(a.low > 0.0 || a.low_inclusive || share, "{}: {} has no smallest value: {a:?}", c.key(), f.key);
+            }
+        }
+    }
 }
