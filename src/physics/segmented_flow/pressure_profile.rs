@@ -372,8 +372,10 @@ impl Coil {
     /// The fixed point on the inlet pressure, started from `guess` (Pa absolute; the outlet
     /// pressure when `None`): the inlet pressure sets the bubble frequency at the junction, the
     /// frequency the pressure drop (Brent between two iterates that bracket it, where the plain
-    /// iteration swings). Returns the settled frequency and the iterations taken.
-    fn settle(&self, guess: Option<f64>) -> Result<(f64, u32), SegmentedFlowError> {
+    /// iteration swings). Returns the frequency of the last march, the iterations taken and that
+    /// march (recorded with `record`), whose inlet pressure is within 10⁻⁹ of the one its
+    /// frequency was set at: the fixed point to its tolerance, without marching once more.
+    fn settle(&self, guess: Option<f64>, record: bool) -> Result<(f64, u32, March), SegmentedFlowError> {
         if self.gas_at(0.0) <= 0.0 {
             return Err(SegmentedFlowError::GasExhausted);
         }
@@ -386,45 +388,44 @@ impl Coil {
         let mut before = None;
         loop {
             iterations += 1;
-            let next = self.march(frequency, false)?.last[0];
-            let settled = (next - p_in).abs() <= 1e-9 * next;
+            let march = self.march(frequency, record)?;
+            let next = march.last[0];
+            if (next - p_in).abs() <= 1e-9 * next {
+                return Ok((frequency, iterations, march));
+            }
             // Where the plain iteration swings between two pressures on either side of the fixed
             // point (drops of hundreds of bar, where the bubble frequency reacts strongly to the
             // inlet pressure), the two bracket it: solve p = march(p) there with Brent.
             // If that fails (the march breaks down somewhere between them), the plain iteration
             // goes on.
-            if !settled && iterations >= BRACKET_AFTER && before.is_some_and(|b: f64| (next - p_in) * (p_in - b) < 0.0) {
+            if iterations >= BRACKET_AFTER && before.is_some_and(|b: f64| (next - p_in) * (p_in - b) < 0.0) {
                 let (low, high) = (p_in.min(next), p_in.max(next));
                 let gap = |p: f64| self.inlet_after(p).map_or(f64::NAN, |q| q - p);
                 if let Ok(root) = brent(gap, low, high, Tolerance { absolute: 0.0, relative: 1e-10, max_iterations: 100 }) {
-                    return Ok((self.junction_cell(root)?.frequency(), iterations));
+                    let frequency = self.junction_cell(root)?.frequency();
+                    return Ok((frequency, iterations, self.march(frequency, record)?));
                 }
             }
             before = Some(p_in);
             p_in = next;
             frequency = self.junction_cell(p_in)?.frequency();
-            if settled {
-                return Ok((frequency, iterations));
-            }
             if iterations >= MAX_INLET_ITERATIONS {
                 return Err(SegmentedFlowError::NoConvergence { quantity: "inlet pressure", iterations });
             }
         }
     }
 
-    /// Pressure drop over the coil, Pa: the same fixed point and final integration as
-    /// [`Coil::profile`] without the series, started from `guess` (e.g. another model's inlet
-    /// pressure); the fixed point ends within its tolerance (10⁻⁹ of the inlet pressure) of the
-    /// one reached from the outlet pressure.
+    /// Pressure drop over the coil, Pa: the same fixed point as [`Coil::profile`] without the
+    /// series, started from `guess` (e.g. another model's inlet pressure); it ends within its
+    /// tolerance (10⁻⁹ of the inlet pressure) of the one reached from the outlet pressure.
     pub fn pressure_drop(&self, guess: Option<f64>) -> Result<f64, SegmentedFlowError> {
-        let (frequency, _) = self.settle(guess)?;
-        Ok(self.march(frequency, false)?.last[0] - self.outlet_pressure.pascals())
+        let (_, _, march) = self.settle(guess, false)?;
+        Ok(march.last[0] - self.outlet_pressure.pascals())
     }
 
-    /// Integrates the profile: fixed point on the inlet pressure, then the recorded march.
+    /// Integrates the profile: the fixed point on the inlet pressure, its last march recorded.
     pub fn profile(&self) -> Result<Profile, SegmentedFlowError> {
-        let (frequency, iterations) = self.settle(None)?;
-        let March { last, states, xs } = self.march(frequency, true)?;
+        let (frequency, iterations, March { last, states, xs }) = self.settle(None, true)?;
         let l = self.length.si();
         let mut profile = Profile {
             position: Vec::new(),
