@@ -845,3 +845,14 @@ fn a_bed_nearly_full_of_liquid_gives_the_same_outcome_whichever_units_hold_it() 
     report_is_sound(&case.evaluate().unwrap()).unwrap();
     common(&case, &[0, 0, 11, 0, 0, 0, 0, 0]).unwrap();
 }
+
+/// Found by the long run of `segmented_flow_over_its_domain` (shrunk): a coil whose drop is
+/// 0.014 Pa at 533 bar. The drop came out as the difference of the inlet and outlet pressures,
+/// each integrated to 10⁻¹⁰ of itself, and differed by 10⁻⁶ between units; the march now
+/// integrates the pressure above the outlet's, to 10⁻¹⁰ of the drop.
+#[test]
+fn a_coil_with_a_drop_far_below_its_pressure_keeps_its_digits() {
+    let case = CaseFile::from_json(r#"{"clearbore_case": 2, "title": "", "calculator": "segmented_flow", "inputs": {"ambient_pressure": {"value": 0.3389704231887308, "unit": "bar"}, "back_pressure": {"value": 53274.975497511325, "unit": "kPa"}, "concentration": {"value": 1e-06, "unit": "mol/L"}, "consumed_fraction": {"value": 93.0881613227102, "unit": "%"}, "consumption": "consumed", "diffusivity": {"value": 1.0000000000000001e-11, "unit": "cm\u00b2/s"}, "gas": "carbon_monoxide", "gas_flow": {"value": 19.11538972046946, "unit": "mL/min"}, "gas_mole_fraction": {"value": 31.485373459647093, "unit": "%"}, "inner_diameter": {"value": 0.5419025096263739, "unit": "mm"}, "junction": "tee", "junction_width": {"value": 25.911710699876153, "unit": "mm"}, "length": {"value": 27.707329445832254, "unit": "mm"}, "limiting_oxygen": {"value": 0.5, "unit": "%"}, "liquid_density": {"value": 0.3, "unit": "g/mL"}, "liquid_flow": {"value": 7.441841797020922e-06, "unit": "mL/min"}, "liquid_surface_tension": {"value": 0.001, "unit": "mN/m"}, "liquid_viscosity": {"value": 9.999999999999999e-05, "unit": "mPa\u00b7s"}, "loc_source": "typical", "pressure_rating": {"value": 1e-05, "unit": "bar"}, "reference_pressure": {"value": 0.1, "unit": "bar"}, "reference_state": "normal", "reference_temperature": {"value": -49.99999999999997, "unit": "\u00b0C"}, "solubility": {"value": 1e-06, "unit": "mol/L"}, "solubility_source": "built_in", "solvent": "acetic_acid", "temperature": {"value": 209.04636494511777, "unit": "\u00b0C"}, "tubing_material": "none", "tubing_size": "1_16x0_010"}}"#).unwrap();
+    report_is_sound(&case.evaluate().unwrap()).unwrap();
+    common(&case, &[0, 7, 0, 0, 0, 0, 0, 0]).unwrap();
+}
