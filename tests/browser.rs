@@ -104,7 +104,7 @@ async fn invalid_entries_show_a_message_at_the_field_and_results_stay() {
     let b = Browser::start().await;
     b.open_page().await;
     let demo = b.text("[data-testid=result-residence_time]").await;
-    for (typed, expect) in [("abc", "not a number"), ("-1", "allowed: > 0 mm"), ("0", "allowed: > 0 mm"), ("1e400", "too large")] {
+    for (typed, expect) in [("abc", "not a number"), ("-1", "allowed: ≥ 1e-5 mm"), ("0", "allowed: ≥ 1e-5 mm"), ("1e400", "too large")] {
         // Results update on every keystroke, so "1e40" on the way to "1e400" is a valid entry:
         // the results must stay at what the last valid text gave.
         let (head, _) = typed.split_at(typed.len() - 1);

@@ -56,7 +56,7 @@ fn errors_name_the_field_and_exit_nonzero() {
     let out = run(&["-"], Some(&bad));
     assert_eq!(out.status.code(), Some(1));
     let err = String::from_utf8(out.stderr).unwrap();
-    assert!(err.contains("inner_diameter") && err.contains("-1 mm") && err.contains("> 0 mm"), "{err}");
+    assert!(err.contains("inner_diameter") && err.contains("-1 mm") && err.contains("≥ 1e-5 mm"), "{err}");
     assert!(out.stdout.is_empty());
     let out = run(&["/nonexistent/case.json"], None);
     assert_eq!(out.status.code(), Some(1));

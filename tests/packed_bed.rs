@@ -617,7 +617,7 @@ fn wall_and_plug_flow_checks_use_the_common_practice_limits() {
 
 #[test]
 fn sizing_reports_an_unreachable_limit_without_failing() {
-    let c = with_quantity(case(), "max_pressure_drop", 1e-6, "Pa");
+    let c = with_quantity(case(), "max_pressure_drop", 1.0, "Pa");
     let r = run(&c);
     assert_eq!(verdict(&r, "sizing"), Verdict::Caution);
     let reason = &r.check("sizing").unwrap().reason;

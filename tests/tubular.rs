@@ -148,11 +148,11 @@ fn impossible_inputs_name_the_field_value_and_range() {
     let e = input_error(demo_with("yield", serde_json::json!({"value": 120, "unit": "%"})));
     assert!(e.contains("yield") && e.contains("120 %") && e.contains("≤ 100 %"), "{e}");
     let e = input_error(demo_with("inner_diameter", serde_json::json!({"value": -1, "unit": "mm"})));
-    assert!(e.contains("inner_diameter") && e.contains("-1 mm") && e.contains("> 0 mm"), "{e}");
+    assert!(e.contains("inner_diameter") && e.contains("-1 mm") && e.contains("≥ 1e-5 mm"), "{e}");
     // The entered viscosity is read (and checked) for an entered liquid only.
     assert!(demo_with("viscosity", serde_json::json!({"value": 0, "unit": "cP"})).is_ok());
     let e = input_error(demo_with_all(&[("liquid", serde_json::json!("custom")), ("viscosity", serde_json::json!({"value": 0, "unit": "cP"}))]));
-    assert!(e.contains("viscosity") && e.contains("> 0 cP"), "{e}");
+    assert!(e.contains("viscosity") && e.contains("≥ 1e-4 cP"), "{e}");
     let e = input_error(demo_with("length", serde_json::json!({"value": 3, "unit": "furlong"})));
     assert!(e.contains("length") && e.contains("furlong") && e.contains("mm, µm, cm, m, in"), "{e}");
     // Loop fields are checked only in a loop.

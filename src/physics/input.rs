@@ -60,11 +60,10 @@ impl Allowed {
     pub fn describe(&self, unit: Unit) -> String {
         let show = |si: f64| {
             let v = format_significant(unit.from_si(si), 6);
-            let v = if v.contains('.') && !v.contains('e') {
-                v.trim_end_matches('0').trim_end_matches('.').to_owned()
-            } else {
-                v
-            };
+            // Trailing zeros dropped, of the mantissa in exponent form (1e-8, not 1.00000e-8).
+            let (mantissa, exponent) = v.split_once('e').map_or((v.as_str(), None), |(m, e)| (m, Some(e)));
+            let mantissa = if mantissa.contains('.') { mantissa.trim_end_matches('0').trim_end_matches('.') } else { mantissa };
+            let v = exponent.map_or_else(|| mantissa.to_owned(), |e| format!("{mantissa}e{e}"));
             if unit.symbol.is_empty() { v } else { format!("{v} {}", unit.symbol) }
         };
         let low = format!("{} {}", if self.low_inclusive { "≥" } else { ">" }, show(self.low));
@@ -79,26 +78,29 @@ impl Allowed {
     }
 }
 
-/// The largest (and for temperature the lowest) entries a laboratory flow setup can have, SI.
-/// They are sanity bounds, far beyond ordinary use, so that a slip of a finger (1e30, a unit
-/// mixed up by 10⁶) gets a message at its field instead of a result: common practice, no source.
+/// The largest and smallest entries a laboratory flow setup can have, SI. They are sanity bounds,
+/// far beyond ordinary use, so that a slip of a finger (1e30, 1e-300, a unit mixed up by 10⁶) gets a
+/// message at its field instead of a result: common practice, no source. The smallest ends keep
+/// what follows from an entry finite (a share of a rating of 10⁻²⁷⁷ bar overflowed to "inf %");
+/// each lies below anything measured in a laboratory and no higher than 10⁻⁹ of the largest,
+/// except where a physical floor is higher (a molar mass of 1 g/mol).
 pub mod lab {
     use super::Allowed;
 
-    /// Liquid flow: 1 L/min, beyond preparative pumps.
-    pub const LIQUID_FLOW: Allowed = Allowed::positive_up_to(1e-3 / 60.0);
-    /// Gas flow at a reference state: 100 L/min.
-    pub const GAS_FLOW: Allowed = Allowed::positive_up_to(0.1 / 60.0);
-    /// Bore of a tube, cartridge, fitting or frit: 100 mm.
-    pub const BORE: Allowed = Allowed::positive_up_to(0.1);
-    /// Length of tubing or a coil: 1 km.
-    pub const TUBE_LENGTH: Allowed = Allowed::positive_up_to(1000.0);
-    /// Length of a packed bed: 2 m.
-    pub const BED_LENGTH: Allowed = Allowed::positive_up_to(2.0);
-    /// Particle size: 20 mm.
-    pub const PARTICLE_SIZE: Allowed = Allowed::positive_up_to(0.02);
-    /// Gauge pressure, rating or pressure limit: 1000 bar.
-    pub const PRESSURE: Allowed = Allowed::positive_up_to(1e8);
+    /// Liquid flow: 1 nL/min (nanofluidics) to 1 L/min (beyond preparative pumps).
+    pub const LIQUID_FLOW: Allowed = Allowed::between(1e-12 / 60.0, 1e-3 / 60.0);
+    /// Gas flow at a reference state: 0.1 nL/min (next to no gas) to 100 L/min.
+    pub const GAS_FLOW: Allowed = Allowed::between(1e-13 / 60.0, 0.1 / 60.0);
+    /// Bore of a tube, cartridge, fitting or frit: 10 nm (about where continuum flow ends) to 100 mm.
+    pub const BORE: Allowed = Allowed::between(1e-8, 0.1);
+    /// Length of tubing or a coil: 1 µm to 1 km.
+    pub const TUBE_LENGTH: Allowed = Allowed::between(1e-6, 1000.0);
+    /// Length of a packed bed: 1 µm to 2 m.
+    pub const BED_LENGTH: Allowed = Allowed::between(1e-6, 2.0);
+    /// Particle size: 1 nm (a cluster of a few molecules) to 20 mm.
+    pub const PARTICLE_SIZE: Allowed = Allowed::between(1e-9, 0.02);
+    /// Gauge pressure, rating or pressure limit: 1 Pa (0.01 mbar) to 1000 bar.
+    pub const PRESSURE: Allowed = Allowed::between(1.0, 1e8);
     /// Back-pressure (may be zero): 1000 bar.
     pub const BACK_PRESSURE: Allowed = Allowed::non_negative_up_to(1e8);
     /// Absolute pressure of a reference state: 0.1–1000 bar.
@@ -107,32 +109,36 @@ pub mod lab {
     pub const TEMPERATURE: Allowed = Allowed::between(173.15, 623.15);
     /// Reference temperature of a gas-flow reading: −50 to 100 °C.
     pub const REFERENCE_TEMPERATURE: Allowed = Allowed::between(223.15, 373.15);
-    /// Amount concentration: 30 mol/L (above any neat liquid's own).
-    pub const CONCENTRATION: Allowed = Allowed::positive_up_to(3e4);
+    /// Amount concentration: 1 µmol/L to 30 mol/L (above any neat liquid's own).
+    pub const CONCENTRATION: Allowed = Allowed::between(1e-3, 3e4);
     /// Density of a liquid: 300–3000 kg/m³.
     pub const LIQUID_DENSITY: Allowed = Allowed::between(300.0, 3000.0);
-    /// Density of a solid: up to 25 000 kg/m³ (osmium is 22 600).
-    pub const SOLID_DENSITY: Allowed = Allowed::positive_up_to(25_000.0);
-    /// Dynamic viscosity of a liquid: 10 Pa·s (ten times glycerol at 20 °C).
-    pub const VISCOSITY: Allowed = Allowed::positive_up_to(10.0);
-    /// Surface tension: 1 N/m (above mercury's 0.49).
-    pub const SURFACE_TENSION: Allowed = Allowed::positive_up_to(1.0);
-    /// Molar mass: 10⁶ g/mol.
-    pub const MOLAR_MASS: Allowed = Allowed::positive_up_to(1000.0);
-    /// Mass of solid in a cartridge: 10 kg.
-    pub const MASS: Allowed = Allowed::positive_up_to(10.0);
-    /// A target time: 100 h.
-    pub const DURATION: Allowed = Allowed::positive_up_to(3.6e5);
-    /// Volume of a reservoir: 100 L.
-    pub const RESERVOIR: Allowed = Allowed::positive_up_to(0.1);
-    /// Loading of a supported reagent: 50 mmol/g.
-    pub const LOADING: Allowed = Allowed::positive_up_to(50.0);
-    /// Moles of one species per mole of another: 1000.
-    pub const RATIO: Allowed = Allowed::positive_up_to(1000.0);
-    /// Diffusivity in a liquid: 10⁻⁶ m²/s (a gas's own is about 10⁻⁵).
-    pub const DIFFUSIVITY: Allowed = Allowed::positive_up_to(1e-6);
-    /// Molar flow (a rate the chemistry needs): 1 mol/min.
-    pub const MOLAR_FLOW: Allowed = Allowed::positive_up_to(1.0 / 60.0);
+    /// Density of a solid: 0.1 kg/m³ (below the lightest aerogels) to 25 000 kg/m³ (osmium is 22 600).
+    pub const SOLID_DENSITY: Allowed = Allowed::between(0.1, 25_000.0);
+    /// Dynamic viscosity of a liquid: 10⁻⁷ Pa·s (a hundredth of a gas's; no fluid is thinner) to
+    /// 10 Pa·s (ten times glycerol at 20 °C).
+    pub const VISCOSITY: Allowed = Allowed::between(1e-7, 10.0);
+    /// Surface tension: 1 µN/m (an interface near its critical point) to 1 N/m (above mercury's 0.49).
+    pub const SURFACE_TENSION: Allowed = Allowed::between(1e-6, 1.0);
+    /// Molar mass: 1 g/mol (a hydrogen atom) to 10⁶ g/mol.
+    pub const MOLAR_MASS: Allowed = Allowed::between(1e-3, 1000.0);
+    /// Mass of solid in a cartridge: 1 µg to 10 kg.
+    pub const MASS: Allowed = Allowed::between(1e-9, 10.0);
+    /// A target time: 1 ms to 100 h.
+    pub const DURATION: Allowed = Allowed::between(1e-3, 3.6e5);
+    /// Volume of a reservoir: 1 nL to 100 L.
+    pub const RESERVOIR: Allowed = Allowed::between(1e-12, 0.1);
+    /// Loading of a supported reagent: 1 nmol/g to 50 mmol/g.
+    pub const LOADING: Allowed = Allowed::between(1e-6, 50.0);
+    /// Moles of one species per mole of another: 10⁻⁶ to 1000.
+    pub const RATIO: Allowed = Allowed::between(1e-6, 1000.0);
+    /// Diffusivity in a liquid: 10⁻¹⁵ m²/s (far below a large molecule's in a viscous liquid) to
+    /// 10⁻⁶ m²/s (a gas's own is about 10⁻⁵).
+    pub const DIFFUSIVITY: Allowed = Allowed::between(1e-15, 1e-6);
+    /// Molar flow (a rate the chemistry needs): 1 nmol/min to 1 mol/min.
+    pub const MOLAR_FLOW: Allowed = Allowed::between(1e-9 / 60.0, 1.0 / 60.0);
+    /// Drive force of a syringe pump: 1 N to 100 kN.
+    pub const FORCE: Allowed = Allowed::between(1.0, 1e5);
     /// Passes round a loop: 10 000.
     pub const PASSES: Allowed = Allowed { low: 1.0, low_inclusive: true, high: Some(1e4), high_inclusive: true, whole: true };
 }

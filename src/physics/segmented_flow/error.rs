@@ -30,6 +30,9 @@ pub enum SegmentedFlowError {
     GasExhausted,
     /// The liquid's vapour pressure reaches the outlet pressure: it boils.
     Boils,
+    /// The inlet pressure passes the largest pressure the tool takes
+    /// ([`MAX_PRESSURE`](crate::physics::segmented_flow::pressure_profile::MAX_PRESSURE)).
+    BeyondPressureRange,
 }
 
 impl std::fmt::Display for SegmentedFlowError {
@@ -50,6 +53,10 @@ impl std::fmt::Display for SegmentedFlowError {
             SegmentedFlowError::Property(e) => e.fmt(f),
             SegmentedFlowError::GasExhausted => f.write_str("all gas is consumed before the outlet: segmented flow ends inside the coil"),
             SegmentedFlowError::Boils => f.write_str("the liquid boils at the outlet pressure: raise the back-pressure or lower the temperature"),
+            SegmentedFlowError::BeyondPressureRange => f.write_str(
+                "The coil's inlet pressure would pass 1000 bar, beyond any lab tubing and beyond what the ideal gas and the \
+                 pressure-drop correlations cover. Shorten the coil, widen its bore, or lower the gas or liquid flow.",
+            ),
         }
     }
 }

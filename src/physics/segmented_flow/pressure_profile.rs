@@ -248,6 +248,13 @@ pub struct Coil {
 
 /// Number of equal segments the series are reported on.
 pub const SEGMENTS: usize = 50;
+/// The largest absolute pressure, Pa, a march may reach: the top of every pressure entry
+/// ([`crate::physics::input`]'s 1000 bar). Above it the ideal gas and the correlations are far
+/// outside their range and the fixed point on the inlet pressure becomes ill-conditioned (the
+/// long run of `segmented_flow_over_its_domain` found a 0.05 mm coil of 100 mm bore that settled
+/// at 5600 bar in one set of units and failed in another): a coil whose inlet pressure settles
+/// above it is refused.
+pub const MAX_PRESSURE: f64 = 1e8;
 /// Iteration limit of the inlet-pressure fixed point.
 pub const MAX_INLET_ITERATIONS: u32 = 100;
 /// Iterations of the plain fixed point after which two iterates that bracket the inlet pressure
@@ -275,6 +282,9 @@ pub struct Profile {
     pub inlet_pressure: f64,
     /// Outlet pressure (absolute), Pa.
     pub outlet_pressure: f64,
+    /// Pressure drop over the coil, Pa, integrated as such (not the difference of the two
+    /// pressures, which loses its digits where the drop is far below the pressure).
+    pub drop: f64,
     /// Liquid residence time ∫ dz / U_B, s.
     pub residence_time: f64,
     /// Bubble frequency, 1/s.
@@ -286,13 +296,15 @@ pub struct Profile {
 impl Profile {
     /// Pressure drop over the coil, Pa.
     pub fn pressure_drop(&self) -> f64 {
-        self.inlet_pressure - self.outlet_pressure
+        self.drop
     }
 }
 
 /// One integration of the coil: the state at the inlet end, and the recorded states and their
-/// distances from the outlet (empty unless recorded). State: absolute pressure, Pa; dry gas flow,
-/// mol/s; residence time, s.
+/// distances from the outlet (empty unless recorded). State: pressure above the outlet's, Pa (the
+/// drop so far, held as such so that its error is relative to itself, not to the pressure: found
+/// by the long run of `segmented_flow_over_its_domain`, a drop of 0.014 Pa at 533 bar differed by
+/// 10⁻⁶ between units); dry gas flow, mol/s; residence time, s.
 struct March {
     last: [f64; 3],
     states: Vec<[f64; 3]>,
@@ -339,20 +351,16 @@ impl Coil {
         UnitCell::at_junction(self.flow_at(p_in, self.gas_feed.si()), self.length_model)
     }
 
-    /// Integrates from the outlet to the inlet at bubble frequency `frequency`; with `record`,
+    /// Integrates from the outlet (absolute pressure `p_out`, Pa: the coil's own outlet, or the
+    /// next tube's inlet in a run) to the inlet at bubble frequency `frequency`; with `record`,
     /// also the states at the ends of the [`SEGMENTS`] equal segments (outlet first), read from
-    /// the integrator's dense output of the same integration.
-    fn march(&self, frequency: f64, record: bool) -> Result<March, SegmentedFlowError> {
-        self.march_from(self.outlet_pressure.pascals(), frequency, record)
-    }
-
-    /// [`Coil::march`] from absolute outlet pressure `p_out` (Pa), for a tube of a run whose
-    /// outlet is the next tube's inlet.
+    /// the integrator's dense output of the same integration. The state's pressure is the drop
+    /// above `p_out`.
     fn march_from(&self, p_out: f64, frequency: f64, record: bool) -> Result<March, SegmentedFlowError> {
         let l = self.length.si();
         let rate = self.consumption.si() / l;
         let rhs = |x: f64, y: &[f64; 3]| -> Option<[f64; 3]> {
-            let p = y[0];
+            let p = p_out + y[0];
             let n = self.gas_at(x);
             if !(p > self.vapour_pressure() && n > 0.0) {
                 return None;
@@ -360,7 +368,7 @@ impl Coil {
             let cell = UnitCell::with_frequency(self.flow_at(p, n), frequency).ok()?;
             Some([self.pressure_model.gradient(&cell), rate, 1.0 / cell.bubble.velocity])
         };
-        let y = [p_out, self.gas_at(0.0), 0.0];
+        let y = [0.0, self.gas_at(0.0), 0.0];
         let tol = OdeTolerance { relative: 1e-10, absolute: 1e-12, max_steps: 100_000, min_step_fraction: 1e-12 };
         let xs: Vec<f64> = if record { (0..=SEGMENTS).map(|i| if i == SEGMENTS { l } else { l * i as f64 / SEGMENTS as f64 }).collect() } else { Vec::new() };
         let (sol, states) = dormand_prince_dense(rhs, 0.0, l, y, tol, &xs)?;
@@ -368,25 +376,20 @@ impl Coil {
         Ok(March { last, states, xs })
     }
 
-    /// The fixed point on the inlet pressure ([`settle_run`] of this coil alone).
-    fn settle(&self, guess: Option<f64>) -> Result<(f64, u32), SegmentedFlowError> {
-        settle_run(std::slice::from_ref(self), guess)
-    }
-
-    /// Pressure drop over the coil, Pa: the same fixed point and final integration as
-    /// [`Coil::profile`] without the series, started from `guess` (e.g. another model's inlet
-    /// pressure); the fixed point ends within its tolerance (10⁻⁹ of the inlet pressure) of the
-    /// one reached from the outlet pressure.
+    /// Pressure drop over the coil, Pa: the same fixed point as [`Coil::profile`] without the
+    /// series, started from `guess` (e.g. another model's inlet pressure); it ends within its
+    /// tolerance (10⁻⁹ of the inlet pressure) of the one reached from the outlet pressure.
     pub fn pressure_drop(&self, guess: Option<f64>) -> Result<f64, SegmentedFlowError> {
-        let (frequency, _) = self.settle(guess)?;
-        Ok(self.march(frequency, false)?.last[0] - self.outlet_pressure.pascals())
+        let settled = settle(std::slice::from_ref(self), guess, false)?;
+        Ok(settled.drop)
     }
 
-    /// Integrates the profile: fixed point on the inlet pressure, then the recorded march.
+    /// Integrates the profile: the fixed point on the inlet pressure, its last march recorded.
     pub fn profile(&self) -> Result<Profile, SegmentedFlowError> {
-        let (frequency, iterations) = self.settle(None)?;
-        let March { last, states, xs } = self.march(frequency, true)?;
+        let Settled { frequency, iterations, drop, mut marches } = settle(std::slice::from_ref(self), None, true)?;
+        let March { last, states, xs } = marches.pop().ok_or(SegmentedFlowError::Profile(crate::physics::ode::OdeError::InvalidInitialState))?;
         let l = self.length.si();
+        let p_out = self.outlet_pressure.pascals();
         let mut profile = Profile {
             position: Vec::new(),
             pressure: Vec::new(),
@@ -395,53 +398,63 @@ impl Coil {
             gas_fraction: Vec::new(),
             holdup: Vec::new(),
             bubble_velocity: Vec::new(),
-            inlet_pressure: 0.0,
-            outlet_pressure: self.outlet_pressure.pascals(),
-            residence_time: 0.0,
+            inlet_pressure: p_out + drop,
+            outlet_pressure: p_out,
+            drop,
+            residence_time: last[2],
             frequency,
             iterations,
         };
         for (state, x) in states.iter().zip(&xs).rev() {
-            let cell = UnitCell::with_frequency(self.flow_at(state[0], self.gas_at(*x)), frequency)?;
+            let p = p_out + state[0];
+            let cell = UnitCell::with_frequency(self.flow_at(p, self.gas_at(*x)), frequency)?;
             profile.position.push(l - x);
-            profile.pressure.push(state[0]);
+            profile.pressure.push(p);
             profile.bubble_length.push(cell.bubble_length);
             profile.slug_length.push(cell.slug_length);
             profile.gas_fraction.push(cell.flow.gas_fraction());
             profile.holdup.push(cell.holdup);
             profile.bubble_velocity.push(cell.bubble.velocity);
         }
-        profile.inlet_pressure = last[0];
-        profile.residence_time = last[2];
         Ok(profile)
     }
 }
 
-/// The inlet pressure of a run of tubes (flow order) marched from the last tube's outlet
-/// pressure at bubble frequency `frequency`: each tube's outlet is the next one's inlet.
-fn march_run(tubes: &[Coil], frequency: f64) -> Result<f64, SegmentedFlowError> {
-    let mut p = tubes.last().map_or(0.0, |t| t.outlet_pressure.pascals());
+/// A run of tubes (flow order) marched from the last tube's outlet pressure at bubble frequency
+/// `frequency`, each tube's outlet the next one's inlet: the run's drop, Pa (summed tube by tube,
+/// each integrated as a drop), and each tube's march (flow order).
+fn march_run(tubes: &[Coil], frequency: f64, record: bool) -> Result<(f64, Vec<March>), SegmentedFlowError> {
+    let p_out = tubes.last().map_or(0.0, |t| t.outlet_pressure.pascals());
+    let mut drop = 0.0;
+    let mut marches = Vec::with_capacity(tubes.len());
     for tube in tubes.iter().rev() {
-        p = tube.march_from(p, frequency, false)?.last[0];
+        let march = tube.march_from(p_out + drop, frequency, record)?;
+        drop += march.last[0];
+        marches.push(march);
     }
-    Ok(p)
+    marches.reverse();
+    Ok((drop, marches))
 }
 
 /// The inlet pressure the march of the run from its outlet gives when the bubbles form at the
 /// first tube's inlet at pressure `p_in` (Pa): the map whose fixed point is the inlet pressure.
-fn inlet_after(tubes: &[Coil], junction: &Coil, p_in: f64) -> Result<f64, SegmentedFlowError> {
-    march_run(tubes, junction.junction_cell(p_in)?.frequency())
+fn inlet_after(tubes: &[Coil], junction: &Coil, p_out: f64, p_in: f64) -> Result<f64, SegmentedFlowError> {
+    Ok(p_out + march_run(tubes, junction.junction_cell(p_in)?.frequency(), false)?.0)
 }
 
-/// The bubble frequency of a run of tubes in series (flow order) that carry the same bubbles:
-/// formed at the inlet of the first tube (its [`Coil::junction_width`] and length correlation),
-/// neither made nor lost after, so one frequency holds in every tube; the run's outlet is the last
-/// tube's [`Coil::outlet_pressure`]. A fixed point on the run's inlet pressure, started from
-/// `guess` (Pa absolute; the outlet pressure when `None`): the inlet pressure sets the bubble
-/// frequency at the junction, the frequency the pressure drop (Brent between two iterates that
-/// bracket it, where the plain iteration swings). Returns the settled frequency and the
-/// iterations taken. A single coil is a run of one.
-pub fn settle_run(tubes: &[Coil], guess: Option<f64>) -> Result<(f64, u32), SegmentedFlowError> {
+/// A settled run: the bubble frequency, the fixed-point iterations taken, the run's drop, Pa, and
+/// the last march of each tube (flow order) at that frequency.
+struct Settled {
+    frequency: f64,
+    iterations: u32,
+    drop: f64,
+    marches: Vec<March>,
+}
+
+/// The fixed point of [`settle_run`], keeping the last march (recorded with `record`): its inlet
+/// pressure is within 10⁻⁹ of the one its frequency was set at, the fixed point to its tolerance,
+/// so it is not marched once more.
+fn settle(tubes: &[Coil], guess: Option<f64>, record: bool) -> Result<Settled, SegmentedFlowError> {
     let (Some(junction), Some(last)) = (tubes.first(), tubes.last()) else {
         return Err(SegmentedFlowError::Profile(crate::physics::ode::OdeError::InvalidInitialState));
     };
@@ -458,30 +471,55 @@ pub fn settle_run(tubes: &[Coil], guess: Option<f64>) -> Result<(f64, u32), Segm
     let mut before = None;
     loop {
         iterations += 1;
-        let next = march_run(tubes, frequency)?;
-        let settled = (next - p_in).abs() <= 1e-9 * next;
+        let (drop, marches) = march_run(tubes, frequency, record)?;
+        let mut next = p_out + drop;
+        if next > MAX_PRESSURE {
+            // An iterate past the top may still swing back to a fixed point below it: go on from
+            // the top itself. If the march from the top lands above it again, the fixed point is
+            // above it too (the map is then above the diagonal at the top, whether it rises with
+            // the inlet pressure, iterated up from the outlet pressure, or falls).
+            if p_in >= MAX_PRESSURE {
+                return Err(SegmentedFlowError::BeyondPressureRange);
+            }
+            next = MAX_PRESSURE;
+        }
+        if (next - p_in).abs() <= 1e-9 * next {
+            return Ok(Settled { frequency, iterations, drop, marches });
+        }
         // Where the plain iteration swings between two pressures on either side of the fixed
         // point (drops of hundreds of bar, where the bubble frequency reacts strongly to the
         // inlet pressure), the two bracket it: solve p = march(p) there with Brent.
         // If that fails (the march breaks down somewhere between them), the plain iteration
         // goes on.
-        if !settled && iterations >= BRACKET_AFTER && before.is_some_and(|b: f64| (next - p_in) * (p_in - b) < 0.0) {
+        if iterations >= BRACKET_AFTER && before.is_some_and(|b: f64| (next - p_in) * (p_in - b) < 0.0) {
             let (low, high) = (p_in.min(next), p_in.max(next));
-            let gap = |p: f64| inlet_after(tubes, junction, p).map_or(f64::NAN, |q| q - p);
+            let gap = |p: f64| inlet_after(tubes, junction, p_out, p).ok().filter(|q| *q <= MAX_PRESSURE).map_or(f64::NAN, |q| q - p);
             if let Ok(root) = brent(gap, low, high, Tolerance { absolute: 0.0, relative: 1e-10, max_iterations: 100 }) {
-                return Ok((junction.junction_cell(root)?.frequency(), iterations));
+                let frequency = junction.junction_cell(root)?.frequency();
+                let (drop, marches) = march_run(tubes, frequency, record)?;
+                return Ok(Settled { frequency, iterations, drop, marches });
             }
         }
         before = Some(p_in);
         p_in = next;
         frequency = junction.junction_cell(p_in)?.frequency();
-        if settled {
-            return Ok((frequency, iterations));
-        }
         if iterations >= MAX_INLET_ITERATIONS {
             return Err(SegmentedFlowError::NoConvergence { quantity: "inlet pressure", iterations });
         }
     }
+}
+
+/// The bubble frequency of a run of tubes in series (flow order) that carry the same bubbles:
+/// formed at the inlet of the first tube (its [`Coil::junction_width`] and length correlation),
+/// neither made nor lost after, so one frequency holds in every tube; the run's outlet is the last
+/// tube's [`Coil::outlet_pressure`]. A fixed point on the run's inlet pressure, started from
+/// `guess` (Pa absolute; the outlet pressure when `None`): the inlet pressure sets the bubble
+/// frequency at the junction, the frequency the pressure drop (Brent between two iterates that
+/// bracket it, where the plain iteration swings). Returns the frequency of the last march and the
+/// iterations taken. A single coil is a run of one.
+pub fn settle_run(tubes: &[Coil], guess: Option<f64>) -> Result<(f64, u32), SegmentedFlowError> {
+    let settled = settle(tubes, guess, false)?;
+    Ok((settled.frequency, settled.iterations))
 }
 
 /// One tube of a run at the settled frequency.
@@ -491,6 +529,8 @@ pub struct TubeState {
     pub inlet_pressure: f64,
     /// Absolute outlet pressure, Pa.
     pub outlet_pressure: f64,
+    /// Pressure drop over the tube, Pa, integrated as such.
+    pub drop: f64,
     /// Liquid residence time ∫ dz / U_B, s (the gas rides in the bubbles at the same velocity).
     pub residence_time: f64,
     /// The unit cell at the outlet.
@@ -500,13 +540,27 @@ pub struct TubeState {
 /// Every tube of a run (flow order) at bubble frequency `frequency`, marched from the run's
 /// outlet: the same integration as [`settle_run`]'s.
 pub fn run_states(tubes: &[Coil], frequency: f64) -> Result<Vec<TubeState>, SegmentedFlowError> {
-    let mut p = tubes.last().map_or(0.0, |t| t.outlet_pressure.pascals());
+    let (_, marches) = march_run(tubes, frequency, false)?;
+    states_of(tubes, frequency, &marches)
+}
+
+/// The settled run ([`settle_run`] from the run's outlet pressure): its frequency and every tube
+/// at it, read from the fixed point's last march rather than marched again.
+pub fn settled_states(tubes: &[Coil]) -> Result<(f64, Vec<TubeState>), SegmentedFlowError> {
+    let settled = settle(tubes, None, false)?;
+    Ok((settled.frequency, states_of(tubes, settled.frequency, &settled.marches)?))
+}
+
+/// The tubes' states from their marches (both in flow order).
+fn states_of(tubes: &[Coil], frequency: f64, marches: &[March]) -> Result<Vec<TubeState>, SegmentedFlowError> {
+    let p_out = tubes.last().map_or(0.0, |t| t.outlet_pressure.pascals());
+    let mut below = 0.0;
     let mut states = Vec::with_capacity(tubes.len());
-    for tube in tubes.iter().rev() {
-        let last = tube.march_from(p, frequency, false)?.last;
+    for (tube, march) in tubes.iter().zip(marches).rev() {
+        let p = p_out + below;
         let outlet = UnitCell::with_frequency(tube.flow_at(p, tube.gas_at(0.0)), frequency)?;
-        states.push(TubeState { inlet_pressure: last[0], outlet_pressure: p, residence_time: last[2], outlet });
-        p = last[0];
+        below += march.last[0];
+        states.push(TubeState { inlet_pressure: p_out + below, outlet_pressure: p, drop: march.last[0], residence_time: march.last[2], outlet });
     }
     states.reverse();
     Ok(states)

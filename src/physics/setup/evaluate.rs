@@ -282,8 +282,7 @@ fn gas_run(input: &SetupInput, g: &GasLine, members: &[usize], flows: &[Option<C
             })
         })
         .collect();
-    let (frequency, _) = pressure_profile::settle_run(&tubes, None)?;
-    let states = pressure_profile::run_states(&tubes, frequency)?;
+    let (_, states) = pressure_profile::settled_states(&tubes)?;
     let flow_info = if g.vapour.is_some() { pressure_profile::SATURATED_FLOW_INFO } else { pressure_profile::DRY_FLOW_INFO };
     // The coil calculator's regime check, between the cells where the bubbles form and where the
     // run ends.
@@ -296,7 +295,7 @@ fn gas_run(input: &SetupInput, g: &GasLine, members: &[usize], flows: &[Option<C
         .zip(&tubes)
         .map(|(s, tube)| StageResult {
             regime: regime.take(),
-            drop: s.inlet_pressure - s.outlet_pressure,
+            drop: s.drop,
             info: pressure_profile::RECOMMENDED.info(),
             warnings: pressure_profile::RECOMMENDED.warnings(&s.outlet),
             volume: Some((tube.liquid_flow.si() * s.residence_time, GAS_STAGE_VOLUME_INFO)),

@@ -60,7 +60,7 @@ pub const PUMP_LIMIT: FieldSpec = field(
     "From the pump's data sheet. Peristaltic pumps hold only a few bar (common practice, no source).",
 );
 /// Syringe drive force.
-pub const DRIVE_FORCE: FieldSpec = field("drive_force", "Drive force", Dimension::Force, Allowed::positive_up_to(1e5), "Largest linear force of the syringe drive, from its data sheet.");
+pub const DRIVE_FORCE: FieldSpec = field("drive_force", "Drive force", Dimension::Force, lab::FORCE, "Largest linear force of the syringe drive, from its data sheet.");
 /// Syringe barrel bore.
 pub const BARREL_BORE: FieldSpec = field("barrel_bore", "Barrel inner diameter", Dimension::Length, lab::BORE, "Inner diameter of the syringe barrel.");
 /// Syringe barrel rating.
