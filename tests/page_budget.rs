@@ -19,7 +19,10 @@ const EDIT_BUDGET_MS: f64 = 16.0;
 /// The goal on this machine, leaving margin for slower ones (issue 14).
 const EDIT_TARGET_MS: f64 = 8.0;
 const FLOW_EDITS: u32 = 60;
+/// Edits per other field to find the heaviest one (by median, which one slow edit does not move).
 const FIELD_EDITS: u32 = 10;
+/// Edits of the heaviest field, whose p95 is its budget figure (as many as the flow field's).
+const HEAVIEST_EDITS: u32 = 60;
 
 /// The field each tab's main edit goes to: the liquid flow.
 fn flow_field(c: Calculator) -> &'static str {
@@ -36,8 +39,9 @@ fn sorted_times(v: &Value) -> Vec<f64> {
     t
 }
 
-/// Arguments: tab key, flow field key, flow edits, edits per other field. Returns the times, ms.
-const EDIT_SCRIPT: &str = r#"const [tab, flowKey, flowEdits, fieldEdits, done] = arguments;
+/// Arguments: tab key, flow field key, flow edits, edits per other field, edits of the heaviest
+/// field. Returns the times, ms.
+const EDIT_SCRIPT: &str = r#"const [tab, flowKey, flowEdits, fieldEdits, heaviestEdits, done] = arguments;
 const panel = document.querySelector(`[data-testid=panel-${tab}]`);
 const summary = panel.querySelector('[data-testid=summary]');
 const nextTask = () => new Promise(r => { const c = new MessageChannel(); c.port1.onmessage = () => r(); c.port2.postMessage(0); });
@@ -72,7 +76,16 @@ const edit = async (input, value) => {
     await edit(input, v);
     fields[key] = t;
   }
-  done({ flow: times, unchanged, fields });
+  const median = t => [...t].sort((a, b) => a - b)[Math.floor(t.length / 2)];
+  const heaviestKey = Object.keys(fields).reduce((a, k) => (a === null || median(fields[k]) > median(fields[a]) ? k : a), null);
+  let heaviest = [];
+  if (heaviestKey !== null) {
+    const input = panel.querySelector(`[data-testid=input-${heaviestKey}]`);
+    const v = parseFloat(input.value);
+    for (let i = 0; i < heaviestEdits; i++) heaviest.push(await edit(input, v * (1 - 0.0002 * (i + 1))));
+    await edit(input, v);
+  }
+  done({ flow: times, unchanged, fields, heaviestKey, heaviest });
 })();"#;
 
 /// Runs the page's sweep benchmark (if the page has one) a few times; returns the best time.
@@ -116,13 +129,18 @@ async fn main() {
     // Editing, on every tab: set a field, dispatch the input event, wait one task (the reactive
     // update and the effects that draw the charts run before it) and time it. The flow field gets
     // FLOW_EDITS edits, each of which must change the answer summary; every other visible number
-    // field FIELD_EDITS edits within 1 % below its demo value (any field may be the heaviest).
+    // field FIELD_EDITS edits within 1 % below its demo value (any field may be the heaviest); the
+    // field with the highest median then HEAVIEST_EDITS more, whose p95 is its figure. (The
+    // largest of every field's p95 of 10 was the slowest of some 300 edits, not a p95.)
     let mut tabs = Vec::new();
     for calculator in Calculator::ALL {
         b.click(&format!("[data-testid=tab-{}]", calculator.key())).await;
         let result = b
             .client
-            .execute_async(EDIT_SCRIPT, vec![Value::from(calculator.key()), Value::from(flow_field(calculator)), Value::from(FLOW_EDITS), Value::from(FIELD_EDITS)])
+            .execute_async(
+                EDIT_SCRIPT,
+                vec![Value::from(calculator.key()), Value::from(flow_field(calculator)), Value::from(FLOW_EDITS), Value::from(FIELD_EDITS), Value::from(HEAVIEST_EDITS)],
+            )
             .await
             .unwrap();
         tabs.push((calculator, result));
@@ -142,29 +160,26 @@ async fn main() {
         let flow = sorted_times(&result["flow"]);
         let unchanged = result["unchanged"].as_u64().unwrap();
         let (p50, p95) = (percentile(&flow, 0.5), percentile(&flow, 0.95));
-        let mut heaviest = ("", 0.0, 0);
-        for (field, times) in result["fields"].as_object().unwrap() {
-            let t = sorted_times(times);
-            let p = percentile(&t, 0.95);
-            if p > heaviest.1 {
-                heaviest = (field.as_str(), p, t.len());
-            }
-        }
-        let fields = result["fields"].as_object().unwrap().len();
+        let fields = result["fields"].as_object().unwrap();
+        // The slowest single edit of any field, shown beside the figures.
+        let slowest = fields.values().flat_map(|t| sorted_times(t).last().copied()).fold(0.0, f64::max);
+        let heaviest_key = result["heaviestKey"].as_str().unwrap_or("");
+        let heaviest = sorted_times(&result["heaviest"]);
+        let (h50, h95) = if heaviest.is_empty() { (0.0, 0.0) } else { (percentile(&heaviest, 0.5), percentile(&heaviest, 0.95)) };
         println!(
-            "    {:<22} {:<13} {p50:>6.2} ms median, {p95:>6.2} ms p95 of {}   heaviest of {fields} fields: {:<24} {:>6.2} ms p95 of {}   {}",
+            "    {:<22} {:<13} {p50:>6.2} ms median, {p95:>6.2} ms p95 of {}   heaviest of {} fields: {:<24} {h50:>6.2} ms median, {h95:>6.2} ms p95 of {} (slowest single edit of any field {slowest:.1} ms)   {}",
             calculator.title(),
             flow_field(*calculator),
             flow.len(),
-            heaviest.0,
-            heaviest.1,
-            heaviest.2,
-            verdict(p95.max(heaviest.1) < EDIT_BUDGET_MS)
+            fields.len(),
+            heaviest_key,
+            heaviest.len(),
+            verdict(p95.max(h95) < EDIT_BUDGET_MS)
         );
         if unchanged > 0 {
             println!("      {unchanged} flow edits left the summary unchanged (must be 0)");
         }
-        ok &= p95.max(heaviest.1) < EDIT_BUDGET_MS && unchanged == 0;
+        ok &= p95.max(h95) < EDIT_BUDGET_MS && unchanged == 0;
     }
     match sweep.get("ms") {
         Some(ms) => println!("  sweep in wasm (256 × 256 settling + Ergun): {:.1} ms best of {} runs", ms.as_f64().unwrap(), sweep["runs"]),
