@@ -756,6 +756,13 @@ impl CaseFile {
         let sources: Vec<&dyn FieldSource> = elements.iter().map(|e| e as &dyn FieldSource).collect();
         self.calculator.evaluate(&EntrySource(&self.inputs), &sources)
     }
+
+    /// The case's operating map ([`Calculator::map`]), for a calculator that has one.
+    pub fn map(&self) -> Option<Result<crate::physics::map::Map, CaseError>> {
+        let elements: Vec<EntrySource<'_>> = self.elements.iter().map(EntrySource).collect();
+        let sources: Vec<&dyn FieldSource> = elements.iter().map(|e| e as &dyn FieldSource).collect();
+        self.calculator.map(&EntrySource(&self.inputs), &sources)
+    }
 }
 
 /// Entries read as a source of field values.

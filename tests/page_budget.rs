@@ -96,6 +96,10 @@ if (typeof window.__clearboreSweep !== 'function') { done({}); } else {
   done({ ms: best, runs, checksum: out.checksum });
 }"#;
 
+/// Computes each calculator's demo map a few times in wasm; returns the fastest run per map.
+const MAP_SCRIPT: &str = r#"const done = arguments[arguments.length - 1];
+done(typeof window.__clearboreMaps === 'function' ? window.__clearboreMaps(5) : {});"#;
+
 fn percentile(sorted: &[f64], p: f64) -> f64 {
     let i = ((sorted.len() as f64 - 1.0) * p).round() as usize;
     sorted[i.min(sorted.len() - 1)]
@@ -146,6 +150,7 @@ async fn main() {
         tabs.push((calculator, result));
     }
     let sweep = b.client.execute_async(SWEEP_SCRIPT, vec![]).await.unwrap();
+    let maps = b.client.execute_async(MAP_SCRIPT, vec![]).await.unwrap();
     b.close().await;
 
     let load_p50 = percentile(&loads, 0.5);
@@ -184,6 +189,22 @@ async fn main() {
     match sweep.get("ms") {
         Some(ms) => println!("  sweep in wasm (256 × 256 settling + Ergun): {:.1} ms best of {} runs", ms.as_f64().unwrap(), sweep["runs"]),
         None => println!("  sweep in wasm: the page has no window.__clearboreSweep"),
+    }
+    match maps.as_object() {
+        Some(maps) if !maps.is_empty() => {
+            for (key, m) in maps {
+                match m.get("ms") {
+                    Some(ms) => println!(
+                        "  map in wasm, {key} demo ({} cells, target {EDIT_TARGET_MS} ms): {:.1} ms fastest of 5   {}",
+                        m["cells"],
+                        ms.as_f64().unwrap(),
+                        if ms.as_f64().unwrap() <= EDIT_TARGET_MS { "within target" } else { "OVER TARGET" }
+                    ),
+                    None => println!("  map in wasm, {key} demo: {}", m["error"]),
+                }
+            }
+        }
+        _ => println!("  maps in wasm: the page has no window.__clearboreMaps"),
     }
     if let Some(path) = std::env::var_os("CLEARBORE_WASM_SWEEP_OUT") {
         std::fs::write(path, sweep.to_string()).unwrap();

@@ -85,3 +85,26 @@ impl Map {
         self.limiting.get(i).copied().flatten().and_then(|k| self.limit_names.get(k)).map(String::as_str)
     }
 }
+
+/// Fills `out[lo..=hi]` with `at(i)` for a value that is monotone in `i` (either way), such as a
+/// verdict along a row of rising flow: where the two ends agree every cell between has their
+/// value; otherwise the span is halved. About 2 log₂ n evaluations per change instead of one per
+/// cell, with the same values.
+pub fn fill_monotone<T: Copy + PartialEq>(out: &mut [T], lo: usize, hi: usize, at: &dyn Fn(usize) -> T) {
+    let (a, b) = (at(lo), at(hi));
+    fill_between(out, lo, a, hi, b, at);
+}
+
+fn fill_between<T: Copy + PartialEq>(out: &mut [T], lo: usize, a: T, hi: usize, b: T, at: &dyn Fn(usize) -> T) {
+    if a == b {
+        out[lo..=hi].fill(a);
+    } else if hi - lo <= 1 {
+        out[lo] = a;
+        out[hi] = b;
+    } else {
+        let mid = lo + (hi - lo) / 2;
+        let m = at(mid);
+        fill_between(out, lo, a, mid, m, at);
+        fill_between(out, mid, m, hi, b, at);
+    }
+}

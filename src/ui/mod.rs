@@ -63,6 +63,7 @@ pub fn mount() {
     panic_banner::install();
     leptos::mount::mount_to_body(app::App);
     expose_sweep();
+    expose_map_timing();
     mark_ready();
 }
 
@@ -95,6 +96,51 @@ fn expose_sweep() {
     });
     // A failed property write only loses the benchmark hook.
     let _ = js_sys::Reflect::set(&window, &JsValue::from_str("__clearboreSweep"), &run.into_js_value());
+}
+
+/// Sets `window.__clearboreMaps`, which computes the operating map of each calculator's demo case
+/// that has one `runs` times and returns `{ <calculator key>: { ms, cells } }` (the fastest run;
+/// `{ error }` where the demo gives no map): `./task.sh bench` times the maps in wasm with it.
+/// It touches nothing on the page.
+fn expose_map_timing() {
+    use crate::case::{Calculator, CaseFile};
+    let Some(window) = web_sys::window() else { return };
+    let run = wasm_bindgen::closure::Closure::<dyn Fn(f64) -> JsValue>::new(|runs: f64| {
+        let out = js_sys::Object::new();
+        let performance = web_sys::window().and_then(|w| w.performance());
+        let now = || performance.as_ref().map(|p| p.now()).unwrap_or(f64::NAN);
+        // Writing to a fresh plain object cannot fail.
+        let set = |o: &js_sys::Object, key: &str, value: JsValue| {
+            let _ = js_sys::Reflect::set(o, &JsValue::from_str(key), &value);
+        };
+        for calculator in Calculator::ALL.into_iter().filter(|c| c.has_map()) {
+            let entry = js_sys::Object::new();
+            match CaseFile::from_json(calculator.demo_json()) {
+                Ok(case) => {
+                    let mut best = f64::INFINITY;
+                    let mut cells = None;
+                    for _ in 0..(runs.max(1.0) as u32) {
+                        let start = now();
+                        let map = case.map();
+                        best = best.min(now() - start);
+                        cells = map.and_then(Result::ok).map(|m| m.verdicts.len());
+                    }
+                    match cells {
+                        Some(n) => {
+                            set(&entry, "ms", JsValue::from_f64(best));
+                            set(&entry, "cells", JsValue::from_f64(n as f64));
+                        }
+                        None => set(&entry, "error", JsValue::from_str("the demo case gives no map")),
+                    }
+                }
+                Err(e) => set(&entry, "error", JsValue::from_str(&e.to_string())),
+            }
+            set(&out, calculator.key(), entry.into());
+        }
+        out.into()
+    });
+    // A failed property write only loses the benchmark hook.
+    let _ = js_sys::Reflect::set(&window, &JsValue::from_str("__clearboreMaps"), &run.into_js_value());
 }
 
 /// Sets `window.__clearboreReady` to `performance.now()` once mounted: the page-load budget reads it.

@@ -8,7 +8,8 @@ use super::flow::BedFlow;
 use super::minimum_fluidisation::{FluidisationInput, minimum_fluidisation_spread};
 use super::pressure_drop::{PressureDropModel, RECOMMENDED};
 use super::{PackedBedInput, geometry, lifting_verdict, plug_flow_check, pressure_verdict, wall_check};
-use crate::physics::map::{Map, MapAxis, MapLayer};
+use crate::physics::map::{Map, MapAxis, MapLayer, fill_monotone};
+use crate::physics::report::Verdict;
 use crate::physics::units::{Dimension, Length, VolumetricFlow};
 
 /// Cells along each axis.
@@ -32,6 +33,12 @@ fn size_axis(input: &PackedBedInput, n: usize) -> MapAxis {
 
 /// The map of `input` with `n` × `n` cells.
 pub fn cartridge_map(input: &PackedBedInput, n: usize) -> Map {
+    build(input, n, false)
+}
+
+/// The map; `every_cell` evaluates the verdict at every cell instead of by bisection along the
+/// rows (for the test that the two agree).
+fn build(input: &PackedBedInput, n: usize, every_cell: bool) -> Map {
     let x = flow_axis(input, n);
     let y = size_axis(input, n);
     let cells = n * n;
@@ -69,20 +76,31 @@ pub fn cartridge_map(input: &PackedBedInput, n: usize) -> Map {
             tube_diameter: input.tube_diameter,
         };
         let by_size = wall_check(input.tube_diameter.si() / d, &at_case_flow).verdict.max(plug_flow_check(input.bed_length.si() / d).verdict);
-        for (ix, &q) in x.values.iter().enumerate() {
-            let flow = VolumetricFlow::from_si(q);
-            let u = geometry::superficial_velocity(flow, input.tube_diameter);
-            let bed = BedFlow { superficial_velocity: u, ..at_case_flow };
+        // The verdict along the row: every pressure-drop correlation and the lifting margin rise
+        // with the flow, so it only worsens as the flow rises and is found at the ends and
+        // wherever it changes (bisection); the hover values need Ergun alone at every cell.
+        let bed_at = |q: f64| BedFlow { superficial_velocity: geometry::superficial_velocity(VolumetricFlow::from_si(q), input.tube_diameter), ..at_case_flow };
+        let verdict_at = |ix: usize| -> Option<Verdict> {
+            let bed = bed_at(x.values[ix]);
             let recommended = RECOMMENDED.pressure_drop(&bed).si();
             let worst = PressureDropModel::ALL.iter().map(|m| m.pressure_drop(&bed).si()).fold(recommended, f64::max);
-            let i = iy * n + ix;
             let pressure = pressure_verdict(back + recommended, back, worst, rating);
-            let lifting = lifting_verdict(input.direction, u.si(), umf);
-            if recommended.is_finite() && worst.is_finite() {
-                verdicts[i] = Some(pressure.max(lifting).max(by_size));
+            let lifting = lifting_verdict(input.direction, bed.superficial_velocity.si(), umf);
+            (recommended.is_finite() && worst.is_finite()).then(|| pressure.max(lifting).max(by_size))
+        };
+        let row = &mut verdicts[iy * n..(iy + 1) * n];
+        if every_cell {
+            row.iter_mut().enumerate().for_each(|(ix, v)| *v = verdict_at(ix));
+        } else {
+            fill_monotone(row, 0, n - 1, &verdict_at);
+        }
+        for (ix, &q) in x.values.iter().enumerate() {
+            let i = iy * n + ix;
+            if verdicts[i].is_some() {
+                let recommended = RECOMMENDED.pressure_drop(&bed_at(q)).si();
                 dp[i] = recommended;
                 inlet[i] = back + recommended;
-                tau[i] = geometry::residence_time(void, flow).si();
+                tau[i] = geometry::residence_time(void, VolumetricFlow::from_si(q)).si();
             }
         }
     }
@@ -111,5 +129,39 @@ pub fn cartridge_map(input: &PackedBedInput, n: usize) -> Map {
         limit_names: Vec::new(),
         limiting: Vec::new(),
         current: (input.flow.si(), input.particle_diameter.si()),
+    }
+}
+
+#[cfg(test)]
+#[allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
+mod tests {
+    use super::*;
+
+    /// The demo cartridge, with `changes` to its entries.
+    fn demo(changes: &[(&str, serde_json::Value)]) -> PackedBedInput {
+        use crate::case::{Calculator, CaseFile, EntrySource};
+        let mut doc: serde_json::Value = serde_json::from_str(Calculator::PackedBed.demo_json()).unwrap();
+        for (k, v) in changes {
+            doc["inputs"][*k] = v.clone();
+        }
+        let c = CaseFile::from_json(&doc.to_string()).unwrap();
+        PackedBedInput::from_source(&EntrySource(&c.inputs)).unwrap()
+    }
+
+    #[test]
+    fn bisection_along_the_rows_gives_every_cell_as_evaluating_each_does() {
+        // The demo (down-flow), up-flow (lifting), and a lower rating (8 bar instead of 20).
+        let up = [("flow_direction", serde_json::json!("up"))];
+        let low = [("pressure_rating", serde_json::json!({"value": 8, "unit": "bar"}))];
+        for input in [demo(&[]), demo(&up), demo(&low)] {
+            let fast = cartridge_map(&input, CELLS);
+            let slow = build(&input, CELLS, true);
+            assert_eq!(fast.verdicts, slow.verdicts);
+            for (a, b) in fast.layers.iter().zip(&slow.layers) {
+                assert!(a.values.iter().zip(&b.values).all(|(u, v)| u == v || (u.is_nan() && v.is_nan())));
+            }
+            let kinds: std::collections::BTreeSet<_> = fast.verdicts.iter().collect();
+            assert!(kinds.len() >= 2, "{kinds:?}");
+        }
     }
 }

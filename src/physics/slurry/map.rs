@@ -11,7 +11,7 @@ use super::element::{
     pressure_verdict, up_flow_verdict,
 };
 use super::{ElementKind, LineElement, Orientation, SlurryInput, clogging, keys, shields, vertical};
-use crate::physics::map::{Map, MapAxis, MapLayer};
+use crate::physics::map::{Map, MapAxis, MapLayer, fill_monotone};
 use crate::physics::pipe_flow;
 use crate::physics::report::Verdict;
 use crate::physics::settling::Drift;
@@ -91,28 +91,6 @@ fn settling(line: &Line, p: &Passage, q: VolumetricFlow) -> Verdict {
         }
         Orientation::Up => up_flow_verdict(vertical::particle_speed(u, -v90).is_some(), vertical::solids_holdup(line.phi, u, -v90), u, *v90),
         Orientation::Down => Verdict::Fine,
-    }
-}
-
-/// Fills `out[lo..=hi]` with `at(i)` for a verdict that is monotone in `i` (either way): where
-/// the two ends agree every cell between has their verdict; otherwise the span is halved. About
-/// 2 log₂ n evaluations per change instead of one per cell, with the same values.
-fn fill_monotone(out: &mut [Verdict], lo: usize, hi: usize, at: &dyn Fn(usize) -> Verdict) {
-    let (a, b) = (at(lo), at(hi));
-    fill_between(out, lo, a, hi, b, at);
-}
-
-fn fill_between(out: &mut [Verdict], lo: usize, a: Verdict, hi: usize, b: Verdict, at: &dyn Fn(usize) -> Verdict) {
-    if a == b {
-        out[lo..=hi].fill(a);
-    } else if hi - lo <= 1 {
-        out[lo] = a;
-        out[hi] = b;
-    } else {
-        let mid = lo + (hi - lo) / 2;
-        let m = at(mid);
-        fill_between(out, lo, a, mid, m, at);
-        fill_between(out, mid, m, hi, b, at);
     }
 }
 
