@@ -21,6 +21,7 @@ pub fn page_path() -> PathBuf {
 pub struct Browser {
     /// The WebDriver client.
     pub client: Client,
+    engine: Engine,
     _driver: Child,
     _display: Option<Child>,
     _profile: tempdir::Dir,
@@ -158,7 +159,7 @@ impl Browser {
                     // loaded two-core machine; WebDriver's default script timeout is 30 s.
                     let timeouts = fantoccini::wd::TimeoutConfiguration::new(Some(std::time::Duration::from_secs(180)), None, None);
                     client.update_timeouts(timeouts).await.expect("script timeout set");
-                    return Browser { client, _driver: driver, _display: display, _profile: tempdir::Dir(profile) };
+                    return Browser { client, engine, _driver: driver, _display: display, _profile: tempdir::Dir(profile) };
                 }
                 Err(e) => last_error = e.to_string(),
             }
@@ -257,10 +258,26 @@ impl Browser {
         self.client.execute(script, vec![]).await.unwrap()
     }
 
-    /// Sets the browser window's outer size in CSS pixels.
+    /// Sets the page's viewport to `width` × `height` CSS pixels. In Chromium the viewport itself
+    /// is set (DevTools' device metrics): a headless window is never narrower than about 500 px,
+    /// so a window of 390 px would have shown the page at 500. Elsewhere the window's outer size.
     pub async fn resize(&self, width: u32, height: u32) {
-        self.client.set_window_size(width, height).await.unwrap();
-        tokio::time::sleep(Duration::from_millis(150)).await;
+        if self.engine == Engine::Chromium {
+            self.client.set_window_size(width.max(600), height).await.unwrap();
+            let scale = self.js("return window.devicePixelRatio;").await.as_f64().unwrap_or(1.0);
+            self.devtools("Emulation.setDeviceMetricsOverride", json!({ "width": width, "height": height, "deviceScaleFactor": scale, "mobile": false })).await;
+            tokio::time::sleep(Duration::from_millis(150)).await;
+            let inner = self.js("return window.innerWidth;").await.as_f64().unwrap();
+            assert_eq!(inner, f64::from(width), "the viewport did not take the width");
+        } else {
+            self.client.set_window_size(width, height).await.unwrap();
+            tokio::time::sleep(Duration::from_millis(150)).await;
+        }
+    }
+
+    /// Runs a Chromium DevTools command (chromedriver's `goog/cdp/execute`); returns its result.
+    pub async fn devtools(&self, cmd: &str, params: Value) -> Value {
+        self.client.issue_cmd(DevTools { cmd: cmd.to_owned(), params }).await.unwrap()
     }
 
     /// Saves a screenshot under `target/screenshots/` for a person to look at.
@@ -296,5 +313,22 @@ impl Browser {
     /// Ends the session.
     pub async fn close(self) {
         let _ = self.client.close().await;
+    }
+}
+
+/// A Chromium DevTools command sent through chromedriver.
+#[derive(Debug)]
+struct DevTools {
+    cmd: String,
+    params: Value,
+}
+
+impl fantoccini::wd::WebDriverCompatibleCommand for DevTools {
+    fn endpoint(&self, base_url: &url::Url, session_id: Option<&str>) -> Result<url::Url, url::ParseError> {
+        base_url.join(&format!("session/{}/goog/cdp/execute", session_id.unwrap_or_default()))
+    }
+
+    fn method_and_body(&self, _request_url: &url::Url) -> (http::Method, Option<String>) {
+        (http::Method::POST, Some(json!({ "cmd": self.cmd, "params": self.params }).to_string()))
     }
 }
