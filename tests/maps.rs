@@ -268,3 +268,30 @@ fn slurry_map_time() {
     }
     println!("slurry map 256 × 256 (demo line, 5 elements): best of 10 {best:.2} ms");
 }
+
+/// Every cell marked as a verdict boundary has a right or upper neighbour with another verdict,
+/// and every such pair of neighbours is marked (on the cell below or left of the change); a
+/// limit boundary likewise where the verdict stays and the limiting check changes.
+#[test]
+fn map_boundaries_are_drawn_exactly_where_the_verdict_or_the_limiting_check_changes() {
+    use clearbore::physics::map::Edge;
+    let map = slurry_map(&slurry_case(&[], None));
+    let edges = map.edges();
+    let (nx, ny) = (map.x.values.len(), map.y.values.len());
+    let (mut verdict_edges, mut limit_edges) = (0, 0);
+    for iy in 0..ny {
+        for ix in 0..nx {
+            let i = map.index(ix, iy);
+            let next: Vec<usize> = [(ix + 1 < nx).then(|| map.index(ix + 1, iy)), (iy + 1 < ny).then(|| map.index(ix, iy + 1))].into_iter().flatten().collect();
+            let verdict_changes = next.iter().any(|&j| map.verdicts[j] != map.verdicts[i]);
+            let limit_changes = next.iter().any(|&j| map.verdicts[j] == map.verdicts[i] && map.limiting[j] != map.limiting[i]);
+            let expected = if verdict_changes { Some(Edge::Verdict) } else if limit_changes { Some(Edge::Limit) } else { None };
+            assert_eq!(edges[i], expected, "cell ({ix}, {iy})");
+            verdict_edges += usize::from(expected == Some(Edge::Verdict));
+            limit_edges += usize::from(expected == Some(Edge::Limit));
+        }
+    }
+    // The demo line's map has both kinds, each a thin line (far fewer cells than the map).
+    assert!(verdict_edges > 0 && limit_edges > 0, "{verdict_edges} {limit_edges}");
+    assert!(verdict_edges + limit_edges < nx * ny / 10);
+}

@@ -46,6 +46,15 @@ pub struct MapLayer {
     pub values: Vec<f64>,
 }
 
+/// A boundary drawn on a map cell (see [`Map::edges`]).
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Edge {
+    /// The verdict changes at this cell.
+    Verdict,
+    /// The verdict stays but another check sets it.
+    Limit,
+}
+
 /// A verdict map over two entries.
 #[derive(Debug, Clone, PartialEq, Serialize)]
 pub struct Map {
@@ -78,6 +87,29 @@ impl Map {
     /// The cell index of column `ix` and row `iy`.
     pub fn index(&self, ix: usize, iy: usize) -> usize {
         iy * self.x.values.len() + ix
+    }
+
+    /// Which cells draw a boundary: a cell whose right or upper neighbour has another verdict
+    /// ([`Edge::Verdict`]), or the same verdict set by another check ([`Edge::Limit`], where the
+    /// map names them); in the order of [`Map::verdicts`].
+    pub fn edges(&self) -> Vec<Option<Edge>> {
+        let (nx, ny) = (self.x.values.len(), self.y.values.len());
+        let limit = |i: usize| self.limiting.get(i).copied().flatten();
+        let mut out = vec![None; self.verdicts.len()];
+        for iy in 0..ny {
+            for ix in 0..nx {
+                let i = self.index(ix, iy);
+                let neighbours = [(ix + 1 < nx).then(|| self.index(ix + 1, iy)), (iy + 1 < ny).then(|| self.index(ix, iy + 1))];
+                for j in neighbours.into_iter().flatten() {
+                    if self.verdicts[j] != self.verdicts[i] {
+                        out[i] = Some(Edge::Verdict);
+                    } else if out[i].is_none() && limit(j) != limit(i) {
+                        out[i] = Some(Edge::Limit);
+                    }
+                }
+            }
+        }
+        out
     }
 
     /// The name of the check that limits cell `i`, where the map names them.

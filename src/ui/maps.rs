@@ -6,7 +6,7 @@ use leptos::html::Canvas;
 use leptos::prelude::*;
 use wasm_bindgen::{Clamped, JsCast};
 
-use crate::physics::map::Map;
+use crate::physics::map::{Edge, Map};
 use crate::physics::report::Verdict;
 
 /// Cell colours (RGB): light tints of the page's verdict colours, so the marker and text stay
@@ -20,13 +20,20 @@ fn colour(v: Option<Verdict>) -> [u8; 3] {
     }
 }
 
-/// The map's cells as RGBA rows, the highest y value on top.
+/// The map's cells as RGBA rows, the highest y value on top; boundary cells drawn as lines (dark
+/// where the verdict changes, grey where another check starts to limit).
 fn pixels(map: &Map) -> Vec<u8> {
     let (nx, ny) = (map.x.values.len(), map.y.values.len());
+    let edges = map.edges();
     let mut data = Vec::with_capacity(nx * ny * 4);
     for iy in (0..ny).rev() {
         for ix in 0..nx {
-            let [r, g, b] = colour(map.verdicts[map.index(ix, iy)]);
+            let i = map.index(ix, iy);
+            let [r, g, b] = match edges[i] {
+                Some(Edge::Verdict) => [0x33, 0x33, 0x33],
+                Some(Edge::Limit) => [0x8c, 0x8c, 0x8c],
+                None => colour(map.verdicts[i]),
+            };
             data.extend_from_slice(&[r, g, b, 255]);
         }
     }
@@ -141,7 +148,9 @@ pub fn MapView(map: RwSignal<Option<Map>>, pick: Callback<(f64, f64)>, open: RwS
                             <span class="swatch fine"></span>" fine "
                             <span class="swatch caution"></span>" caution "
                             <span class="swatch problem"></span>" problem "
-                            <span class="swatch none"></span>" not computed; ◎ this case"
+                            <span class="swatch none"></span>" not computed; dark line: the verdict changes"
+                            {(!m.limit_names.is_empty()).then_some("; grey line: another check limits")}
+                            "; ◎ this case"
                         </p>
                         <p class="map-readout" data-testid=format!("map-readout-{key}") aria-live="polite">{readout}</p>
                         <p class="note">{m.basis.clone()}</p>
