@@ -65,6 +65,17 @@ pub enum MapKind {
     SlurrySize,
 }
 
+impl MapKind {
+    /// Stable key: the map's [`crate::physics::map::Map::key`], used in the page's `data-testid`s.
+    pub const fn key(self) -> &'static str {
+        match self {
+            MapKind::CartridgeSize => "cartridge_map",
+            MapKind::SlurryBore => "slurry_map",
+            MapKind::SlurrySize => "slurry_size_map",
+        }
+    }
+}
+
 /// Which calculator a case is for.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
 #[serde(rename_all = "snake_case")]
