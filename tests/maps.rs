@@ -151,7 +151,8 @@ fn slurry_cell_equals_point(point: PointAt<'_>, map: &Map, ix: usize, iy: usize)
 }
 
 /// Sampled cells on a coarse grid and on both sides of every boundary met along sampled rows and
-/// columns (at most `near` pairs) equal the point evaluations; returns (grid cells, boundary cells).
+/// columns (at most `near` pairs) equal the point evaluations, at least 30 and 20 of them;
+/// returns (grid cells, boundary cells).
 fn slurry_cells_equal_points(c: &CaseFile, near: usize) -> (usize, usize) {
     map_cells_equal_points(&slurry_map(c), &|q, b| slurry_point(c, q, b), near)
 }
@@ -196,6 +197,8 @@ fn map_cells_equal_points(map: &Map, point: PointAt<'_>, near: usize) -> (usize,
         boundary += 2;
     }
     assert!(seen.len() >= 2, "the sampled cells should cross a boundary: {seen:?}");
+    println!("{}: {grid} grid cells, {boundary} at boundaries", map.key);
+    assert!(grid >= 30 && boundary >= 20, "{grid} grid cells, {boundary} at boundaries");
     (grid, boundary)
 }
 
@@ -203,9 +206,7 @@ fn map_cells_equal_points(map: &Map, point: PointAt<'_>, near: usize) -> (usize,
 fn slurry_map_cells_equal_point_evaluations_for_the_demo_line() {
     // The demo: 1.6 mm tubing and coil (one run upwards), a 0.5 mm fitting and a 0.25 mm seat
     // kept as entered, d90 60 µm, 20 bar rating.
-    let (grid, boundary) = slurry_cells_equal_points(&slurry_case(&[], None), 15);
-    println!("{grid} grid cells, {boundary} at boundaries");
-    assert!(grid >= 30 && boundary >= 20, "{grid} grid cells, {boundary} at boundaries");
+    slurry_cells_equal_points(&slurry_case(&[], None), 15);
 }
 
 #[test]
@@ -218,9 +219,7 @@ fn slurry_map_cells_equal_point_evaluations_for_a_tubing_only_line_with_one_size
         {"kind": "tubing", "orientation": "horizontal", "inner_diameter": {"value": 1.0, "unit": "mm"}, "length": {"value": 0.05, "unit": "m"}}
     ]);
     let c = slurry_case(&[("size_mode", json!("single")), ("particle_size", json!({"value": 10, "unit": "µm"}))], Some(elements));
-    let (grid, boundary) = slurry_cells_equal_points(&c, 15);
-    println!("{grid} grid cells, {boundary} at boundaries");
-    assert!(grid >= 30 && boundary >= 20, "{grid} grid cells, {boundary} at boundaries");
+    slurry_cells_equal_points(&c, 15);
     let map = slurry_map(&c);
     // Cells by verdict and limiting check.
     let mut counts = std::collections::BTreeMap::new();
@@ -296,9 +295,7 @@ fn size_map_cells_equal_point_evaluations_for_the_demo_line() {
     let c = slurry_case(&[], None);
     let map = size_map(&c);
     assert_eq!(map.y.field, "d90");
-    let (grid, boundary) = map_cells_equal_points(&map, &|q, d| size_point(&c, q, d), 15);
-    println!("{grid} grid cells, {boundary} at boundaries");
-    assert!(grid >= 30 && boundary >= 20, "{grid} grid cells, {boundary} at boundaries");
+    map_cells_equal_points(&map, &|q, d| size_point(&c, q, d), 15);
     // Settling limits the low flows, clogging at the narrow openings the largest sizes.
     let limits: std::collections::BTreeSet<_> = (0..map.verdicts.len()).filter_map(|i| map.limit(i)).collect();
     println!("{limits:?}");
@@ -315,9 +312,7 @@ fn size_map_cells_equal_point_evaluations_for_a_tubing_only_line_with_one_size()
     let c = slurry_case(&[("size_mode", json!("single")), ("particle_size", json!({"value": 10, "unit": "µm"}))], Some(elements));
     let map = size_map(&c);
     assert_eq!(map.y.field, "particle_size");
-    let (grid, boundary) = map_cells_equal_points(&map, &|q, d| size_point(&c, q, d), 15);
-    println!("{grid} grid cells, {boundary} at boundaries");
-    assert!(grid >= 30 && boundary >= 20, "{grid} grid cells, {boundary} at boundaries");
+    map_cells_equal_points(&map, &|q, d| size_point(&c, q, d), 15);
     for v in [Verdict::Fine, Verdict::Caution, Verdict::Problem] {
         assert!(map.verdicts.contains(&Some(v)), "no {v:?} cell");
     }

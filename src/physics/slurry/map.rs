@@ -373,30 +373,20 @@ mod tests {
 
     #[test]
     fn bisection_along_the_rows_gives_every_cell_as_evaluating_each_does() {
-        // The demo (horizontal and up-flow elements, d10/d50/d90), one 40 µm size, and 8 passes of a loop.
+        // Both maps, for the demo (horizontal and up-flow elements, d10/d50/d90), one 40 µm size,
+        // and 8 passes of a loop.
         let single = [("size_mode", serde_json::json!("single")), ("particle_size", serde_json::json!({"value": 40, "unit": "µm"}))];
         let looped = [("operation", serde_json::json!("recirculation")), ("passes", serde_json::json!({"value": 8, "unit": ""}))];
+        let maps: [fn(&SlurryInput, usize, bool) -> Option<Map>; 2] = [build, build_size];
         for input in [demo(&[]), demo(&single), demo(&looped)] {
-            let fast = line_map(&input, CELLS).unwrap();
-            let slow = build(&input, CELLS, true).unwrap();
-            assert_eq!(fast.verdicts, slow.verdicts);
-            assert_eq!(fast.limiting, slow.limiting);
-            let kinds: std::collections::BTreeSet<_> = fast.verdicts.iter().collect();
-            assert!(kinds.len() >= 2, "{kinds:?}");
-        }
-    }
-
-    #[test]
-    fn size_map_bisection_along_the_rows_gives_every_cell_as_evaluating_each_does() {
-        let single = [("size_mode", serde_json::json!("single")), ("particle_size", serde_json::json!({"value": 40, "unit": "µm"}))];
-        let looped = [("operation", serde_json::json!("recirculation")), ("passes", serde_json::json!({"value": 8, "unit": ""}))];
-        for input in [demo(&[]), demo(&single), demo(&looped)] {
-            let fast = size_map(&input, CELLS).unwrap();
-            let slow = build_size(&input, CELLS, true).unwrap();
-            assert_eq!(fast.verdicts, slow.verdicts);
-            assert_eq!(fast.limiting, slow.limiting);
-            let kinds: std::collections::BTreeSet<_> = fast.verdicts.iter().collect();
-            assert!(kinds.len() >= 2, "{kinds:?}");
+            for map in maps {
+                let fast = map(&input, CELLS, false).unwrap();
+                let slow = map(&input, CELLS, true).unwrap();
+                assert_eq!(fast.verdicts, slow.verdicts, "{}", fast.key);
+                assert_eq!(fast.limiting, slow.limiting, "{}", fast.key);
+                let kinds: std::collections::BTreeSet<_> = fast.verdicts.iter().collect();
+                assert!(kinds.len() >= 2, "{}: {kinds:?}", fast.key);
+            }
         }
     }
 
