@@ -377,7 +377,8 @@ mod tests {
         // and 8 passes of a loop.
         let single = [("size_mode", serde_json::json!("single")), ("particle_size", serde_json::json!({"value": 40, "unit": "µm"}))];
         let looped = [("operation", serde_json::json!("recirculation")), ("passes", serde_json::json!({"value": 8, "unit": ""}))];
-        let maps: [fn(&SlurryInput, usize, bool) -> Option<Map>; 2] = [build, build_size];
+        type Builder = fn(&SlurryInput, usize, bool) -> Option<Map>;
+        let maps: [Builder; 2] = [build, build_size];
         for input in [demo(&[]), demo(&single), demo(&looped)] {
             for map in maps {
                 let fast = map(&input, CELLS, false).unwrap();
