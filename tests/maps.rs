@@ -352,18 +352,22 @@ fn the_slurry_line_lists_both_maps_and_the_bore_map_first() {
     assert_eq!(size_map(&c).verdicts.len(), 256 * 256);
 }
 
-/// Native time of the 256² slurry size map (printed; run with `--profile bench` for the optimised figure).
+/// Native time of the 256² slurry size map (printed; run with `--profile bench` for the optimised
+/// figure): the demo's distribution (41 size classes and d90, so 42 terminal-speed solves per row)
+/// and the same line with one size (one solve per row).
 #[test]
 fn size_map_time() {
-    let c = slurry_case(&[], None);
-    let mut best = f64::INFINITY;
-    for _ in 0..10 {
-        let t = std::time::Instant::now();
-        let map = size_map(&c);
-        best = best.min(t.elapsed().as_secs_f64() * 1e3);
-        assert_eq!(map.verdicts.len(), 256 * 256);
+    let one = [("size_mode", json!("single")), ("particle_size", json!({"value": 40, "unit": "µm"}))];
+    for (c, what) in [(slurry_case(&[], None), "d10/d50/d90"), (slurry_case(&one, None), "one size")] {
+        let mut best = f64::INFINITY;
+        for _ in 0..10 {
+            let t = std::time::Instant::now();
+            let map = size_map(&c);
+            best = best.min(t.elapsed().as_secs_f64() * 1e3);
+            assert_eq!(map.verdicts.len(), 256 * 256);
+        }
+        println!("slurry size map 256 × 256 (demo line, 5 elements, {what}): best of 10 {best:.2} ms");
     }
-    println!("slurry size map 256 × 256 (demo line, 5 elements): best of 10 {best:.2} ms");
 }
 
 /// Native time of the 256² slurry map (printed; run with `--profile bench` for the optimised figure).
