@@ -54,6 +54,28 @@ pub const GAS_LIQUID_BED_DEMO_JSON: &str = include_str!("../public/cases/gas-liq
 /// The demo whole-setup case (an invented scenario), as shipped in `public/cases/`.
 pub const SETUP_DEMO_JSON: &str = include_str!("../public/cases/setup-demo.json");
 
+/// An operating map a calculator offers ([`Calculator::maps`]).
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
+pub enum MapKind {
+    /// Packed cartridge: flow × particle size.
+    CartridgeSize,
+    /// Slurry line: flow × tubing bore.
+    SlurryBore,
+    /// Slurry line: flow × particle size (d90, the distribution scaled with it).
+    SlurrySize,
+}
+
+impl MapKind {
+    /// Stable key: the map's [`crate::physics::map::Map::key`], used in the page's `data-testid`s.
+    pub const fn key(self) -> &'static str {
+        match self {
+            MapKind::CartridgeSize => "cartridge_map",
+            MapKind::SlurryBore => "slurry_map",
+            MapKind::SlurrySize => "slurry_size_map",
+        }
+    }
+}
+
 /// Which calculator a case is for.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
 #[serde(rename_all = "snake_case")]
@@ -509,9 +531,33 @@ impl Calculator {
         layout_has(self.layout(), key)
     }
 
-    /// Whether [`Calculator::map`] gives a map for this calculator.
+    /// Whether [`Calculator::map`] gives a map for this calculator (its first of [`Calculator::maps`]).
     pub const fn has_map(self) -> bool {
         matches!(self, Calculator::PackedBed | Calculator::SlurryLine)
+    }
+
+    /// The operating maps of this calculator, in the order the page shows them (empty for none):
+    /// pass one to [`Calculator::map_of`].
+    pub const fn maps(self) -> &'static [MapKind] {
+        match self {
+            Calculator::PackedBed => &[MapKind::CartridgeSize],
+            Calculator::SlurryLine => &[MapKind::SlurryBore, MapKind::SlurrySize],
+            Calculator::TubularReactor | Calculator::SegmentedFlow | Calculator::GasLiquidBed | Calculator::Setup => &[],
+        }
+    }
+
+    /// The operating map `kind` of the case (`None` when `kind` is not one of
+    /// [`Calculator::maps`] or the case gives no such map; the inputs' errors when they are
+    /// invalid). `elements` as for [`Calculator::evaluate`].
+    pub fn map_of(self, kind: MapKind, src: &dyn FieldSource, elements: &[&dyn FieldSource]) -> Option<Result<crate::physics::map::Map, CaseError>> {
+        match (self, kind) {
+            (_, MapKind::CartridgeSize | MapKind::SlurryBore) if self.maps().first() == Some(&kind) => self.map(src, elements),
+            (Calculator::SlurryLine, MapKind::SlurrySize) => match SlurryInput::from_source(src, elements) {
+                Ok(input) => slurry::map::size_map(&input, slurry::map::CELLS).map(Ok),
+                Err(e) => Some(Err(CaseError::Inputs(e))),
+            },
+            _ => None,
+        }
     }
 
     /// The operating map of the case, for a calculator that has one: its verdict over a grid of
@@ -755,6 +801,13 @@ impl CaseFile {
         let elements: Vec<EntrySource<'_>> = self.elements.iter().map(EntrySource).collect();
         let sources: Vec<&dyn FieldSource> = elements.iter().map(|e| e as &dyn FieldSource).collect();
         self.calculator.evaluate(&EntrySource(&self.inputs), &sources)
+    }
+
+    /// The case's operating map `kind` ([`Calculator::map_of`]).
+    pub fn map_of(&self, kind: MapKind) -> Option<Result<crate::physics::map::Map, CaseError>> {
+        let elements: Vec<EntrySource<'_>> = self.elements.iter().map(EntrySource).collect();
+        let sources: Vec<&dyn FieldSource> = elements.iter().map(|e| e as &dyn FieldSource).collect();
+        self.calculator.map_of(kind, &EntrySource(&self.inputs), &sources)
     }
 
     /// The case's operating map ([`Calculator::map`]), for a calculator that has one.

@@ -737,6 +737,67 @@ async fn the_slurry_map_renders_reads_out_a_cell_and_a_click_sets_the_flow_and_t
     b.close().await;
 }
 
+#[tokio::test]
+async fn the_slurry_size_map_renders_reads_out_a_cell_and_a_click_sets_the_flow_and_scales_the_sizes() {
+    use clearbore::physics::report::Verdict;
+    let b = Browser::start().await;
+    b.open_page().await;
+    b.click("[data-testid=tab-slurry_line]").await;
+    b.wait_for("[data-testid=panel-slurry_line]").await;
+    // Folded (and not computed) until opened; opening it leaves the bore map folded.
+    assert!(!b.exists("[data-testid=map-canvas-slurry_size_map]").await);
+    b.click("[data-testid=map-details-slurry_size_map] [data-testid=map-toggle]").await;
+    b.wait_for("[data-testid=map-canvas-slurry_size_map]").await;
+    b.wait_for("[data-testid=map-marker-slurry_size_map]").await;
+    assert!(!b.exists("[data-testid=map-canvas-slurry_map]").await);
+    // Drawn as the map evaluated natively, at three cells of different verdicts.
+    let c = CaseFile::from_json(Calculator::SlurryLine.demo_json()).unwrap();
+    let map = c.map_of(clearbore::case::MapKind::SlurrySize).unwrap().unwrap();
+    let colour = |v: Option<Verdict>| match v {
+        Some(Verdict::Fine) => json!([0xb9, 0xdf, 0xc4, 255]),
+        Some(Verdict::Caution) => json!([0xf3, 0xd9, 0x8b, 255]),
+        Some(Verdict::Problem) => json!([0xec, 0xa5, 0x9f, 255]),
+        None => json!([0xdd, 0xdd, 0xdd, 255]),
+    };
+    let mut seen = std::collections::BTreeSet::new();
+    for (ix, iy) in [(255, 255), (0, 0), (255, 0), (128, 60), (200, 100), (40, 200)] {
+        let v = map.verdicts[map.index(ix, iy)];
+        seen.insert(v);
+        let pixel = format!(
+            "const c = document.querySelector('[data-testid=map-canvas-slurry_size_map]'); return Array.from(c.getContext('2d').getImageData({ix}, {}, 1, 1).data);",
+            255 - iy
+        );
+        assert_eq!(b.js(&pixel).await, colour(v), "cell {ix}, {iy}");
+    }
+    assert!(seen.len() >= 2, "{seen:?}");
+    // The read-out names this case, then the cell under the pointer.
+    let own = b.text("[data-testid=map-readout-slurry_size_map]").await;
+    assert!(own.starts_with("This case: Flow 1.99 mL/min, particle size d90 "), "{own}");
+    map_event(&b, "slurry_size_map", "mousemove", 0.5, 0.5).await;
+    let cell = b.text_when("[data-testid=map-readout-slurry_size_map]", |t| t.starts_with("Flow")).await;
+    assert!(cell.contains("particle size d90") && cell.contains("Narrowest opening over d90"), "{cell}");
+    // A click near the top sets the flow and a large d90, d10 and d50 scaled with it (8/25/60 µm).
+    let before = b.js("return document.querySelector('[data-testid=map-marker-slurry_size_map]').style.bottom;").await;
+    map_event(&b, "slurry_size_map", "click", 0.9, 0.1).await;
+    let typed = b.js_when("return document.querySelector('[data-testid=input-d90]').value;", |v| v != "60").await;
+    let d90: f64 = typed.as_str().unwrap().parse().unwrap();
+    assert!(d90 > 300.0 && d90 <= 1000.0, "d90 now {d90} µm");
+    let value = |key: &str| format!("return document.querySelector('[data-testid=input-{key}]').value;");
+    let d10: f64 = b.js(&value("d10")).await.as_str().unwrap().parse().unwrap();
+    let d50: f64 = b.js(&value("d50")).await.as_str().unwrap().parse().unwrap();
+    // Three significant figures each.
+    assert!((d10 / d90 / (8.0 / 60.0) - 1.0).abs() < 0.01 && (d50 / d90 / (25.0 / 60.0) - 1.0).abs() < 0.01, "{d10} / {d50} / {d90}");
+    let q: f64 = b.js(&value("flow")).await.as_str().unwrap().parse().unwrap();
+    assert!(q > 10.0 && q <= 50.0, "flow now {q} mL/min");
+    // The marker follows: higher than it was.
+    let start = before.as_str().unwrap().trim_end_matches('%').parse::<f64>().unwrap();
+    let script = "return parseFloat(document.querySelector('[data-testid=map-marker-slurry_size_map]').style.bottom);";
+    b.js_when(script, |v| v.as_f64().is_some_and(|y| y > start + 20.0)).await;
+    b.screenshot("slurry-size-map").await;
+    assert_clean(&b).await;
+    b.close().await;
+}
+
 /// Waits until stage `n` is the last one drawn.
 async fn wait_for_stages(b: &Browser, n: usize) {
     for _ in 0..100 {

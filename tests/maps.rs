@@ -129,17 +129,20 @@ fn map_checks(report: &clearbore::physics::report::Report) -> (Verdict, Option<&
     (worst, (worst != Verdict::Fine).then_some(first.topic))
 }
 
-/// Compares cell `(ix, iy)` of `map` with the point evaluation; the verdict it has.
-fn slurry_cell_equals_point(c: &CaseFile, map: &Map, ix: usize, iy: usize) -> Option<Verdict> {
+/// The case at cell `(q, y)` of `map`: which entries the row sets depends on the map.
+type PointAt<'a> = &'a dyn Fn(f64, f64) -> CaseFile;
+
+/// Compares cell `(ix, iy)` of `map` with the point evaluation of `point(x, y)`; the verdict it has.
+fn slurry_cell_equals_point(point: PointAt<'_>, map: &Map, ix: usize, iy: usize) -> Option<Verdict> {
     let (q, b) = (map.x.values[ix], map.y.values[iy]);
     let i = map.index(ix, iy);
-    let Ok(report) = slurry_point(c, q, b).evaluate() else {
+    let Ok(report) = point(q, b).evaluate() else {
         assert_eq!(map.verdicts[i], None, "a cell the point refuses at {q} m³/s, {b} m");
         return None;
     };
     let (worst, limit) = map_checks(&report);
-    assert_eq!(map.verdicts[i], Some(worst), "verdict at flow {q} m³/s, bore {b} m");
-    assert_eq!(map.limit(i), limit, "limiting check at flow {q} m³/s, bore {b} m");
+    assert_eq!(map.verdicts[i], Some(worst), "verdict at flow {q} m³/s, {} {b} m", map.y.field);
+    assert_eq!(map.limit(i), limit, "limiting check at flow {q} m³/s, {} {b} m", map.y.field);
     let inlet = report.figure("inlet_pressure").unwrap().value.get();
     let drop = report.figure("total_pressure_drop").unwrap().value.get();
     assert!((map.layers[2].values[i] / inlet - 1.0).abs() < 1e-12, "inlet at {ix},{iy}");
@@ -148,16 +151,21 @@ fn slurry_cell_equals_point(c: &CaseFile, map: &Map, ix: usize, iy: usize) -> Op
 }
 
 /// Sampled cells on a coarse grid and on both sides of every boundary met along sampled rows and
-/// columns (at most `near` pairs) equal the point evaluations; returns (grid cells, boundary cells).
+/// columns (at most `near` pairs) equal the point evaluations, at least 30 and 20 of them;
+/// returns (grid cells, boundary cells).
 fn slurry_cells_equal_points(c: &CaseFile, near: usize) -> (usize, usize) {
-    let map = slurry_map(c);
+    map_cells_equal_points(&slurry_map(c), &|q, b| slurry_point(c, q, b), near)
+}
+
+/// As [`slurry_cells_equal_points`] for any slurry map and its point.
+fn map_cells_equal_points(map: &Map, point: PointAt<'_>, near: usize) -> (usize, usize) {
     let n = map.x.values.len();
     assert_eq!(map.verdicts.len(), n * n);
     let mut seen = std::collections::BTreeSet::new();
     let mut grid = 0;
     for iy in (0..n).step_by(37) {
         for ix in (0..n).step_by(41) {
-            if let Some(v) = slurry_cell_equals_point(c, &map, ix, iy) {
+            if let Some(v) = slurry_cell_equals_point(point, map, ix, iy) {
                 seen.insert(v);
                 grid += 1;
             }
@@ -184,11 +192,13 @@ fn slurry_cells_equal_points(c: &CaseFile, near: usize) -> (usize, usize) {
     let step = (pairs.len() / near.max(1)).max(1);
     let mut boundary = 0;
     for (a, b) in pairs.iter().step_by(step).take(near) {
-        slurry_cell_equals_point(c, &map, a.0, a.1);
-        slurry_cell_equals_point(c, &map, b.0, b.1);
+        slurry_cell_equals_point(point, map, a.0, a.1);
+        slurry_cell_equals_point(point, map, b.0, b.1);
         boundary += 2;
     }
     assert!(seen.len() >= 2, "the sampled cells should cross a boundary: {seen:?}");
+    println!("{}: {grid} grid cells, {boundary} at boundaries", map.key);
+    assert!(grid >= 30 && boundary >= 20, "{grid} grid cells, {boundary} at boundaries");
     (grid, boundary)
 }
 
@@ -196,9 +206,7 @@ fn slurry_cells_equal_points(c: &CaseFile, near: usize) -> (usize, usize) {
 fn slurry_map_cells_equal_point_evaluations_for_the_demo_line() {
     // The demo: 1.6 mm tubing and coil (one run upwards), a 0.5 mm fitting and a 0.25 mm seat
     // kept as entered, d90 60 µm, 20 bar rating.
-    let (grid, boundary) = slurry_cells_equal_points(&slurry_case(&[], None), 15);
-    println!("{grid} grid cells, {boundary} at boundaries");
-    assert!(grid >= 30 && boundary >= 20, "{grid} grid cells, {boundary} at boundaries");
+    slurry_cells_equal_points(&slurry_case(&[], None), 15);
 }
 
 #[test]
@@ -211,9 +219,7 @@ fn slurry_map_cells_equal_point_evaluations_for_a_tubing_only_line_with_one_size
         {"kind": "tubing", "orientation": "horizontal", "inner_diameter": {"value": 1.0, "unit": "mm"}, "length": {"value": 0.05, "unit": "m"}}
     ]);
     let c = slurry_case(&[("size_mode", json!("single")), ("particle_size", json!({"value": 10, "unit": "µm"}))], Some(elements));
-    let (grid, boundary) = slurry_cells_equal_points(&c, 15);
-    println!("{grid} grid cells, {boundary} at boundaries");
-    assert!(grid >= 30 && boundary >= 20, "{grid} grid cells, {boundary} at boundaries");
+    slurry_cells_equal_points(&c, 15);
     let map = slurry_map(&c);
     // Cells by verdict and limiting check.
     let mut counts = std::collections::BTreeMap::new();
@@ -251,6 +257,117 @@ fn slurry_map_needs_a_tubing_or_coil_element() {
     let sources: Vec<EntrySource<'_>> = c.elements.iter().map(EntrySource).collect();
     let refs: Vec<&dyn clearbore::physics::form::FieldSource> = sources.iter().map(|s| s as _).collect();
     assert!(Calculator::SlurryLine.map(&EntrySource(&c.inputs), &refs).is_none());
+}
+
+// ---- The slurry line: flow × particle size (d90) ----
+
+use clearbore::case::{Entry, MapKind};
+
+fn size_map(c: &CaseFile) -> Map {
+    c.map_of(MapKind::SlurrySize).unwrap().unwrap()
+}
+
+/// The case at flow `q` with its d90 (or its one size) at `d` (SI) and, for a distribution, d10
+/// and d50 scaled by the same factor d / d90, computed here from the case's entries in µm.
+fn size_point(c: &CaseFile, q: f64, d: f64) -> CaseFile {
+    let mut point = c.clone();
+    point.inputs.insert("flow".into(), Entry::Quantity { value: q * 60e6, unit: "mL/min".into(), range: None });
+    let um = |key: &str| match c.inputs.get(key) {
+        Some(Entry::Quantity { value, unit, .. }) if unit == "µm" => *value,
+        other => panic!("{key} should be in µm: {other:?}"),
+    };
+    let single = matches!(c.inputs.get("size_mode"), Some(Entry::Choice(k)) if k == "single");
+    let size = |value: f64| Entry::Quantity { value, unit: "µm".into(), range: None };
+    if single {
+        point.inputs.insert("particle_size".into(), size(d * 1e6));
+    } else {
+        let k = d * 1e6 / um("d90");
+        point.inputs.insert("d10".into(), size(um("d10") * k));
+        point.inputs.insert("d50".into(), size(um("d50") * k));
+        point.inputs.insert("d90".into(), size(d * 1e6));
+    }
+    point
+}
+
+#[test]
+fn size_map_cells_equal_point_evaluations_for_the_demo_line() {
+    // The demo (d10/d50/d90 8/25/60 µm; 1.6 mm tubing and coil, a 0.5 mm fitting, a 0.25 mm seat).
+    let c = slurry_case(&[], None);
+    let map = size_map(&c);
+    assert_eq!(map.y.field, "d90");
+    map_cells_equal_points(&map, &|q, d| size_point(&c, q, d), 15);
+    // Settling limits the low flows, clogging at the narrow openings the largest sizes.
+    let limits: std::collections::BTreeSet<_> = (0..map.verdicts.len()).filter_map(|i| map.limit(i)).collect();
+    println!("{limits:?}");
+    assert!(limits.iter().any(|l| l.contains("clogging")) && limits.iter().any(|l| l.contains("settling")), "{limits:?}");
+}
+
+#[test]
+fn size_map_cells_equal_point_evaluations_for_a_tubing_only_line_with_one_size() {
+    let elements = json!([
+        {"kind": "tubing", "orientation": "up", "inner_diameter": {"value": 1.0, "unit": "mm"}, "length": {"value": 0.5, "unit": "m"}},
+        {"kind": "coil", "orientation": "down", "inner_diameter": {"value": 1.0, "unit": "mm"}, "length": {"value": 2, "unit": "m"}},
+        {"kind": "tubing", "orientation": "horizontal", "inner_diameter": {"value": 0.8, "unit": "mm"}, "length": {"value": 0.05, "unit": "m"}}
+    ]);
+    let c = slurry_case(&[("size_mode", json!("single")), ("particle_size", json!({"value": 10, "unit": "µm"}))], Some(elements));
+    let map = size_map(&c);
+    assert_eq!(map.y.field, "particle_size");
+    map_cells_equal_points(&map, &|q, d| size_point(&c, q, d), 15);
+    for v in [Verdict::Fine, Verdict::Caution, Verdict::Problem] {
+        assert!(map.verdicts.contains(&Some(v)), "no {v:?} cell");
+    }
+}
+
+#[test]
+fn size_map_marks_the_case_and_its_cell_has_the_reports_verdict() {
+    for c in [slurry_case(&[], None), slurry_case(&[("size_mode", json!("single")), ("particle_size", json!({"value": 40, "unit": "µm"}))], None)] {
+        let map = size_map(&c);
+        let largest = if map.y.field == "d90" { 60e-6 } else { 40e-6 };
+        assert!((map.current.0 - 2e-6 / 60.0).abs() < 1e-15 && (map.current.1 / largest - 1.0).abs() < 1e-12);
+        // Axes: flow as the bore map's, size 1 µm to 1 mm.
+        assert_eq!(map.x, slurry_map(&c).x);
+        assert!((map.y.values[0] - 1e-6).abs() < 1e-18 && (map.y.values.last().unwrap() - 1e-3).abs() < 1e-15);
+        let (ix, iy) = (map.x.nearest(map.current.0), map.y.nearest(map.current.1));
+        let report = c.evaluate().unwrap();
+        let (worst, limit) = map_checks(&report);
+        let i = map.index(ix, iy);
+        assert_eq!(map.verdicts[i], Some(worst));
+        assert_eq!(map.limit(i), limit);
+    }
+    // A size outside 1 µm–1 mm widens the axis to take it.
+    let c = slurry_case(&[("size_mode", json!("single")), ("particle_size", json!({"value": 2, "unit": "mm"}))], None);
+    assert!((size_map(&c).y.values.last().unwrap() - 2e-3).abs() < 1e-15);
+}
+
+#[test]
+fn the_slurry_line_lists_both_maps_and_the_bore_map_first() {
+    let c = slurry_case(&[], None);
+    assert_eq!(Calculator::SlurryLine.maps(), &[MapKind::SlurryBore, MapKind::SlurrySize]);
+    assert_eq!(c.map_of(MapKind::SlurryBore).unwrap().unwrap(), slurry_map(&c));
+    assert!(c.map_of(MapKind::CartridgeSize).is_none());
+    // A line without tubing has no bore map but has a size map.
+    let elements = json!([{"kind": "fitting", "orientation": "horizontal", "inner_diameter": {"value": 0.5, "unit": "mm"}, "length": {"value": 5, "unit": "mm"}}]);
+    let c = slurry_case(&[], Some(elements));
+    assert!(c.map_of(MapKind::SlurryBore).is_none());
+    assert_eq!(size_map(&c).verdicts.len(), 256 * 256);
+}
+
+/// Native time of the 256² slurry size map (printed; run with `--profile bench` for the optimised
+/// figure): the demo's distribution (41 size classes and d90, so 42 terminal-speed solves per row)
+/// and the same line with one size (one solve per row).
+#[test]
+fn size_map_time() {
+    let one = [("size_mode", json!("single")), ("particle_size", json!({"value": 40, "unit": "µm"}))];
+    for (c, what) in [(slurry_case(&[], None), "d10/d50/d90"), (slurry_case(&one, None), "one size")] {
+        let mut best = f64::INFINITY;
+        for _ in 0..10 {
+            let t = std::time::Instant::now();
+            let map = size_map(&c);
+            best = best.min(t.elapsed().as_secs_f64() * 1e3);
+            assert_eq!(map.verdicts.len(), 256 * 256);
+        }
+        println!("slurry size map 256 × 256 (demo line, 5 elements, {what}): best of 10 {best:.2} ms");
+    }
 }
 
 /// Native time of the 256² slurry map (printed; run with `--profile bench` for the optimised figure).

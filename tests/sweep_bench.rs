@@ -49,11 +49,13 @@ fn main() {
         println!("    {:<22} {:>7.3} ms median, {:>7.3} ms p95", c.title(), times[100], times[190]);
     }
     println!("  operating map, demo case (best of 20):");
-    for c in Calculator::ALL.into_iter().filter(|c| c.has_map()) {
-        let case = CaseFile::from_json(c.demo_json()).unwrap();
-        let cells = case.map().unwrap().unwrap().verdicts.len();
-        let ms = best_ms(20, || drop(std::hint::black_box(case.map())));
-        println!("    {:<22} {ms:>7.3} ms for {cells} cells", c.title());
+    for c in Calculator::ALL {
+        for &kind in c.maps() {
+            let case = CaseFile::from_json(c.demo_json()).unwrap();
+            let cells = case.map_of(kind).unwrap().unwrap().verdicts.len();
+            let ms = best_ms(20, || drop(std::hint::black_box(case.map_of(kind))));
+            println!("    {:<22} {:<16} {ms:>7.3} ms for {cells} cells", c.title(), kind.key());
+        }
     }
 
     let (rho, mu) = sweep::water().unwrap();

@@ -13,7 +13,7 @@ use super::maps::MapView;
 use super::print::{PrintRecord, Printing, entry_rows};
 use super::ranges::{RangeBands, follow_ranges};
 use super::summary::AnswerSummary;
-use crate::case::{Calculator, CaseError, CaseFile, Entries, Entry, FormItem};
+use crate::case::{Calculator, CaseError, CaseFile, Entries, Entry, FormItem, MapKind};
 use crate::physics::form::{ChoiceSpec, FieldSource, Watcher};
 use crate::physics::input::{FieldSpec, InputError};
 use crate::physics::report::{Advice, Report, Verdict};
@@ -149,12 +149,73 @@ impl FieldSource for FormState {
     }
 }
 
-/// The folded map's heading for a calculator with a map.
-const fn map_title(calculator: Calculator) -> &'static str {
-    match calculator {
-        Calculator::SlurryLine => "Operating map: where this line works (flow × tubing bore)",
-        _ => "Operating map: where this cartridge works (flow × particle size)",
+/// An operating map on the page: `None` until computed.
+type MapSignal = RwSignal<Option<crate::physics::map::Map>>;
+
+/// One operating map on the page: which, its cells, whether it is open, and what a click does.
+#[derive(Clone, Copy)]
+struct PageMap {
+    kind: MapKind,
+    map: MapSignal,
+    open: RwSignal<bool>,
+    pick: Callback<(f64, f64)>,
+}
+
+/// The folded map's heading.
+const fn map_title(kind: MapKind) -> &'static str {
+    match kind {
+        MapKind::CartridgeSize => "Operating map: where this cartridge works (flow × particle size)",
+        MapKind::SlurryBore => "Operating map: where this line works (flow × tubing bore)",
+        MapKind::SlurrySize => "Operating map: where this line works (flow × particle size d90)",
     }
+}
+
+/// What a click on a cell of `map` does: its two values (SI) go into the entries its axes sweep.
+/// The slurry bore axis sets every tubing and coil element; the slurry size axis on d90 scales
+/// d10 and d50 with it ([`ParticleSize::with_largest`], as the map's rows do).
+fn map_pick(
+    calculator: Calculator,
+    map: MapSignal,
+    main: FormState,
+    elements: RwSignal<Vec<ElementForm>>,
+    applicable: Memo<Vec<&'static str>>,
+) -> Callback<(f64, f64)> {
+    use crate::physics::slurry::{self, size_distribution::ParticleSize};
+    use crate::physics::units::Length;
+    Callback::new(move |(x, y): (f64, f64)| {
+        let fields = map.with_untracked(|m| m.as_ref().map(|m| (m.x.field, m.y.field)));
+        let Some((fx, fy)) = fields else { return };
+        let shown = applicable.get_untracked();
+        for (key, si) in [(fx, x), (fy, y)] {
+            if calculator != Calculator::SlurryLine {
+                if shown.contains(&key) {
+                    main.set_si(key, si);
+                }
+            } else if key == slurry::D90.key {
+                let sizes = (main.quantity(&slurry::D10), main.quantity(&slurry::D50), main.quantity(&slurry::D90));
+                if let (Ok(d10), Ok(d50), Ok(d90)) = sizes {
+                    let entered = ParticleSize::Distribution { d10: Length::from_si(d10), d50: Length::from_si(d50), d90: Length::from_si(d90) };
+                    if let ParticleSize::Distribution { d10, d50, d90 } = entered.with_largest(Length::from_si(si)) {
+                        main.set_si(slurry::D10.key, d10.si());
+                        main.set_si(slurry::D50.key, d50.si());
+                        main.set_si(slurry::D90.key, d90.si());
+                    }
+                }
+            } else if key == slurry::ELEMENT_INNER_DIAMETER.key {
+                // The bore axis: every tubing and coil element takes the bore.
+                elements.with_untracked(|list| {
+                    for e in list {
+                        let kind = e.state.choice(&slurry::ELEMENT_KIND).ok().and_then(|k| slurry::ElementKind::ALL.get(k).copied());
+                        if kind.is_some_and(slurry::map::swept) {
+                            e.state.set_si(key, si);
+                        }
+                    }
+                });
+            } else if shown.contains(&key) {
+                main.set_si(key, si);
+            }
+        }
+    })
 }
 
 /// One element of a line on the page: a stable id (for the list) and its entries.
@@ -382,55 +443,35 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
         });
         follow_ranges(ranged, spread);
     }
-    // The operating map, for a calculator that has one: recomputed a moment after the last edit
-    // that gave a valid report (a map is tens of thousands of cells).
-    let map = RwSignal::new(None);
-    let map_open = RwSignal::new(false);
-    let pick = {
-        let main = form.main.clone();
-        let elements = form.elements;
-        Callback::new(move |(x, y): (f64, f64)| {
-            let fields = map.with_untracked(|m: &Option<crate::physics::map::Map>| m.as_ref().map(|m| (m.x.field, m.y.field)));
-            if let Some((fx, fy)) = fields {
-                let shown = applicable.get_untracked();
-                for (key, si) in [(fx, x), (fy, y)] {
-                    if shown.contains(&key) {
-                        main.set_si(key, si);
-                    } else if key == crate::physics::slurry::ELEMENT_INNER_DIAMETER.key && calculator == Calculator::SlurryLine {
-                        // The slurry map's bore axis: every tubing and coil element takes the bore.
-                        elements.with_untracked(|list| {
-                            for e in list {
-                                let kind = e.state.choice(&crate::physics::slurry::ELEMENT_KIND).ok().and_then(|k| crate::physics::slurry::ElementKind::ALL.get(k).copied());
-                                if kind.is_some_and(crate::physics::slurry::map::swept) {
-                                    e.state.set_si(key, si);
-                                }
-                            }
-                        });
-                    }
+    // The operating maps of the calculator: each recomputed a moment after the last edit that
+    // gave a valid report, and only while it is open (a map is tens of thousands of cells).
+    let maps: Vec<PageMap> = calculator
+        .maps()
+        .iter()
+        .map(|&kind| {
+            let map = RwSignal::new(None);
+            let open = RwSignal::new(false);
+            let pick = map_pick(calculator, map, form.main.clone(), form.elements, applicable);
+            let main = form.main.clone();
+            let elements = form.elements;
+            let later = super::Later::new();
+            Effect::new(move |_| {
+                if !open.get() || outcome.with(|o| o.stale) {
+                    return;
                 }
-            }
-        })
-    };
-    if calculator.has_map() {
-        let main = form.main.clone();
-        let form_elements = form.elements;
-        let later = super::Later::new();
-        Effect::new(move |_| {
-            if !map_open.get() || outcome.with(|o| o.stale) {
-                return;
-            }
-            report.track();
-            let main = main.clone();
-            let elements = form_elements;
-            later.run(std::time::Duration::from_millis(150), move || {
-                map.set(untrack(|| {
-                    let list = elements.get_untracked();
-                    let sources: Vec<&dyn FieldSource> = list.iter().map(|e| &e.state as &dyn FieldSource).collect();
-                    calculator.map(&main, &sources).and_then(Result::ok)
-                }));
+                report.track();
+                let main = main.clone();
+                later.run(std::time::Duration::from_millis(150), move || {
+                    map.set(untrack(|| {
+                        let list = elements.get_untracked();
+                        let sources: Vec<&dyn FieldSource> = list.iter().map(|e| &e.state as &dyn FieldSource).collect();
+                        calculator.map_of(kind, &main, &sources).and_then(Result::ok)
+                    }));
+                });
             });
-        });
-    }
+            PageMap { kind, map, open, pick }
+        })
+        .collect();
     let line = Memo::new(move |_| report.with(|r| r.as_ref().and_then(line_of)));
     // Whether there is a line at all: the drawing, table and detail are built once for it, not
     // again for each new value.
@@ -573,7 +614,7 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                     <h3>"Checks"</h3>
                     <CheckList report=report wanted=main_checks />
                     <AdviceView report=report wanted=shared_advice select=select />
-                    {calculator.has_map().then(|| view! { <MapView map=map pick=pick open=map_open title=map_title(calculator) /> })}
+                    {maps.iter().map(|&PageMap { kind, map, open, pick }| view! { <MapView map=map pick=pick open=open title=map_title(kind) key=kind.key() /> }).collect_view()}
                     <h3>"Results"</h3>
                     <ResultTable report=report keys=main_figures />
                     <PlotList report=report />

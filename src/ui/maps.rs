@@ -69,9 +69,10 @@ fn fraction(values: &[f64], v: f64) -> f64 {
 }
 
 /// The map, folded under `title` until opened (it is computed only while open), with its axes,
-/// legend, marker and read-out. `pick` receives the chosen cell's (x, y) values, SI.
+/// legend, marker and read-out. `pick` receives the chosen cell's (x, y) values, SI; `key` is the
+/// map's stable key (`data-testid=map-details-<key>` on the fold).
 #[component]
-pub fn MapView(map: RwSignal<Option<Map>>, pick: Callback<(f64, f64)>, open: RwSignal<bool>, title: &'static str) -> impl IntoView {
+pub fn MapView(map: RwSignal<Option<Map>>, pick: Callback<(f64, f64)>, open: RwSignal<bool>, title: &'static str, key: &'static str) -> impl IntoView {
     let canvas: NodeRef<Canvas> = NodeRef::new();
     let hover = RwSignal::new(None::<(usize, usize)>);
     Effect::new(move |_| {
@@ -160,7 +161,7 @@ pub fn MapView(map: RwSignal<Option<Map>>, pick: Callback<(f64, f64)>, open: RwS
         })
     };
     view! {
-        <details class="map" data-testid="map" prop:open=move || open.get() on:toggle:target=move |ev| open.set(ev.target().open())>
+        <details class="map" data-testid=format!("map-details-{key}") prop:open=move || open.get() on:toggle:target=move |ev| open.set(ev.target().open())>
             <summary data-testid="map-toggle"><h3>{title}</h3></summary>
             {move || (open.get() && map.with(Option::is_none)).then(|| view! { <p class="note">"Computing the map…"</p> })}
             {body}

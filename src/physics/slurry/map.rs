@@ -4,13 +4,15 @@
 //! bore of every tubing and coil element; fittings, mixers, valves, seats and frits keep their
 //! entered openings. The hindered settling speeds of the size classes depend on the bore (the
 //! wall term) but not on the flow: they are computed once per row, and once per map for the
-//! elements whose opening is kept.
+//! elements whose opening is kept. The second map, flow × particle size (d90), keeps every opening
+//! and scales the sizes per row; its settling speeds are computed per row.
 
 use super::element::{
     Line, clogging_verdict, deposited_mass_fraction, drop_for_model, effective_orientation, horizontal_verdict, line_drop, over_passes,
     pressure_verdict, up_flow_verdict,
 };
-use super::{ElementKind, LineElement, Orientation, SlurryInput, clogging, keys, shields, vertical};
+use super::size_distribution::ParticleSize;
+use super::{D90, ElementKind, LineElement, Orientation, PARTICLE_SIZE, SlurryInput, clogging, keys, shields, vertical};
 use crate::physics::map::{Map, MapAxis, MapLayer, fill_monotone};
 use crate::physics::pipe_flow;
 use crate::physics::report::Verdict;
@@ -94,6 +96,64 @@ fn settling(line: &Line, p: &Passage, q: VolumetricFlow) -> Verdict {
     }
 }
 
+/// The names of the checks a cell can be limited by, in the report's order: each element's
+/// settling then clogging, then the pressure budget.
+fn limit_names(count: usize) -> Vec<String> {
+    let mut names: Vec<String> = Vec::with_capacity(2 * count + 1);
+    for i in 0..count {
+        names.push(keys::SETTLING[i].label.to_owned());
+        names.push(keys::CLOGGING[i].label.to_owned());
+    }
+    names.push("Pressure budget".to_owned());
+    names
+}
+
+/// One row of a map at the flows `flows`: each element's settling verdict (by bisection along the
+/// row, or at every cell with `every_cell`), its clogging verdict and the pressure budget's
+/// (`budget[ix]`, `None` where the drop is not finite) give each cell's worst verdict and the
+/// first check, in the report's order, that has it.
+fn fill_row(line: &Line, passages: &[Passage], flows: &[f64], budget: &[Option<Verdict>], every_cell: bool, verdicts: &mut [Option<Verdict>], limiting: &mut [Option<usize>]) {
+    let n = flows.len();
+    // Each element's settling verdict along the row: it only improves as the flow rises, so it
+    // is found at the ends and wherever it changes (bisection), not at every cell.
+    let settling_rows: Vec<Vec<Verdict>> = passages
+        .iter()
+        .map(|p| {
+            let at = |ix: usize| settling(line, p, VolumetricFlow::from_si(flows[ix]));
+            let mut out = vec![Verdict::Fine; n];
+            if every_cell {
+                out.iter_mut().enumerate().for_each(|(ix, v)| *v = at(ix));
+            } else {
+                fill_monotone(&mut out, 0, n - 1, &at);
+            }
+            out
+        })
+        .collect();
+    let mut list = vec![Verdict::Fine; 2 * passages.len() + 1];
+    for ix in 0..n {
+        let Some(pressure) = budget[ix] else { continue };
+        for (j, p) in passages.iter().enumerate() {
+            list[2 * j] = settling_rows[j][ix];
+            list[2 * j + 1] = p.clogging;
+        }
+        list[2 * passages.len()] = pressure;
+        // The first of the worst, in the report's order.
+        let (at, worse) = list.iter().enumerate().fold((0, Verdict::Fine), |(a, w), (k, &v)| if v > w { (k, v) } else { (a, w) });
+        verdicts[ix] = Some(worse);
+        limiting[ix] = (worse != Verdict::Fine).then_some(at);
+    }
+}
+
+/// The line's pressure drop at `flow` with the recommended suspension viscosity, and its budget
+/// verdict (against the worst viscosity model), `None` where the drop is not finite.
+fn budget(input: &SlurryInput, elements: &[LineElement], mu_s: f64, mu_fig: &crate::physics::report::Figure, flow: VolumetricFlow) -> (f64, Option<Verdict>) {
+    let total = line_drop(elements, mu_s, flow);
+    let worst = mu_fig.estimates.iter().map(|m| drop_for_model(total, m, mu_s)).fold(f64::NEG_INFINITY, f64::max);
+    let back = input.back_pressure.si();
+    let verdict = (total.is_finite() && worst.is_finite()).then(|| pressure_verdict(back + total, back, worst, input.rating.si()));
+    (total, verdict)
+}
+
 /// The map of `input` with `n` × `n` cells, or `None` when the line has no tubing or coil (the
 /// bore axis would change nothing) or its settling speeds cannot be computed.
 pub fn line_map(input: &SlurryInput, n: usize) -> Option<Map> {
@@ -115,22 +175,13 @@ fn build(input: &SlurryInput, n: usize, every_cell: bool) -> Option<Map> {
     let mut drop = vec![f64::NAN; cells];
     let mut inlet = vec![f64::NAN; cells];
     let back = input.back_pressure.si();
-    let rating = input.rating.si();
     let mu_s = line.mu_s;
-    // The passages whose opening is kept, once.
-    // The terminal speeds once (the point evaluation fails where they cannot be found).
+    // The terminal speeds once (the point evaluation fails where they cannot be found), and the
+    // passages whose opening is kept.
     let terminal = terminal(&line)?;
     let kept: Vec<Option<Passage>> = input.elements.iter().map(|e| (!swept(e.kind)).then(|| passage(&line, &terminal, *e))).collect();
-    // The checks in the report's order: each element's settling then clogging, then the budget.
     let count = input.elements.len().min(keys::MAX_ELEMENTS);
-    let mut limit_names: Vec<String> = Vec::with_capacity(2 * count + 1);
-    for i in 0..count {
-        limit_names.push(keys::SETTLING[i].label.to_owned());
-        limit_names.push(keys::CLOGGING[i].label.to_owned());
-    }
-    limit_names.push("Pressure budget".to_owned());
-    let mut verdict_list = vec![Verdict::Fine; 2 * count + 1];
-    let mut settling_rows = vec![vec![Verdict::Fine; n]; count];
+    let mut row_budget = vec![None; n];
     for (iy, &b) in y.values.iter().enumerate() {
         let tubing = Length::from_si(b);
         let elements: Vec<LineElement> =
@@ -144,46 +195,25 @@ fn build(input: &SlurryInput, n: usize, every_cell: bool) -> Option<Map> {
             .filter_map(|(e, k)| if swept(e.kind) { Some(Passage { element: *e, ..row.clone() }) } else { k.clone() })
             .collect();
         let probe = elements.iter().find(|e| swept(e.kind)).map_or(tubing, |e| e.inner_diameter);
-        // Each element's settling verdict along the row: it only improves as the flow rises, so
-        // it is found at the ends and wherever it changes (bisection), not at every cell.
-        for (p, out) in passages.iter().zip(settling_rows.iter_mut()) {
-            let at = |ix: usize| settling(&line, p, VolumetricFlow::from_si(x.values[ix]));
-            if every_cell {
-                out.iter_mut().enumerate().for_each(|(ix, v)| *v = at(ix));
-            } else {
-                fill_monotone(out, 0, n - 1, &at);
-            }
-        }
         for (ix, &q) in x.values.iter().enumerate() {
             let flow = VolumetricFlow::from_si(q);
-            for (j, p) in passages.iter().enumerate() {
-                verdict_list[2 * j] = settling_rows[j][ix];
-                verdict_list[2 * j + 1] = p.clogging;
-            }
-            let total = line_drop(&elements, mu_s, flow);
-            let worst = mu_fig.estimates.iter().map(|m| drop_for_model(total, m, mu_s)).fold(f64::NEG_INFINITY, f64::max);
-            verdict_list[2 * count] = pressure_verdict(back + total, back, worst, rating);
-            let i = iy * n + ix;
-            if total.is_finite() && worst.is_finite() {
-                // The first of the worst, in the report's order.
-                let (at, worse) = verdict_list.iter().enumerate().fold((0, Verdict::Fine), |(a, w), (k, &v)| if v > w { (k, v) } else { (a, w) });
-                verdicts[i] = Some(worse);
-                limiting[i] = (worse != Verdict::Fine).then_some(at);
+            let (total, verdict) = budget(input, &elements, mu_s, &mu_fig, flow);
+            row_budget[ix] = verdict;
+            if verdict.is_some() {
+                let i = iy * n + ix;
                 velocity[i] = pipe_flow::mean_velocity(flow, probe).si();
                 drop[i] = total;
                 inlet[i] = back + total;
             }
         }
+        let span = iy * n..(iy + 1) * n;
+        fill_row(&line, &passages, &x.values, &row_budget, every_cell, &mut verdicts[span.clone()], &mut limiting[span]);
     }
     let kept_words = if input.elements.iter().any(|e| !swept(e.kind)) { "; fittings, mixers, valves, seats and frits keep their entered openings" } else { "" };
     let basis = format!(
-        "Each row sets every tubing and coil element to its bore{kept_words}; the mark is at the narrowest tubing or coil bore of the case ({} mm). \
-         Colour: the worst over the elements of settling (deposition in horizontal runs by the Thomas/Fuchs laminar formula with the Shields number; carrying in up-flow, margin U ≥ 5 v_h; \
-         Richardson–Zaki hindered settling) and clogging (passage over d90: bridging below 3, Marin et al. 2018; margin below 10, common practice, no source), \
-         and the pressure budget (Hagen–Poiseuille with the suspension viscosity against the {} bar(g) rating; caution within 20 %, common practice, no source). \
-         The tubing rating at temperature and the liquid's checks are in the report, not on the map.",
+        "Each row sets every tubing and coil element to its bore{kept_words}; the mark is at the narrowest tubing or coil bore of the case ({} mm). {}",
         format_significant(bore * 1e3, 3),
-        format_significant(rating / 1e5, 3),
+        colour_words(input),
     );
     Some(Map {
         key: "slurry_map",
@@ -197,9 +227,128 @@ fn build(input: &SlurryInput, n: usize, every_cell: bool) -> Option<Map> {
             MapLayer { label: "Line pressure drop", dimension: Dimension::PressureDifference, values: drop },
             MapLayer { label: "Inlet pressure (gauge)", dimension: Dimension::PressureDifference, values: inlet },
         ],
-        limit_names,
+        limit_names: limit_names(count),
         limiting,
         current: (input.flow.si(), bore),
+    })
+}
+
+/// What colours a cell of either slurry map, with the sources.
+fn colour_words(input: &SlurryInput) -> String {
+    format!(
+        "Colour: the worst over the elements of settling (deposition in horizontal runs by the Thomas/Fuchs laminar formula with the Shields number; carrying in up-flow, margin U ≥ 5 v_h; \
+         Richardson–Zaki hindered settling) and clogging (passage over d90: bridging below 3, Marin et al. 2018; margin below 10, common practice, no source), \
+         and the pressure budget (Hagen–Poiseuille with the suspension viscosity against the {} bar(g) rating; caution within 20 %, common practice, no source). \
+         The tubing rating at temperature and the liquid's checks are in the report, not on the map.",
+        format_significant(input.rating.si() / 1e5, 3),
+    )
+}
+
+/// Particle-size axis: 1 µm to 1 mm, widened to take the case's d90 (or its one size).
+fn size_axis(input: &SlurryInput, largest: f64, n: usize) -> MapAxis {
+    let (field, label) = match input.size {
+        ParticleSize::Single { .. } => (PARTICLE_SIZE.key, "Particle size (one size)"),
+        ParticleSize::Distribution { .. } => (D90.key, "Particle size d90 (d10 and d50 scaled with it)"),
+    };
+    MapAxis::log(field, label, Dimension::Length, 1e-6_f64.min(largest), 1e-3_f64.max(largest), n)
+}
+
+/// The line's second map: flow × particle size, with `n` × `n` cells, or `None` when the
+/// suspension viscosity cannot be computed. Each row scales the sizes by one factor
+/// ([`ParticleSize::with_largest`]) so that the d90 (or the one size) is the row's value; every
+/// element keeps its entered opening. The terminal and hindered speeds depend on the size, so they
+/// are computed per row (once per distinct opening); the pressure budget does not (the suspension
+/// viscosity depends on the solids fraction alone), so it is computed once per column. A row
+/// whose settling speeds cannot be computed is left uncomputed, as the point evaluation fails there.
+pub fn size_map(input: &SlurryInput, n: usize) -> Option<Map> {
+    build_size(input, n, false)
+}
+
+/// The size map; `every_cell` as for [`build`].
+fn build_size(input: &SlurryInput, n: usize, every_cell: bool) -> Option<Map> {
+    let (line, mu_fig) = Line::new(input).ok()?;
+    let largest = input.size.largest().si();
+    let x = flow_axis(input, n);
+    let y = size_axis(input, largest, n);
+    let count = input.elements.len().min(keys::MAX_ELEMENTS);
+    let elements = &input.elements[..count];
+    let cells = n * n;
+    let mut verdicts = vec![None; cells];
+    let mut limiting = vec![None; cells];
+    let mut velocity = vec![f64::NAN; cells];
+    let mut drop = vec![f64::NAN; cells];
+    let mut inlet = vec![f64::NAN; cells];
+    let mut opening = vec![f64::NAN; cells];
+    let back = input.back_pressure.si();
+    // The velocity shown: in the narrowest tubing or coil, or else in the first element.
+    let tubing = elements.iter().filter(|e| swept(e.kind)).map(|e| e.inner_diameter).reduce(|a, b| if b.si() < a.si() { b } else { a });
+    let (probe, velocity_label) = match tubing {
+        Some(d) => (d, "Mean velocity in the tubing"),
+        None => (elements.first()?.inner_diameter, "Mean velocity in the first element"),
+    };
+    let narrowest = elements.iter().map(|e| e.inner_diameter.si()).fold(f64::INFINITY, f64::min);
+    // The budget per column (the same in every row).
+    let columns: Vec<(f64, Option<Verdict>)> = x.values.iter().map(|&q| budget(input, elements, line.mu_s, &mu_fig, VolumetricFlow::from_si(q))).collect();
+    let column_budget: Vec<Option<Verdict>> = columns.iter().map(|c| c.1).collect();
+    // The distinct openings: elements of one bore share their settling speeds.
+    let mut bores: Vec<Length> = Vec::new();
+    for e in elements {
+        if !bores.iter().any(|b| b.si() == e.inner_diameter.si()) {
+            bores.push(e.inner_diameter);
+        }
+    }
+    let mut row_input = input.clone();
+    for (iy, &d) in y.values.iter().enumerate() {
+        row_input.size = input.size.with_largest(Length::from_si(d));
+        let Ok((row_line, _)) = Line::new(&row_input) else { continue };
+        let Some(terminal) = terminal(&row_line) else { continue };
+        let by_bore: Vec<Passage> = bores.iter().map(|&b| passage(&row_line, &terminal, LineElement { inner_diameter: b, ..elements[0] })).collect();
+        let passages: Vec<Passage> = elements
+            .iter()
+            .filter_map(|e| by_bore.iter().find(|p| p.element.inner_diameter.si() == e.inner_diameter.si()).map(|p| Passage { element: *e, ..p.clone() }))
+            .collect();
+        for (ix, (&q, &(total, verdict))) in x.values.iter().zip(&columns).enumerate() {
+            if verdict.is_some() {
+                let i = iy * n + ix;
+                velocity[i] = pipe_flow::mean_velocity(VolumetricFlow::from_si(q), probe).si();
+                drop[i] = total;
+                inlet[i] = back + total;
+                opening[i] = narrowest / d;
+            }
+        }
+        let span = iy * n..(iy + 1) * n;
+        fill_row(&row_line, &passages, &x.values, &column_budget, every_cell, &mut verdicts[span.clone()], &mut limiting[span]);
+    }
+    let rows = match input.size {
+        ParticleSize::Single { .. } => "Each row sets the one particle size".to_owned(),
+        ParticleSize::Distribution { d10, d50, d90 } => format!(
+            "Each row sets d90 and scales d10 and d50 by the same factor, keeping the shape of the distribution (d10/d90 {}, d50/d90 {})",
+            format_significant(d10.si() / d90.si(), 3),
+            format_significant(d50.si() / d90.si(), 3)
+        ),
+    };
+    let basis = format!(
+        "{rows}; every element keeps its entered opening, and the pressure drop does not depend on the size (the suspension viscosity depends on the solids fraction alone). \
+         The mark is at the case's size ({} µm). {}",
+        format_significant(largest * 1e6, 3),
+        colour_words(input),
+    );
+    Some(Map {
+        key: "slurry_size_map",
+        title: "Where this line works: flow × particle size",
+        basis,
+        x,
+        y,
+        verdicts,
+        layers: vec![
+            MapLayer { label: velocity_label, dimension: Dimension::Velocity, values: velocity },
+            MapLayer { label: "Line pressure drop", dimension: Dimension::PressureDifference, values: drop },
+            MapLayer { label: "Inlet pressure (gauge)", dimension: Dimension::PressureDifference, values: inlet },
+            MapLayer { label: "Narrowest opening over d90", dimension: Dimension::Number, values: opening },
+        ],
+        limit_names: limit_names(count),
+        limiting,
+        current: (input.flow.si(), largest),
     })
 }
 
@@ -224,16 +373,35 @@ mod tests {
 
     #[test]
     fn bisection_along_the_rows_gives_every_cell_as_evaluating_each_does() {
-        // The demo (horizontal and up-flow elements, d10/d50/d90), one 40 µm size, and 8 passes of a loop.
+        // Both maps, for the demo (horizontal and up-flow elements, d10/d50/d90), one 40 µm size,
+        // and 8 passes of a loop.
         let single = [("size_mode", serde_json::json!("single")), ("particle_size", serde_json::json!({"value": 40, "unit": "µm"}))];
         let looped = [("operation", serde_json::json!("recirculation")), ("passes", serde_json::json!({"value": 8, "unit": ""}))];
+        type Builder = fn(&SlurryInput, usize, bool) -> Option<Map>;
+        let maps: [Builder; 2] = [build, build_size];
         for input in [demo(&[]), demo(&single), demo(&looped)] {
-            let fast = line_map(&input, CELLS).unwrap();
-            let slow = build(&input, CELLS, true).unwrap();
-            assert_eq!(fast.verdicts, slow.verdicts);
-            assert_eq!(fast.limiting, slow.limiting);
-            let kinds: std::collections::BTreeSet<_> = fast.verdicts.iter().collect();
-            assert!(kinds.len() >= 2, "{kinds:?}");
+            for map in maps {
+                let fast = map(&input, CELLS, false).unwrap();
+                let slow = map(&input, CELLS, true).unwrap();
+                assert_eq!(fast.verdicts, slow.verdicts, "{}", fast.key);
+                assert_eq!(fast.limiting, slow.limiting, "{}", fast.key);
+                let kinds: std::collections::BTreeSet<_> = fast.verdicts.iter().collect();
+                assert!(kinds.len() >= 2, "{}: {kinds:?}", fast.key);
+            }
+        }
+    }
+
+    #[test]
+    fn the_suspension_viscosity_and_so_the_budget_do_not_depend_on_the_particle_size() {
+        // The size map computes the budget once per column on this.
+        let mut input = demo(&[]);
+        let (line, figure) = Line::new(&input).unwrap();
+        let (mu_s, estimates) = (line.mu_s, figure.estimates.iter().map(|e| e.value.get()).collect::<Vec<_>>());
+        for d in [1e-6, 3e-5, 1e-3] {
+            input.size = input.size.with_largest(Length::from_si(d));
+            let (line, figure) = Line::new(&input).unwrap();
+            assert_eq!(line.mu_s, mu_s);
+            assert_eq!(figure.estimates.iter().map(|e| e.value.get()).collect::<Vec<_>>(), estimates);
         }
     }
 

@@ -65,6 +65,19 @@ impl ParticleSize {
         }
     }
 
+    /// The same sizes scaled by one factor so that the largest ([`ParticleSize::largest`]) is
+    /// `largest`: one size becomes `largest`; a distribution keeps its shape (σ and the ratios
+    /// d₁₀/d₉₀, d₅₀/d₉₀), which is how the operating map's particle-size axis moves the case.
+    pub fn with_largest(&self, largest: Length) -> Self {
+        match *self {
+            ParticleSize::Single { .. } => ParticleSize::Single { diameter: largest },
+            ParticleSize::Distribution { d10, d50, d90 } => {
+                let k = largest.si() / d90.si();
+                ParticleSize::Distribution { d10: Length::from_si(d10.si() * k), d50: Length::from_si(d50.si() * k), d90: largest }
+            }
+        }
+    }
+
     /// σ of ln d; 0 for one size.
     pub fn sigma(&self) -> f64 {
         match *self {
@@ -128,6 +141,16 @@ mod tests {
         // Mass below d10 should be close to 10 % (class discretisation: within 2 %-points).
         let below: f64 = c.iter().filter(|k| k.diameter.si() < 10e-6).map(|k| k.weight).sum();
         assert!((below - 0.1).abs() < 0.02, "{below}");
+    }
+
+    #[test]
+    fn scaling_to_a_new_largest_size_keeps_the_shape() {
+        let scaled = dist().with_largest(Length::from_si(900e-6));
+        let ParticleSize::Distribution { d10, d50, d90 } = scaled else { panic!("{scaled:?}") };
+        assert!((d10.si() / 100e-6 - 1.0).abs() < 1e-12 && (d50.si() / 300e-6 - 1.0).abs() < 1e-12 && d90.si() == 900e-6);
+        assert!((scaled.sigma() / dist().sigma() - 1.0).abs() < 1e-12);
+        let one = ParticleSize::Single { diameter: Length::from_si(5e-5) }.with_largest(Length::from_si(2e-6));
+        assert_eq!(one, ParticleSize::Single { diameter: Length::from_si(2e-6) });
     }
 
     #[test]
