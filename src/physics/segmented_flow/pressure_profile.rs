@@ -368,12 +368,26 @@ impl Coil {
             let cell = UnitCell::with_frequency(self.flow_at(p, n), frequency).ok()?;
             Some([self.pressure_model.gradient(&cell), rate, 1.0 / cell.bubble.velocity])
         };
-        let y = [0.0, self.gas_at(0.0), 0.0];
+        // The state is integrated in units of its own size (the drop, gas flow and time the
+        // outlet's rates give over the whole coil), so that the absolute tolerance is the same
+        // small share of each whatever the units: found by the long run of
+        // `segmented_flow_over_its_domain`, a drop of 10⁻⁷ Pa held in pascals against an absolute
+        // tolerance of 10⁻¹² Pa differed by 2×10⁻⁶ between units.
+        let n0 = self.gas_at(0.0);
+        let at_outlet = rhs(0.0, &[0.0, n0, 0.0]).ok_or(SegmentedFlowError::Profile(crate::physics::ode::OdeError::InvalidInitialState))?;
+        let size = |v: f64| if v.is_finite() && v > 0.0 { v } else { 1.0 };
+        let scale = [size(at_outlet[0] * l), size(n0), size(at_outlet[2] * l)];
+        let scaled = |x: f64, z: &[f64; 3]| -> Option<[f64; 3]> {
+            let d = rhs(x, &[z[0] * scale[0], z[1] * scale[1], z[2] * scale[2]])?;
+            Some([d[0] / scale[0], d[1] / scale[1], d[2] / scale[2]])
+        };
+        let z = [0.0, n0 / scale[1], 0.0];
         let tol = OdeTolerance { relative: 1e-10, absolute: 1e-12, max_steps: 100_000, min_step_fraction: 1e-12 };
         let xs: Vec<f64> = if record { (0..=SEGMENTS).map(|i| if i == SEGMENTS { l } else { l * i as f64 / SEGMENTS as f64 }).collect() } else { Vec::new() };
-        let (sol, states) = dormand_prince_dense(rhs, 0.0, l, y, tol, &xs)?;
-        let last = *sol.last().ok_or(SegmentedFlowError::Profile(crate::physics::ode::OdeError::InvalidInitialState))?;
-        Ok(March { last, states, xs })
+        let (sol, states) = dormand_prince_dense(scaled, 0.0, l, z, tol, &xs)?;
+        let unscale = |z: &[f64; 3]| [z[0] * scale[0], z[1] * scale[1], z[2] * scale[2]];
+        let last = unscale(sol.last().ok_or(SegmentedFlowError::Profile(crate::physics::ode::OdeError::InvalidInitialState))?);
+        Ok(March { last, states: states.iter().map(unscale).collect(), xs })
     }
 
     /// Pressure drop over the coil, Pa: the same fixed point as [`Coil::profile`] without the
