@@ -551,13 +551,6 @@ pub struct TubeState {
     pub outlet: UnitCell,
 }
 
-/// Every tube of a run (flow order) at bubble frequency `frequency`, marched from the run's
-/// outlet: the same integration as [`settle_run`]'s.
-pub fn run_states(tubes: &[Coil], frequency: f64) -> Result<Vec<TubeState>, SegmentedFlowError> {
-    let (_, marches) = march_run(tubes, frequency, false)?;
-    states_of(tubes, frequency, &marches)
-}
-
 /// The settled run ([`settle_run`] from the run's outlet pressure): its frequency and every tube
 /// at it, read from the fixed point's last march rather than marched again.
 pub fn settled_states(tubes: &[Coil]) -> Result<(f64, Vec<TubeState>), SegmentedFlowError> {
