@@ -63,6 +63,8 @@ pub enum MapKind {
     SlurryBore,
     /// Slurry line: flow × particle size (d90, the distribution scaled with it).
     SlurrySize,
+    /// Gas–liquid coil: gas flow × liquid flow.
+    GasLiquidFlows,
 }
 
 impl MapKind {
@@ -72,6 +74,7 @@ impl MapKind {
             MapKind::CartridgeSize => "cartridge_map",
             MapKind::SlurryBore => "slurry_map",
             MapKind::SlurrySize => "slurry_size_map",
+            MapKind::GasLiquidFlows => "gas_liquid_map",
         }
     }
 }
@@ -533,7 +536,7 @@ impl Calculator {
 
     /// Whether [`Calculator::map`] gives a map for this calculator (its first of [`Calculator::maps`]).
     pub const fn has_map(self) -> bool {
-        matches!(self, Calculator::PackedBed | Calculator::SlurryLine)
+        matches!(self, Calculator::PackedBed | Calculator::SlurryLine | Calculator::SegmentedFlow)
     }
 
     /// The operating maps of this calculator, in the order the page shows them (empty for none):
@@ -542,7 +545,8 @@ impl Calculator {
         match self {
             Calculator::PackedBed => &[MapKind::CartridgeSize],
             Calculator::SlurryLine => &[MapKind::SlurryBore, MapKind::SlurrySize],
-            Calculator::TubularReactor | Calculator::SegmentedFlow | Calculator::GasLiquidBed | Calculator::Setup => &[],
+            Calculator::SegmentedFlow => &[MapKind::GasLiquidFlows],
+            Calculator::TubularReactor | Calculator::GasLiquidBed | Calculator::Setup => &[],
         }
     }
 
@@ -551,7 +555,7 @@ impl Calculator {
     /// invalid). `elements` as for [`Calculator::evaluate`].
     pub fn map_of(self, kind: MapKind, src: &dyn FieldSource, elements: &[&dyn FieldSource]) -> Option<Result<crate::physics::map::Map, CaseError>> {
         match (self, kind) {
-            (_, MapKind::CartridgeSize | MapKind::SlurryBore) if self.maps().first() == Some(&kind) => self.map(src, elements),
+            (_, MapKind::CartridgeSize | MapKind::SlurryBore | MapKind::GasLiquidFlows) if self.maps().first() == Some(&kind) => self.map(src, elements),
             (Calculator::SlurryLine, MapKind::SlurrySize) => match SlurryInput::from_source(src, elements) {
                 Ok(input) => slurry::map::size_map(&input, slurry::map::CELLS).map(Ok),
                 Err(e) => Some(Err(CaseError::Inputs(e))),
@@ -575,7 +579,24 @@ impl Calculator {
                 Ok(input) => slurry::map::line_map(&input, slurry::map::CELLS).map(Ok),
                 Err(e) => Some(Err(CaseError::Inputs(e))),
             },
-            Calculator::TubularReactor | Calculator::SegmentedFlow | Calculator::GasLiquidBed | Calculator::Setup => None,
+            Calculator::SegmentedFlow => Some(
+                SegmentedFlowInput::from_source(src)
+                    .map(|input| gas::map::gas_liquid_map(&input, gas::map::CELLS))
+                    .map_err(CaseError::Inputs),
+            ),
+            Calculator::TubularReactor | Calculator::GasLiquidBed | Calculator::Setup => None,
+        }
+    }
+
+    /// The operating map `kind` as a job the page computes a few cells at a time
+    /// ([`crate::physics::map::MapJob`]): the gas–liquid map cell by cell, the others already
+    /// done. As [`Calculator::map_of`] otherwise.
+    pub fn map_job(self, kind: MapKind, src: &dyn FieldSource, elements: &[&dyn FieldSource]) -> Option<Result<crate::physics::map::MapJob, CaseError>> {
+        match (self, kind) {
+            (Calculator::SegmentedFlow, MapKind::GasLiquidFlows) => Some(
+                SegmentedFlowInput::from_source(src).map(|input| gas::map::job(&input, gas::map::CELLS)).map_err(CaseError::Inputs),
+            ),
+            _ => self.map_of(kind, src, elements).map(|m| m.map(crate::physics::map::MapJob::done)),
         }
     }
 

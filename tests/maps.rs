@@ -412,3 +412,159 @@ fn map_boundaries_are_drawn_exactly_where_the_verdict_or_the_limiting_check_chan
     assert!(verdict_edges > 0 && limit_edges > 0, "{verdict_edges} {limit_edges}");
     assert!(verdict_edges + limit_edges < nx * ny / 10);
 }
+
+// ---- The gas–liquid coil: gas flow × liquid flow ----
+
+fn gas_case(changes: &[(&str, Value)]) -> CaseFile {
+    let mut doc: Value = serde_json::from_str(Calculator::SegmentedFlow.demo_json()).unwrap();
+    for (k, v) in changes {
+        doc["inputs"][*k] = v.clone();
+    }
+    CaseFile::from_json(&doc.to_string()).unwrap()
+}
+
+fn gas_map(c: &CaseFile) -> Map {
+    Calculator::SegmentedFlow.map(&EntrySource(&c.inputs), &[]).unwrap().unwrap()
+}
+
+/// Compares every `step`-th cell of the gas–liquid map of `c` with the point evaluation of the
+/// case with its gas flow (mL/min at the same reference state) and liquid flow set to the cell's;
+/// the verdicts seen.
+fn gas_cells_equal_points(c: &CaseFile, step: usize) -> std::collections::BTreeSet<(Verdict, Option<String>)> {
+    let map = gas_map(c);
+    let n = map.x.values.len();
+    assert_eq!(map.verdicts.len(), n * n);
+    let mut seen = std::collections::BTreeSet::new();
+    for iy in (0..n).step_by(step) {
+        for ix in (0..n).step_by(step) {
+            let (g, l) = (map.x.values[ix], map.y.values[iy]);
+            let mut point = c.clone();
+            point.inputs.insert("gas_flow".into(), clearbore::case::Entry::Quantity { value: g * 60e6, unit: "mL/min".into(), range: None });
+            point.inputs.insert("liquid_flow".into(), clearbore::case::Entry::Quantity { value: l * 60e6, unit: "mL/min".into(), range: None });
+            let i = map.index(ix, iy);
+            let Ok(report) = point.evaluate() else {
+                assert_eq!(map.verdicts[i], None, "a cell the point refuses at gas {g}, liquid {l} m³/s");
+                continue;
+            };
+            let worst = report.checks.iter().map(|c| c.verdict).max().unwrap();
+            assert_eq!(map.verdicts[i], Some(worst), "verdict at gas {g}, liquid {l} m³/s");
+            let first = report.checks.iter().find(|c| c.verdict == worst).unwrap().topic;
+            assert_eq!(map.limit(i), (worst != Verdict::Fine).then_some(first), "limiting check at {ix},{iy}");
+            let want = [
+                report.figure("slug_length").unwrap().value.get(),
+                report.figure("residence_time").unwrap().value.get(),
+                report.figure("gas_equivalents").unwrap().value.get(),
+            ];
+            for (layer, w) in [0, 1, 3].into_iter().zip(want) {
+                assert!((map.layers[layer].values[i] / w - 1.0).abs() < 1e-12, "{} at {ix},{iy}: {} vs {w}", map.layers[layer].label, map.layers[layer].values[i]);
+            }
+            // The inlet pressure in gauge: the absolute inlet less the outlet's absolute pressure,
+            // plus the set point (the cases here enter it in bar).
+            let Some(clearbore::case::Entry::Quantity { value: set_point, unit, .. }) = point.inputs.get("back_pressure") else { panic!("no back-pressure") };
+            assert_eq!(unit, "bar");
+            let gauge = report.figure("inlet_pressure").unwrap().value.get() - report.figure("outlet_pressure").unwrap().value.get() + set_point * 1e5;
+            assert!((map.layers[2].values[i] / gauge - 1.0).abs() < 1e-9, "inlet gauge at {ix},{iy}: {} vs {gauge}", map.layers[2].values[i]);
+            seen.insert((worst, map.limit(i).map(str::to_owned)));
+        }
+    }
+    seen
+}
+
+#[test]
+fn gas_liquid_map_cells_equal_point_evaluations_for_the_demo() {
+    // The demo (4.5 % O2 in N2 into acetonitrile at 60 °C, 1 mm × 15 m, 15 bar back-pressure):
+    // every cell is at least a caution (the gas takes most of the coil's volume, so the liquid's
+    // residence time is a fraction of the coil's volume over its flow), and the check that sets
+    // it changes over the map: the pressure budget at high flows, the flow regime at high gas
+    // flow, the fitted ranges of the slug lengths at low gas flow. Sampled every third cell.
+    let seen = gas_cells_equal_points(&gas_case(&[]), 3);
+    assert!(seen.len() >= 3, "the sampled cells should cross boundaries: {seen:?}");
+}
+
+#[test]
+fn gas_liquid_map_with_pure_oxygen_over_a_hot_solvent_is_a_problem_in_every_cell() {
+    // Pure O2 over acetonitrile at 60 °C: the gas hazard does not depend on the flows, so it
+    // colours every cell red, and the map names it as what limits where nothing else is a problem.
+    let c = gas_case(&[("gas_mole_fraction", json!({"value": 100, "unit": "%"}))]);
+    let seen = gas_cells_equal_points(&c, 10);
+    assert!(seen.iter().all(|(v, _)| *v == Verdict::Problem), "{seen:?}");
+    let map = gas_map(&c);
+    assert!(map.verdicts.iter().flatten().all(|v| *v == Verdict::Problem));
+    assert!(map.limit_names.iter().any(|n| n.to_lowercase().contains("hazard") || n.to_lowercase().contains("oxygen")), "{:?}", map.limit_names);
+}
+
+#[test]
+fn the_gas_liquid_map_computed_a_few_cells_at_a_time_equals_the_map_at_once() {
+    use clearbore::case::MapKind;
+    let c = gas_case(&[]);
+    let whole = gas_map(&c);
+    let mut job = Calculator::SegmentedFlow.map_job(MapKind::GasLiquidFlows, &EntrySource(&c.inputs), &[]).unwrap().unwrap();
+    let (_, total) = job.progress();
+    assert_eq!(total, whole.verdicts.len());
+    let mut steps = 0;
+    loop {
+        let mut left = 37;
+        let done = job.step(&mut || {
+            left -= 1;
+            left > 0
+        });
+        steps += 1;
+        let (computed, _) = job.progress();
+        assert_eq!(computed, (steps * 37).min(total));
+        // Cells not reached yet are not computed.
+        assert!(job.map().verdicts[computed..].iter().all(Option::is_none));
+        if done {
+            break;
+        }
+        assert!(job.map().contours.iter().all(|k| k.levels.is_empty()), "contours come with the last cell");
+    }
+    assert_eq!(steps, total.div_ceil(37));
+    let stepped = job.map();
+    assert_eq!(stepped.verdicts, whole.verdicts);
+    assert_eq!(stepped.contours, whole.contours);
+    // A map computed at once is a job already done.
+    let done = Calculator::PackedBed.map_job(MapKind::CartridgeSize, &EntrySource(&case(&[]).inputs), &[]).unwrap().unwrap();
+    assert!(done.is_done());
+}
+
+#[test]
+fn contour_levels_are_round_values_inside_the_layers_range() {
+    let map = gas_map(&gas_case(&[]));
+    assert_eq!(map.contours.len(), 2);
+    for k in &map.contours {
+        let values: Vec<f64> = map.layers[k.layer].values.iter().copied().filter(|v| v.is_finite()).collect();
+        let (low, high) = values.iter().fold((f64::INFINITY, 0.0_f64), |(a, b), &v| (a.min(v), b.max(v)));
+        assert!(!k.levels.is_empty() && k.levels.len() <= clearbore::physics::map::CONTOUR_LEVELS, "{:?}", k.levels);
+        for &v in &k.levels {
+            assert!(v > low && v < high, "{v} outside {low}..{high}");
+            // 1, 2 or 5 times a power of ten (times in whole minutes or hours past a minute).
+            let time = map.layers[k.layer].dimension == clearbore::physics::units::Dimension::Duration;
+            let mantissa = v / 10f64.powf(v.log10().floor());
+            let round = [1.0, 2.0, 5.0, 10.0].iter().any(|m| (mantissa - m).abs() < 1e-9);
+            let clock = [60.0, 120.0, 300.0, 600.0, 1200.0, 1800.0, 3600.0, 7200.0, 18_000.0, 36_000.0, 72_000.0].contains(&v);
+            if time && v >= 60.0 {
+                assert!(clock || (v >= 86_400.0 && [1.0, 2.0, 5.0, 10.0].iter().any(|m| ((v / 86_400.0) / 10f64.powf((v / 86_400.0).log10().floor()) - m).abs() < 1e-9)), "{v} s is not a round time");
+            } else {
+                assert!(round, "{v} is not a round level");
+            }
+        }
+        assert!(k.levels.windows(2).all(|w| w[0] < w[1]));
+    }
+    // The cartridge map draws its residence time.
+    let cartridge = Calculator::PackedBed.map(&EntrySource(&case(&[]).inputs), &[]).unwrap().unwrap();
+    assert_eq!(cartridge.contours.len(), 1);
+    assert_eq!(cartridge.layers[cartridge.contours[0].layer].dimension, clearbore::physics::units::Dimension::Duration);
+    assert!(!cartridge.contours[0].levels.is_empty());
+}
+
+#[test]
+fn the_gas_liquid_map_spans_lab_flows_and_marks_the_case() {
+    let map = gas_map(&gas_case(&[]));
+    let ml = 1e-6 / 60.0;
+    // Demo: 30 mL/min gas (normal), 1.5 mL/min liquid.
+    assert!((map.current.0 - 30.0 * ml).abs() < 1e-15 && (map.current.1 - 1.5 * ml).abs() < 1e-15);
+    assert!((map.x.values[0] - 0.1 * ml).abs() < 1e-15 && (map.x.values.last().unwrap() - 200.0 * ml).abs() < 1e-15);
+    assert!((map.y.values[0] - 0.02 * ml).abs() < 1e-15 && (map.y.values.last().unwrap() - 20.0 * ml).abs() < 1e-15);
+    assert_eq!(map.x.field, "gas_flow");
+    assert_eq!(map.y.field, "liquid_flow");
+}

@@ -79,8 +79,59 @@ pub struct Map {
     /// check that sets a caution or problem (the first of the worst, in the report's order);
     /// `None` for a fine or uncomputed cell. Empty when the map does not name them.
     pub limiting: Vec<Option<usize>>,
+    /// Layers drawn as contour lines (at round values, labelled on the map).
+    pub contours: Vec<Contour>,
     /// The case's own entries (SI): where it sits on the map.
     pub current: (f64, f64),
+}
+
+/// A layer of a map drawn as contour lines.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Contour {
+    /// Index in [`Map::layers`].
+    pub layer: usize,
+    /// Values (SI) at which lines are drawn: round values inside the layer's range.
+    pub levels: Vec<f64>,
+}
+
+impl Contour {
+    /// Contours of `layer` at round values (1, 2 and 5 per decade; times past a minute at 1, 2,
+    /// 5, 10, 20 and 30 minutes, 1, 2, 5, 10 and 20 hours, then 1, 2 and 5 days per decade) between its smallest and largest finite values, at most `most` of them.
+    pub fn round(map_layers: &[MapLayer], layer: usize, most: usize) -> Self {
+        let values = map_layers.get(layer).map_or(&[][..], |l| l.values.as_slice());
+        let finite = values.iter().copied().filter(|v| v.is_finite() && *v > 0.0);
+        let (low, high) = finite.fold((f64::INFINITY, 0.0_f64), |(a, b), v| (a.min(v), b.max(v)));
+        let time = map_layers.get(layer).is_some_and(|l| l.dimension == Dimension::Duration);
+        let mut levels = Vec::new();
+        if low < high {
+            let decade = |v: f64| 10f64.powf(v.log10().floor());
+            let mut k = decade(low);
+            while k <= high && levels.len() < 1000 {
+                for m in [1.0, 2.0, 5.0] {
+                    levels.push(k * m);
+                }
+                k *= 10.0;
+            }
+            if time {
+                // Seconds below a minute, then whole minutes, hours and days.
+                levels.retain(|v| *v < 60.0);
+                levels.extend([60.0, 120.0, 300.0, 600.0, 1200.0, 1800.0, 3600.0, 7200.0, 18_000.0, 36_000.0, 72_000.0]);
+                let mut day = 86_400.0;
+                while day <= high {
+                    levels.extend([day, 2.0 * day, 5.0 * day]);
+                    day *= 10.0;
+                }
+            }
+            levels.retain(|v| *v > low && *v < high);
+            levels.sort_by(f64::total_cmp);
+            levels.dedup();
+            if levels.len() > most && most > 0 {
+                let step = levels.len().div_ceil(most);
+                levels = levels.into_iter().step_by(step).collect();
+            }
+        }
+        Self { layer, levels }
+    }
 }
 
 impl Map {
@@ -94,22 +145,33 @@ impl Map {
     /// map names them); in the order of [`Map::verdicts`].
     pub fn edges(&self) -> Vec<Option<Edge>> {
         let (nx, ny) = (self.x.values.len(), self.y.values.len());
-        let limit = |i: usize| self.limiting.get(i).copied().flatten();
         let mut out = vec![None; self.verdicts.len()];
         for iy in 0..ny {
             for ix in 0..nx {
                 let i = self.index(ix, iy);
                 let neighbours = [(ix + 1 < nx).then(|| self.index(ix + 1, iy)), (iy + 1 < ny).then(|| self.index(ix, iy + 1))];
                 for j in neighbours.into_iter().flatten() {
-                    if self.verdicts[j] != self.verdicts[i] {
-                        out[i] = Some(Edge::Verdict);
-                    } else if out[i].is_none() && limit(j) != limit(i) {
-                        out[i] = Some(Edge::Limit);
-                    }
+                    out[i] = match (out[i], self.edge_between(i, j)) {
+                        (Some(Edge::Verdict), _) | (_, Some(Edge::Verdict)) => Some(Edge::Verdict),
+                        (a, b) => a.or(b),
+                    };
                 }
             }
         }
         out
+    }
+
+    /// The boundary between cells `i` and `j`, if any: [`Edge::Verdict`] where their verdicts
+    /// differ, [`Edge::Limit`] where another check sets the same verdict (where the map names them).
+    pub fn edge_between(&self, i: usize, j: usize) -> Option<Edge> {
+        let limit = |i: usize| self.limiting.get(i).copied().flatten();
+        if self.verdicts[j] != self.verdicts[i] {
+            Some(Edge::Verdict)
+        } else if limit(j) != limit(i) {
+            Some(Edge::Limit)
+        } else {
+            None
+        }
     }
 
     /// The name of the check that limits cell `i`, where the map names them.
@@ -140,3 +202,92 @@ fn fill_between<T: Copy + PartialEq>(out: &mut [T], lo: usize, a: T, hi: usize, 
         fill_between(out, mid, m, hi, b, at);
     }
 }
+
+/// What one cell of a map computed cell by cell holds: its verdict, the index of the check that
+/// sets it in [`Map::limit_names`], and one value per layer.
+pub struct CellValue {
+    /// Verdict (`None` where the cell could not be computed).
+    pub verdict: Option<Verdict>,
+    /// The check that sets a caution or problem, by name.
+    pub limit: Option<String>,
+    /// One value per layer, SI (NaN where not computed).
+    pub values: Vec<f64>,
+}
+
+/// A map computed a few cells at a time, so that a page can fill it in between edits (a map whose
+/// cells each cost a full evaluation): [`MapJob::step`] computes cells in order, row by row, while
+/// the caller lets it. A map computed at once is a job already done.
+pub struct MapJob {
+    map: Map,
+    next: usize,
+    cell: Box<dyn FnMut(f64, f64) -> CellValue>,
+}
+
+impl MapJob {
+    /// A job already done: `map`.
+    pub fn done(map: Map) -> Self {
+        let next = map.verdicts.len();
+        Self { map, next, cell: Box::new(|_, _| CellValue { verdict: None, limit: None, values: Vec::new() }) }
+    }
+
+    /// A job that fills `empty` (its verdicts `None`, its layers NaN, its contour levels empty)
+    /// with `cell(x, y)` for each cell; the contour levels are set when the last cell is done.
+    pub fn new(empty: Map, cell: impl FnMut(f64, f64) -> CellValue + 'static) -> Self {
+        Self { map: empty, next: 0, cell: Box::new(cell) }
+    }
+
+    /// Computes cells while `more()` says so (at least one), returns whether the map is complete.
+    pub fn step(&mut self, more: &mut dyn FnMut() -> bool) -> bool {
+        let total = self.map.verdicts.len();
+        let nx = self.map.x.values.len();
+        let mut first = true;
+        while self.next < total && (first || more()) {
+            first = false;
+            let i = self.next;
+            let (x, y) = (self.map.x.values[i % nx], self.map.y.values[i / nx]);
+            let value = (self.cell)(x, y);
+            self.map.verdicts[i] = value.verdict;
+            self.map.limiting[i] = value.limit.map(|name| match self.map.limit_names.iter().position(|n| *n == name) {
+                Some(k) => k,
+                None => {
+                    self.map.limit_names.push(name);
+                    self.map.limit_names.len() - 1
+                }
+            });
+            for (layer, v) in self.map.layers.iter_mut().zip(value.values) {
+                layer.values[i] = v;
+            }
+            self.next += 1;
+            if self.next == total {
+                let most = CONTOUR_LEVELS;
+                let layers = &self.map.layers;
+                self.map.contours = self.map.contours.iter().map(|c| Contour::round(layers, c.layer, most)).collect();
+            }
+        }
+        self.is_done()
+    }
+
+    /// Whether every cell is computed.
+    pub fn is_done(&self) -> bool {
+        self.next >= self.map.verdicts.len()
+    }
+
+    /// Cells computed, and cells in all.
+    pub fn progress(&self) -> (usize, usize) {
+        (self.next.min(self.map.verdicts.len()), self.map.verdicts.len())
+    }
+
+    /// The map as far as it is computed (cells not yet reached are `None`).
+    pub fn map(&self) -> &Map {
+        &self.map
+    }
+
+    /// The map, computing what is left first.
+    pub fn finish(mut self) -> Map {
+        while !self.step(&mut || true) {}
+        self.map
+    }
+}
+
+/// Most contour lines drawn per layer.
+pub const CONTOUR_LEVELS: usize = 7;

@@ -8,7 +8,7 @@ use super::flow::BedFlow;
 use super::minimum_fluidisation::{FluidisationInput, minimum_fluidisation_spread};
 use super::pressure_drop::{PressureDropModel, RECOMMENDED};
 use super::{PackedBedInput, geometry, lifting_verdict, plug_flow_check, pressure_verdict, wall_check};
-use crate::physics::map::{Map, MapAxis, MapLayer, fill_monotone};
+use crate::physics::map::{CONTOUR_LEVELS, Contour, Map, MapAxis, MapLayer, fill_monotone};
 use crate::physics::report::Verdict;
 use crate::physics::units::{Dimension, Length, VolumetricFlow};
 
@@ -108,12 +108,18 @@ fn build(input: &PackedBedInput, n: usize, every_cell: bool) -> Map {
         "Colour: the worst of the pressure budget (inlet pressure by Ergun, and back-pressure plus the highest of {} correlations, \
          against the {} bar(g) limit; caution within 20 %, common practice, no source), bed lifting in up-flow (Wen–Yu and the \
          lowest minimum-fluidisation correlation), the wall effect (D_t/d_p below 10) and plug flow (L/d_p below 50). The bed ({} mm × {} mm), liquid and back-pressure are the case's; the voidage is \
-         re-estimated for each size when it is estimated.",
+         re-estimated for each size when it is estimated. Lines: residence time between the particles.",
         PressureDropModel::ALL.len(),
         crate::physics::units::format_significant(rating / 1e5, 3),
         crate::physics::units::format_significant(input.tube_diameter.si() * 1e3, 3),
         crate::physics::units::format_significant(input.bed_length.si() * 1e3, 3),
     );
+    let layers = vec![
+        MapLayer { label: "Bed pressure drop (Ergun)", dimension: Dimension::PressureDifference, values: dp },
+        MapLayer { label: "Inlet pressure (gauge)", dimension: Dimension::PressureDifference, values: inlet },
+        MapLayer { label: "Residence time between particles", dimension: Dimension::Duration, values: tau },
+    ];
+    let contours = vec![Contour::round(&layers, 2, CONTOUR_LEVELS)];
     Map {
         key: "cartridge_map",
         title: "Where this cartridge works: flow × particle size",
@@ -121,13 +127,10 @@ fn build(input: &PackedBedInput, n: usize, every_cell: bool) -> Map {
         x,
         y,
         verdicts,
-        layers: vec![
-            MapLayer { label: "Bed pressure drop (Ergun)", dimension: Dimension::PressureDifference, values: dp },
-            MapLayer { label: "Inlet pressure (gauge)", dimension: Dimension::PressureDifference, values: inlet },
-            MapLayer { label: "Residence time between particles", dimension: Dimension::Duration, values: tau },
-        ],
+        layers,
         limit_names: Vec::new(),
         limiting: Vec::new(),
+        contours,
         current: (input.flow.si(), input.particle_diameter.si()),
     }
 }

@@ -17,6 +17,7 @@ pub mod garstecki;
 pub mod kreutzer;
 pub mod lengths;
 pub mod liu;
+pub mod map;
 pub mod mass_transfer;
 pub mod plots;
 pub mod pressure_profile;

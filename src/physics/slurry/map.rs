@@ -229,6 +229,7 @@ fn build(input: &SlurryInput, n: usize, every_cell: bool) -> Option<Map> {
         ],
         limit_names: limit_names(count),
         limiting,
+        contours: Vec::new(),
         current: (input.flow.si(), bore),
     })
 }
@@ -348,6 +349,7 @@ fn build_size(input: &SlurryInput, n: usize, every_cell: bool) -> Option<Map> {
         ],
         limit_names: limit_names(count),
         limiting,
+        contours: Vec::new(),
         current: (input.flow.si(), largest),
     })
 }
