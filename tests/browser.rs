@@ -948,3 +948,84 @@ async fn a_gas_feed_in_a_setup_expands_is_checked_at_its_supply_and_for_its_haza
     assert_clean(&b).await;
     b.close().await;
 }
+
+#[tokio::test]
+async fn the_gas_liquid_map_fills_in_reads_out_a_cell_and_a_click_sets_both_flows() {
+    use clearbore::physics::report::Verdict;
+    let b = Browser::start().await;
+    b.open_page().await;
+    b.click("[data-testid=tab-segmented_flow]").await;
+    b.wait_for("[data-testid=panel-segmented_flow]").await;
+    // The demo with a 16 bar(g) rating over its 15 bar(g) back-pressure: a caution (under 20 %
+    // margin) everywhere, a problem at high flows.
+    b.type_into("pressure_rating", "16").await;
+    // Folded (and not computed) until opened; then filled in a slice at a time.
+    assert!(!b.exists("[data-testid=map-canvas-gas_liquid_map]").await);
+    b.click("[data-testid=panel-segmented_flow] [data-testid=map-toggle]").await;
+    b.wait_for("[data-testid=map-canvas-gas_liquid_map]").await;
+    b.wait_for("[data-testid=map-marker-gas_liquid_map]").await;
+    b.js_within("return !document.querySelector('[data-testid=map-progress-gas_liquid_map]');", |v| v == &json!(true), 300).await;
+    // Drawn as the map evaluated natively: each cell 8 × 8 pixels in its verdict's tint (contour
+    // lines and boundaries cross some pixels, so most of the cell's inner 6 × 6 is compared).
+    let mut doc: Value = serde_json::from_str(Calculator::SegmentedFlow.demo_json()).unwrap();
+    doc["inputs"]["pressure_rating"] = json!({"value": 16, "unit": "bar"});
+    let c = CaseFile::from_json(&doc.to_string()).unwrap();
+    let map = c.map_of(clearbore::case::MapKind::GasLiquidFlows).unwrap().unwrap();
+    let n = map.x.values.len();
+    let tint = |v: Option<Verdict>| match v {
+        Some(Verdict::Fine) => [0xb9, 0xdf, 0xc4, 255],
+        Some(Verdict::Caution) => [0xf3, 0xd9, 0x8b, 255],
+        Some(Verdict::Problem) => [0xec, 0xa5, 0x9f, 255],
+        None => [0xdd, 0xdd, 0xdd, 255],
+    };
+    let mut seen = std::collections::BTreeSet::new();
+    // Fixed cells, and the middle cell of each verdict the map has.
+    let mut cells = vec![(0, 0), (n - 1, n - 1), (n / 2, n / 2), (5, n - 3), (n - 2, 3)];
+    for kind in [Verdict::Fine, Verdict::Caution, Verdict::Problem] {
+        let of_kind: Vec<usize> = (0..n * n).filter(|&i| map.verdicts[i] == Some(kind)).collect();
+        if let Some(&i) = of_kind.get(of_kind.len() / 2) {
+            cells.push((i % n, i / n));
+        }
+    }
+    for (ix, iy) in cells {
+        let v = map.verdicts[map.index(ix, iy)];
+        seen.insert(v);
+        let block = format!(
+            "const c = document.querySelector('[data-testid=map-canvas-gas_liquid_map]'); const s = c.width / {n};
+             return Array.from(c.getContext('2d').getImageData({ix} * s + 1, ({} - {iy}) * s + 1, s - 2, s - 2).data);",
+            n - 1
+        );
+        let data = b.js(&block).await;
+        let bytes: Vec<u8> = data.as_array().unwrap().iter().map(|x| x.as_u64().unwrap() as u8).collect();
+        let matching = bytes.chunks(4).filter(|p| *p == tint(v)).count();
+        assert!(matching * 2 >= bytes.len() / 4, "cell {ix}, {iy}: {matching} of {} pixels in the {v:?} tint", bytes.len() / 4);
+    }
+    assert!(seen.len() >= 2, "{seen:?}");
+    // Contour labels are on the map, and the legend names the lines.
+    let labels = b.js("return document.querySelectorAll('[data-testid=map-gas_liquid_map] .map-contour-label').length;").await;
+    assert!(labels.as_u64().unwrap() >= 4, "{labels}");
+    let legend = b.text("[data-testid=map-gas_liquid_map] .map-legend").await;
+    assert!(legend.contains("blue lines: liquid slug length") && legend.contains("purple lines: liquid residence time"), "{legend}");
+    // The read-out names this case, then the cell under the pointer with its values.
+    let own = b.text("[data-testid=map-readout-gas_liquid_map]").await;
+    assert!(own.starts_with("This case: Gas flow (at its reference state) 28.1 mL/min, liquid flow 1.38 mL/min"), "the nearest cell to 30 and 1.5 mL/min: {own}");
+    map_event(&b, "gas_liquid_map", "mousemove", 0.99, 0.01).await;
+    let cell = b.text_when("[data-testid=map-readout-gas_liquid_map]", |t| t.starts_with("Gas flow")).await;
+    assert!(cell.contains("problem (limited by Pressure budget)") && cell.contains("Liquid residence time"), "{cell}");
+    // A click sets both flows (three significant figures) and the marker follows.
+    let before = b.js("return parseFloat(document.querySelector('[data-testid=map-marker-gas_liquid_map]').style.bottom);").await.as_f64().unwrap();
+    map_event(&b, "gas_liquid_map", "click", 0.2, 0.1).await;
+    let value = |key: &str| format!("return document.querySelector('[data-testid=input-{key}]').value;");
+    let liquid = b.js_when(&value("liquid_flow"), |v| v != "1.5").await;
+    let liquid: f64 = liquid.as_str().unwrap().parse().unwrap();
+    let gas: f64 = b.js(&value("gas_flow")).await.as_str().unwrap().parse().unwrap();
+    assert!(liquid > 5.0 && liquid <= 20.0, "liquid flow now {liquid} mL/min");
+    assert!(gas > 0.3 && gas < 2.0, "gas flow now {gas} mL/min");
+    let script = "return parseFloat(document.querySelector('[data-testid=map-marker-gas_liquid_map]').style.bottom);";
+    b.js_when(script, |v| v.as_f64().is_some_and(|y| y > before + 20.0)).await;
+    // The map is filled in again for the new case.
+    b.js_within("return !document.querySelector('[data-testid=map-progress-gas_liquid_map]');", |v| v == &json!(true), 300).await;
+    b.screenshot("gas-liquid-map").await;
+    assert_clean(&b).await;
+    b.close().await;
+}

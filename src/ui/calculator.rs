@@ -159,6 +159,7 @@ struct PageMap {
     map: MapSignal,
     open: RwSignal<bool>,
     pick: Callback<(f64, f64)>,
+    progress: RwSignal<Option<(usize, usize)>>,
 }
 
 /// The folded map's heading.
@@ -167,6 +168,46 @@ const fn map_title(kind: MapKind) -> &'static str {
         MapKind::CartridgeSize => "Operating map: where this cartridge works (flow × particle size)",
         MapKind::SlurryBore => "Operating map: where this line works (flow × tubing bore)",
         MapKind::SlurrySize => "Operating map: where this line works (flow × particle size d90)",
+        MapKind::GasLiquidFlows => "Operating map: where this coil works (gas flow × liquid flow)",
+    }
+}
+
+/// Time given to a map's cells per turn of the page (ms): edits wait at most this long.
+const MAP_SLICE_MS: f64 = 8.0;
+
+/// How often a map being filled in is redrawn (ms).
+const MAP_REDRAW_MS: f64 = 150.0;
+
+/// Fills in `job` a slice at a time ([`MAP_SLICE_MS`]), yielding to the page between slices,
+/// showing it as it grows (every [`MAP_REDRAW_MS`]) and whole at the end; stops when a newer
+/// request (`generation` past `mine`) has come.
+fn fill_map(job: crate::physics::map::MapJob, map: MapSignal, progress: RwSignal<Option<(usize, usize)>>, generation: StoredValue<u64>, mine: u64) {
+    fill_turn(job, f64::NEG_INFINITY, map, progress, generation, mine);
+}
+
+/// The page's clock, ms.
+fn now_ms() -> f64 {
+    web_sys::window().and_then(|w| w.performance()).map_or(0.0, |p| p.now())
+}
+
+/// One slice of [`fill_map`]; `shown` is when the map was last redrawn.
+fn fill_turn(mut job: crate::physics::map::MapJob, shown: f64, map: MapSignal, progress: RwSignal<Option<(usize, usize)>>, generation: StoredValue<u64>, mine: u64) {
+    if generation.try_get_value() != Some(mine) {
+        return;
+    }
+    let start = now_ms();
+    let done = job.step(&mut || now_ms() - start < MAP_SLICE_MS);
+    let shown = if done || now_ms() - shown >= MAP_REDRAW_MS {
+        map.set(Some(job.map().clone()));
+        now_ms()
+    } else {
+        shown
+    };
+    if done {
+        progress.set(None);
+    } else {
+        progress.set(Some(job.progress()));
+        set_timeout(move || fill_turn(job, shown, map, progress, generation, mine), std::time::Duration::ZERO);
     }
 }
 
@@ -451,25 +492,38 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
         .map(|&kind| {
             let map = RwSignal::new(None);
             let open = RwSignal::new(false);
+            let progress = RwSignal::new(None);
             let pick = map_pick(calculator, map, form.main.clone(), form.elements, applicable);
             let main = form.main.clone();
             let elements = form.elements;
             let later = super::Later::new();
+            // Each request has its number; a job still filling in an older map stops.
+            let generation = StoredValue::new(0u64);
             Effect::new(move |_| {
+                generation.update_value(|g| *g += 1);
                 if !open.get() || outcome.with(|o| o.stale) {
+                    progress.set(None);
                     return;
                 }
                 report.track();
                 let main = main.clone();
+                let mine = generation.get_value();
                 later.run(std::time::Duration::from_millis(150), move || {
-                    map.set(untrack(|| {
+                    let job = untrack(|| {
                         let list = elements.get_untracked();
                         let sources: Vec<&dyn FieldSource> = list.iter().map(|e| &e.state as &dyn FieldSource).collect();
-                        calculator.map_of(kind, &main, &sources).and_then(Result::ok)
-                    }));
+                        calculator.map_job(kind, &main, &sources).and_then(Result::ok)
+                    });
+                    match job {
+                        Some(job) => fill_map(job, map, progress, generation, mine),
+                        None => {
+                            map.set(None);
+                            progress.set(None);
+                        }
+                    }
                 });
             });
-            PageMap { kind, map, open, pick }
+            PageMap { kind, map, open, pick, progress }
         })
         .collect();
     let line = Memo::new(move |_| report.with(|r| r.as_ref().and_then(line_of)));
@@ -614,7 +668,7 @@ pub fn CalculatorPanel(form: CalculatorForm) -> impl IntoView {
                     <h3>"Checks"</h3>
                     <CheckList report=report wanted=main_checks />
                     <AdviceView report=report wanted=shared_advice select=select />
-                    {maps.iter().map(|&PageMap { kind, map, open, pick }| view! { <MapView map=map pick=pick open=open title=map_title(kind) key=kind.key() /> }).collect_view()}
+                    {maps.iter().map(|&PageMap { kind, map, open, pick, progress }| view! { <MapView map=map pick=pick open=open progress=progress title=map_title(kind) key=kind.key() /> }).collect_view()}
                     <h3>"Results"</h3>
                     <ResultTable report=report keys=main_figures />
                     <PlotList report=report />

@@ -205,8 +205,14 @@ impl Browser {
     /// Polls (up to 5 s) until the value `script` returns satisfies `ok` (for what the page does a
     /// moment after an edit: saving, the map); returns it.
     pub async fn js_when(&self, script: &str, ok: impl Fn(&Value) -> bool) -> Value {
+        self.js_within(script, ok, 50).await
+    }
+
+    /// As [`Browser::js_when`], polling `tries` times, 100 ms apart (for work the page does over
+    /// seconds, such as a map filled in cell by cell).
+    pub async fn js_within(&self, script: &str, ok: impl Fn(&Value) -> bool, tries: u32) -> Value {
         let mut last = Value::Null;
-        for _ in 0..50 {
+        for _ in 0..tries {
             last = self.js(script).await;
             if ok(&last) {
                 return last;
