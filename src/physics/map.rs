@@ -189,6 +189,36 @@ pub fn fill_monotone<T: Copy + PartialEq>(out: &mut [T], lo: usize, hi: usize, a
     fill_between(out, lo, a, hi, b, at);
 }
 
+/// As [`fill_monotone`], first evaluating at each hint `h` and `h + 1` (where a neighbouring row
+/// changed value) when the two ends differ: where the change sits at a hint, the span is then
+/// filled without halving. The values are the same as with [`fill_monotone`]; only the number of
+/// evaluations differs.
+pub fn fill_monotone_near<T: Copy + PartialEq>(out: &mut [T], lo: usize, hi: usize, at: &dyn Fn(usize) -> T, hints: &[usize]) {
+    let (a, b) = (at(lo), at(hi));
+    if a == b || hints.is_empty() {
+        fill_between(out, lo, a, hi, b, at);
+        return;
+    }
+    let mut known: Vec<(usize, T)> = vec![(lo, a), (hi, b)];
+    for &h in hints {
+        for p in [h, h + 1] {
+            if p > lo && p < hi && !known.iter().any(|k| k.0 == p) {
+                known.push((p, at(p)));
+            }
+        }
+    }
+    known.sort_by_key(|k| k.0);
+    for pair in known.windows(2) {
+        fill_between(out, pair[0].0, pair[0].1, pair[1].0, pair[1].1, at);
+    }
+}
+
+/// The positions `i` where `values[i] != values[i + 1]`: the hints for the next row of
+/// [`fill_monotone_near`].
+pub fn changes<T: PartialEq>(values: &[T]) -> Vec<usize> {
+    values.windows(2).enumerate().filter(|(_, w)| w[0] != w[1]).map(|(i, _)| i).collect()
+}
+
 fn fill_between<T: Copy + PartialEq>(out: &mut [T], lo: usize, a: T, hi: usize, b: T, at: &dyn Fn(usize) -> T) {
     if a == b {
         out[lo..=hi].fill(a);

@@ -13,7 +13,7 @@ use super::element::{
 };
 use super::size_distribution::ParticleSize;
 use super::{D90, ElementKind, LineElement, Orientation, PARTICLE_SIZE, SlurryInput, clogging, keys, shields, vertical};
-use crate::physics::map::{Map, MapAxis, MapLayer, fill_monotone};
+use crate::physics::map::{Map, MapAxis, MapLayer, changes, fill_monotone_near};
 use crate::physics::pipe_flow;
 use crate::physics::report::Verdict;
 use crate::physics::settling::Drift;
@@ -112,20 +112,36 @@ fn limit_names(count: usize) -> Vec<String> {
 /// row, or at every cell with `every_cell`), its clogging verdict and the pressure budget's
 /// (`budget[ix]`, `None` where the drop is not finite) give each cell's worst verdict and the
 /// first check, in the report's order, that has it.
-fn fill_row(line: &Line, passages: &[Passage], flows: &[f64], budget: &[Option<Verdict>], every_cell: bool, verdicts: &mut [Option<Verdict>], limiting: &mut [Option<usize>]) {
+/// `hints` holds, per element, where its settling verdict changed along the row before (looked
+/// at first: the next row's changes are usually at or next to them), and is updated.
+#[allow(clippy::too_many_arguments)]
+fn fill_row(
+    line: &Line,
+    passages: &[Passage],
+    flows: &[f64],
+    budget: &[Option<Verdict>],
+    every_cell: bool,
+    hints: &mut Vec<Vec<usize>>,
+    verdicts: &mut [Option<Verdict>],
+    limiting: &mut [Option<usize>],
+) {
     let n = flows.len();
+    hints.resize(passages.len(), Vec::new());
     // Each element's settling verdict along the row: it only improves as the flow rises, so it
-    // is found at the ends and wherever it changes (bisection), not at every cell.
+    // is found at the ends and wherever it changes (bisection, starting where the row before
+    // changed), not at every cell.
     let settling_rows: Vec<Vec<Verdict>> = passages
         .iter()
-        .map(|p| {
+        .zip(hints.iter_mut())
+        .map(|(p, hint)| {
             let at = |ix: usize| settling(line, p, VolumetricFlow::from_si(flows[ix]));
             let mut out = vec![Verdict::Fine; n];
             if every_cell {
                 out.iter_mut().enumerate().for_each(|(ix, v)| *v = at(ix));
             } else {
-                fill_monotone(&mut out, 0, n - 1, &at);
+                fill_monotone_near(&mut out, 0, n - 1, &at, hint);
             }
+            *hint = changes(&out);
             out
         })
         .collect();
@@ -182,6 +198,7 @@ fn build(input: &SlurryInput, n: usize, every_cell: bool) -> Option<Map> {
     let kept: Vec<Option<Passage>> = input.elements.iter().map(|e| (!swept(e.kind)).then(|| passage(&line, &terminal, *e))).collect();
     let count = input.elements.len().min(keys::MAX_ELEMENTS);
     let mut row_budget = vec![None; n];
+    let mut hints = Vec::new();
     for (iy, &b) in y.values.iter().enumerate() {
         let tubing = Length::from_si(b);
         let elements: Vec<LineElement> =
@@ -207,7 +224,7 @@ fn build(input: &SlurryInput, n: usize, every_cell: bool) -> Option<Map> {
             }
         }
         let span = iy * n..(iy + 1) * n;
-        fill_row(&line, &passages, &x.values, &row_budget, every_cell, &mut verdicts[span.clone()], &mut limiting[span]);
+        fill_row(&line, &passages, &x.values, &row_budget, every_cell, &mut hints, &mut verdicts[span.clone()], &mut limiting[span]);
     }
     let kept_words = if input.elements.iter().any(|e| !swept(e.kind)) { "; fittings, mixers, valves, seats and frits keep their entered openings" } else { "" };
     let basis = format!(
@@ -299,6 +316,7 @@ fn build_size(input: &SlurryInput, n: usize, every_cell: bool) -> Option<Map> {
         }
     }
     let mut row_input = input.clone();
+    let mut hints = Vec::new();
     for (iy, &d) in y.values.iter().enumerate() {
         row_input.size = input.size.with_largest(Length::from_si(d));
         let Ok((row_line, _)) = Line::new(&row_input) else { continue };
@@ -318,7 +336,7 @@ fn build_size(input: &SlurryInput, n: usize, every_cell: bool) -> Option<Map> {
             }
         }
         let span = iy * n..(iy + 1) * n;
-        fill_row(&row_line, &passages, &x.values, &column_budget, every_cell, &mut verdicts[span.clone()], &mut limiting[span]);
+        fill_row(&row_line, &passages, &x.values, &column_budget, every_cell, &mut hints, &mut verdicts[span.clone()], &mut limiting[span]);
     }
     let rows = match input.size {
         ParticleSize::Single { .. } => "Each row sets the one particle size".to_owned(),
@@ -417,8 +435,35 @@ mod tests {
         ];
         for at in cases {
             let mut out = vec![Verdict::Fine; 256];
-            fill_monotone(&mut out, 0, 255, at);
+            crate::physics::map::fill_monotone(&mut out, 0, 255, at);
             assert!((0..256).all(|i| out[i] == at(i)));
+        }
+    }
+
+    #[test]
+    fn fill_monotone_near_gives_every_cell_whatever_the_hints_and_fewer_evaluations_at_good_ones() {
+        use crate::physics::map::{changes, fill_monotone_near};
+        use std::cell::Cell;
+        let step = |i: usize| if i < 37 { Verdict::Fine } else if i < 200 { Verdict::Caution } else { Verdict::Problem };
+        let exact: Vec<usize> = (0..256).map(step).collect::<Vec<_>>().windows(2).enumerate().filter(|(_, w)| w[0] != w[1]).map(|(i, _)| i).collect();
+        assert_eq!(exact, vec![36, 199]);
+        let count = |hints: &[usize]| {
+            let calls = Cell::new(0);
+            let at = |i: usize| {
+                calls.set(calls.get() + 1);
+                step(i)
+            };
+            let mut out = vec![Verdict::Fine; 256];
+            fill_monotone_near(&mut out, 0, 255, &at, hints);
+            assert!((0..256).all(|i| out[i] == step(i)), "hints {hints:?}");
+            assert_eq!(changes(&out), exact);
+            calls.get()
+        };
+        // Right hints: the two ends and both sides of each change, nothing more.
+        assert_eq!(count(&[36, 199]), 6);
+        // Hints one cell off, wrong, out of range, none: the same cells, more evaluations.
+        for hints in [&[35, 200][..], &[3, 250], &[0, 255, 254], &[]] {
+            assert!(count(hints) > 6, "{hints:?}");
         }
     }
 }
