@@ -444,6 +444,42 @@ proptest! {
     }
 }
 
+proptest! {
+    #![proptest_config(cases(24))]
+    /// The operating maps of the cartridge and the gas–liquid coil, 3 × 3 cells anywhere in their
+    /// domain: each cell is the point evaluation with the two swept entries typed in (in SI) —
+    /// refused where the point is, and otherwise the worst of the checks the map colours by.
+    #[test]
+    fn map_cells_equal_point_evaluations_over_the_domain(case in prop_oneof![case_of(Calculator::PackedBed), case_of(Calculator::SegmentedFlow)]) {
+        use clearbore::case::EntrySource;
+        use clearbore::physics::{packed_bed, segmented_flow};
+        let src = EntrySource(&case.inputs);
+        let map = match case.calculator {
+            Calculator::PackedBed => packed_bed::PackedBedInput::from_source(&src).ok().map(|input| packed_bed::map::cartridge_map(&input, 3)),
+            _ => segmented_flow::SegmentedFlowInput::from_source(&src).ok().map(|input| segmented_flow::map::job(&input, 3).finish()),
+        };
+        let Some(map) = map else { return Ok(()) };
+        prop_assert_eq!(map.verdicts.len(), 9);
+        let layout = case.calculator.layout();
+        for iy in 0..3 {
+            for ix in 0..3 {
+                let (x, y) = (map.x.values[ix], map.y.values[iy]);
+                let Some(entries) = with_si(&case.inputs, layout, map.x.field, x).and_then(|e| with_si(&e, layout, map.y.field, y)) else { continue };
+                let point = CaseFile::new(case.calculator, entries, case.elements.clone());
+                let i = map.index(ix, iy);
+                match point.evaluate() {
+                    Err(_) => prop_assert_eq!(map.verdicts[i], None, "cell {},{} of a point the calculator refuses", ix, iy),
+                    Ok(report) => {
+                        let on_map = |key: &str| case.calculator == Calculator::SegmentedFlow || ["pressure_budget", "bed_lifting", "wall_effect", "plug_flow"].contains(&key);
+                        let worst = report.checks.iter().filter(|c| on_map(c.key)).map(|c| c.verdict).max();
+                        prop_assert_eq!(map.verdicts[i], worst, "cell {},{} at {} / {}", ix, iy, x, y);
+                    }
+                }
+            }
+        }
+    }
+}
+
 fn packed_bed_invariants(case: &CaseFile, r: &Report, factor: f64) -> Result<(), TestCaseError> {
     let layout = Calculator::PackedBed.layout();
     let dp = figure(r, "bed_pressure_drop");

@@ -173,7 +173,7 @@ const fn map_title(kind: MapKind) -> &'static str {
 }
 
 /// Time given to a map's cells per turn of the page (ms): edits wait at most this long.
-const MAP_SLICE_MS: f64 = 8.0;
+const MAP_SLICE_MS: f64 = 5.0;
 
 /// How often a map being filled in is redrawn (ms).
 const MAP_REDRAW_MS: f64 = 150.0;
