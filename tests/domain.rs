@@ -464,7 +464,18 @@ proptest! {
         for iy in 0..3 {
             for ix in 0..3 {
                 let (x, y) = (map.x.values[ix], map.y.values[iy]);
-                let Some(entries) = with_si(&case.inputs, layout, map.x.field, x).and_then(|e| with_si(&e, layout, map.y.field, y)) else { continue };
+                // A cartridge's d10 axis scales d50 and d90 with it, as a click on the page does.
+                let scaled = |e: Entries| -> Option<Entries> {
+                    if map.y.field != "d10" {
+                        return Some(e);
+                    }
+                    let factor = y / si_of(&e, layout, "d10");
+                    let e = with_si(&e, layout, "d50", si_of(&e, layout, "d50") * factor)?;
+                    with_si(&e, layout, "d90", si_of(&e, layout, "d90") * factor)
+                };
+                let Some(entries) = scaled(case.inputs.clone())
+                    .and_then(|e| with_si(&e, layout, map.x.field, x))
+                    .and_then(|e| with_si(&e, layout, map.y.field, y)) else { continue };
                 let point = CaseFile::new(case.calculator, entries, case.elements.clone());
                 let i = map.index(ix, iy);
                 match point.evaluate() {

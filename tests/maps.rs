@@ -26,7 +26,19 @@ fn cells_equal_points(c: &CaseFile) -> usize {
             let (q, d) = (map.x.values[ix], map.y.values[iy]);
             let mut point = c.clone();
             point.inputs.insert("flow".into(), clearbore::case::Entry::Quantity { value: q * 60e6, unit: "mL/min".into(), range: None });
-            point.inputs.insert("particle_diameter".into(), clearbore::case::Entry::Quantity { value: d * 1e6, unit: "µm".into(), range: None });
+            if map.y.field == "d10" {
+                // A distribution: d10 takes the row's size, d50 and d90 keep their ratios to it.
+                let um = |k: &str| match &c.inputs[k] {
+                    clearbore::case::Entry::Quantity { value, unit, .. } if unit == "µm" => *value,
+                    other => panic!("{k}: {other:?}"),
+                };
+                let factor = d * 1e6 / um("d10");
+                for k in ["d10", "d50", "d90"] {
+                    point.inputs.insert(k.into(), clearbore::case::Entry::Quantity { value: um(k) * factor, unit: "µm".into(), range: None });
+                }
+            } else {
+                point.inputs.insert("particle_diameter".into(), clearbore::case::Entry::Quantity { value: d * 1e6, unit: "µm".into(), range: None });
+            }
             let Ok(report) = point.evaluate() else {
                 assert_eq!(map.verdicts[map.index(ix, iy)], None, "a cell the point refuses at {q} m³/s, {d} m");
                 continue;
@@ -59,6 +71,22 @@ fn cartridge_map_cells_equal_point_evaluations_in_up_flow_with_an_estimated_void
     assert!(cells_equal_points(&c) > 100);
     let map = Calculator::PackedBed.map(&EntrySource(&c.inputs), &[]).unwrap().unwrap();
     assert!(map.verdicts.contains(&Some(Verdict::Problem)) && map.verdicts.contains(&Some(Verdict::Fine)));
+}
+
+#[test]
+fn a_cartridge_map_over_a_size_distribution_sweeps_d10_and_scales_d50_and_d90() {
+    // Found by map_cells_equal_point_evaluations_over_the_domain: with d10/d50/d90 entered, the
+    // size axis set the one-size entry, which the point evaluation does not read.
+    let c = case(&[
+        ("size_mode", json!("distribution")),
+        ("d10", json!({"value": 60, "unit": "µm"})),
+        ("d50", json!({"value": 150, "unit": "µm"})),
+        ("d90", json!({"value": 240, "unit": "µm"})),
+    ]);
+    let map = Calculator::PackedBed.map(&EntrySource(&c.inputs), &[]).unwrap().unwrap();
+    assert_eq!(map.y.field, "d10");
+    assert!((map.current.1 - 60e-6).abs() < 1e-15);
+    assert!(cells_equal_points(&c) > 50);
 }
 
 #[test]

@@ -228,7 +228,16 @@ fn map_pick(
         let Some((fx, fy)) = fields else { return };
         let shown = applicable.get_untracked();
         for (key, si) in [(fx, x), (fy, y)] {
-            if calculator != Calculator::SlurryLine {
+            if calculator == Calculator::PackedBed && key == crate::physics::packed_bed::D10.key {
+                // d10 of a distribution: d50 and d90 keep their ratios to it.
+                use crate::physics::packed_bed::{D10, D50, D90};
+                if let (Ok(d10), Ok(d50), Ok(d90)) = (main.quantity(&D10), main.quantity(&D50), main.quantity(&D90)) {
+                    let factor = si / d10;
+                    main.set_si(D10.key, si);
+                    main.set_si(D50.key, d50 * factor);
+                    main.set_si(D90.key, d90 * factor);
+                }
+            } else if calculator != Calculator::SlurryLine {
                 if shown.contains(&key) {
                     main.set_si(key, si);
                 }

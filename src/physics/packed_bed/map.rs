@@ -23,12 +23,17 @@ fn flow_axis(input: &PackedBedInput, n: usize) -> MapAxis {
 }
 
 /// Particle-size axis: 5 µm to a fifth of the cartridge bore (about the coarsest that packs),
-/// widened to take the case's own size.
+/// widened to take the case's own size; the entry it sweeps is d10 when a distribution is entered
+/// (the size every correlation uses).
 fn size_axis(input: &PackedBedInput, n: usize) -> MapAxis {
     let d = input.particle_diameter.si();
     let low = d.min(5e-6);
     let high = (input.tube_diameter.si() / 5.0).max(d * 1.5);
-    MapAxis::log("particle_diameter", "Particle size (the size that sets the pressure drop)", Dimension::Length, low, high, n)
+    match input.distribution {
+        // d10 sets every correlation; a chosen cell scales d50 and d90 with it.
+        Some(_) => MapAxis::log("d10", "Particle size d10 (sets the pressure drop; d50 and d90 scaled with it)", Dimension::Length, low, high, n),
+        None => MapAxis::log("particle_diameter", "Particle size (the size that sets the pressure drop)", Dimension::Length, low, high, n),
+    }
 }
 
 /// The map of `input` with `n` × `n` cells.
