@@ -596,3 +596,16 @@ fn the_gas_liquid_map_spans_lab_flows_and_marks_the_case() {
     assert_eq!(map.x.field, "gas_flow");
     assert_eq!(map.y.field, "liquid_flow");
 }
+
+#[test]
+fn gas_liquid_map_time() {
+    let c = gas_case(&[]);
+    let mut best = f64::INFINITY;
+    for _ in 0..3 {
+        let t = std::time::Instant::now();
+        let map = gas_map(&c);
+        best = best.min(t.elapsed().as_secs_f64() * 1e3);
+        assert_eq!(map.verdicts.len(), 32 * 32);
+    }
+    println!("gas-liquid map 32 × 32 (demo coil): best of 3 {best:.1} ms");
+}
