@@ -64,7 +64,10 @@ impl UnitCell {
             bubble,
             holdup: flow.gas_superficial().si() / bubble.velocity,
             bubble_length: beta * unit_cell,
-            slug_length: (1.0 - beta) * unit_cell,
+            // The liquid share as such, not 1 − β: where the gas is nearly all of the flow (10⁻¹²
+            // of liquid at the outlet of a long coil), 1 − β keeps only a few digits and the slug
+            // length changed with the units of the entries.
+            slug_length: flow.liquid_fraction() * unit_cell,
         })
     }
 

@@ -76,6 +76,11 @@ impl TwoPhaseFlow {
     pub fn gas_fraction(&self) -> f64 {
         self.gas_flow.si() / (self.gas_flow.si() + self.liquid_flow.si())
     }
+    /// Volumetric liquid fraction 1 − β = Q_L / (Q_G + Q_L), computed as such: 1 − β loses the
+    /// digits of a small liquid share (found by the long run of `setup_over_its_domain`).
+    pub fn liquid_fraction(&self) -> f64 {
+        self.liquid_flow.si() / (self.gas_flow.si() + self.liquid_flow.si())
+    }
     /// Capillary number μ_L U / σ at velocity `u`.
     pub fn capillary(&self, u: Velocity) -> f64 {
         self.liquid.viscosity.si() * u.si() / self.liquid.surface_tension.si()
