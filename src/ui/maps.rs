@@ -133,7 +133,13 @@ fn contour_labels(map: &Map) -> Vec<(f64, f64, String, &'static str)> {
             let best = (0..w * h).filter(|&p| pixels[p] == Some(level)).max_by_key(|&p| (p % w, std::cmp::Reverse(p / w)));
             if let Some(p) = best {
                 let (left, bottom) = ((p % w) as f64 / w as f64 * 100.0, (h - p / w) as f64 / h as f64 * 100.0);
-                out.push((left, bottom, dimension.show(v, 2), CONTOUR_COLOURS[k % CONTOUR_COLOURS.len()].1));
+                // Round levels read as they were chosen: seconds below a minute.
+                let text = if dimension == crate::physics::units::Dimension::Duration && v < 60.0 {
+                    format!("{} s", crate::physics::units::format_significant(v, 2))
+                } else {
+                    dimension.show(v, 2)
+                };
+                out.push((left, bottom, text, CONTOUR_COLOURS[k % CONTOUR_COLOURS.len()].1));
             }
         }
     }
