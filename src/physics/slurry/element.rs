@@ -143,12 +143,13 @@ impl<'a> Line<'a> {
 /// Mass fraction deposited in a horizontal element over the classes, for speeds `speeds` (one per
 /// class), at mean velocity `u`.
 pub(super) fn deposited_mass_fraction(classes: &[SizeClass], speeds: &[f64], e: &LineElement, u: f64) -> f64 {
-    classes
-        .iter()
-        .zip(speeds)
-        .map(|(c, v)| c.weight * fuchs_thomas::deposited_fraction(fuchs_thomas::settling_number(e.length.si(), *v, e.inner_diameter.si(), u)))
-        .sum::<f64>()
-        .clamp(0.0, 1.0)
+    deposition(classes, speeds, e).fraction(u)
+}
+
+/// The deposition of `classes` settling at `speeds` in element `e`, prepared for many velocities
+/// (the map's and the flow remedy's; [`deposited_mass_fraction`] is one velocity of it).
+pub(super) fn deposition(classes: &[SizeClass], speeds: &[f64], e: &LineElement) -> fuchs_thomas::Deposition {
+    fuchs_thomas::Deposition::new(classes.iter().map(|c| c.weight), speeds, e.length.si(), e.inner_diameter.si())
 }
 
 /// Fraction deposited over `passes` passes when each pass deposits `per_pass` of what reaches
@@ -332,7 +333,8 @@ fn horizontal_advice(line: &Line, i: usize, e: &LineElement, u: f64, speeds: &[f
     let what = format!("element {n} ({})", e.kind.word());
     let (ceiling, ceiling_words) = line.flow_ceiling(d);
     // Flow: η falls as the flow rises (Z ∝ 1/U); solved in ln Q up to the ceiling.
-    let deposit_at = |ln_q: f64| over_passes(deposited_mass_fraction(&line.classes, speeds, e, ln_q.exp() / area), passes) - DEPOSIT_CAUTION;
+    let prepared = deposition(&line.classes, speeds, e);
+    let deposit_at = |ln_q: f64| over_passes(prepared.fraction(ln_q.exp() / area), passes) - DEPOSIT_CAUTION;
     let flow_fix = if ceiling > q { brent(deposit_at, q.ln(), ceiling.ln(), Tolerance::TIGHT).ok().map(f64::exp) } else { None };
     match flow_fix {
         Some(q_min) => {

@@ -8,9 +8,10 @@
 //! and scales the sizes per row; its settling speeds are computed per row.
 
 use super::element::{
-    Line, clogging_verdict, deposited_mass_fraction, drop_for_model, effective_orientation, horizontal_verdict, line_drop, over_passes,
+    Line, clogging_verdict, deposition, drop_for_model, effective_orientation, horizontal_verdict, line_drop, over_passes,
     pressure_verdict, up_flow_verdict,
 };
+use super::fuchs_thomas::Deposition;
 use super::size_distribution::ParticleSize;
 use super::{D90, ElementKind, LineElement, Orientation, PARTICLE_SIZE, SlurryInput, clogging, keys, shields, vertical};
 use crate::physics::map::{Map, MapAxis, MapLayer, changes, fill_monotone_near};
@@ -78,16 +79,16 @@ fn passage(line: &Line, terminal: &Terminal, element: LineElement) -> Passage {
 }
 
 /// The settling verdict of `p` at flow `q` (as the point evaluation decides it).
-fn settling(line: &Line, p: &Passage, q: VolumetricFlow) -> Verdict {
+fn settling(line: &Line, p: &Passage, prepared: Option<&Deposition>, q: VolumetricFlow) -> Verdict {
     let e = &p.element;
-    let Some((speeds, v90)) = &p.speeds else {
+    let (Some((_, v90)), Some(prepared)) = (&p.speeds, prepared) else {
         // Neutral particles are fine; particles that cannot pass are a problem.
         return if line.drift == Drift::Neutral { Verdict::Fine } else { Verdict::Problem };
     };
     let u = pipe_flow::mean_velocity(q, e.inner_diameter).si();
     match effective_orientation(e.orientation, line.drift) {
         Orientation::Horizontal => {
-            let eta = over_passes(deposited_mass_fraction(&line.classes, speeds, e, u), line.input.passes);
+            let eta = over_passes(prepared.fraction(u), line.input.passes);
             let theta = shields::shields_number(line.input.viscosity.si(), u, e.inner_diameter.si(), line.input.particle(line.largest).density_difference(), line.largest.si());
             horizontal_verdict(eta, theta)
         }
@@ -134,7 +135,10 @@ fn fill_row(
         .iter()
         .zip(hints.iter_mut())
         .map(|(p, hint)| {
-            let at = |ix: usize| settling(line, p, VolumetricFlow::from_si(flows[ix]));
+            // The deposition sum prepared once for the row's flows (as the point evaluation
+            // prepares it for its one flow).
+            let prepared = p.speeds.as_ref().map(|(speeds, _)| deposition(&line.classes, speeds, &p.element));
+            let at = |ix: usize| settling(line, p, prepared.as_ref(), VolumetricFlow::from_si(flows[ix]));
             let mut out = vec![Verdict::Fine; n];
             if every_cell {
                 out.iter_mut().enumerate().for_each(|(ix, v)| *v = at(ix));
