@@ -101,7 +101,7 @@ impl Deposition {
             .iter()
             .map(|&(w, a, a13)| {
                 let k = a * inv;
-                let eta = if !(k > 0.0) {
+                let eta = if k <= 0.0 {
                     0.0
                 } else if k >= 1.0 {
                     1.0
