@@ -90,6 +90,23 @@ fn a_cartridge_map_over_a_size_distribution_sweeps_d10_and_scales_d50_and_d90() 
 }
 
 #[test]
+fn a_cartridge_map_of_a_bed_given_by_its_mass_packs_that_mass_at_each_sizes_voidage() {
+    // Found by map_cells_equal_point_evaluations_over_the_domain (long run at 87bbdae): with the
+    // bed length from the mass packed and the voidage estimated, the map kept the case's length
+    // for every size while the point evaluation packs the mass to that size's voidage.
+    let c = case(&[
+        ("bed_length_source", json!("from_mass")),
+        ("solid_mass", json!({"value": 2, "unit": "g"})),
+        ("voidage_source", json!("estimated")),
+    ]);
+    assert!(cells_equal_points(&c) > 100);
+    // At one flow the void volume, so the residence time, follows the voidage down the sizes.
+    let map = Calculator::PackedBed.map(&EntrySource(&c.inputs), &[]).unwrap().unwrap();
+    let tau = |iy: usize| map.layers[2].values[map.index(100, iy)];
+    assert!((tau(0) / tau(250) - 1.0).abs() > 1e-3, "{} vs {}", tau(0), tau(250));
+}
+
+#[test]
 fn the_map_marks_the_case_and_spans_the_pump() {
     let c = case(&[]);
     let map = Calculator::PackedBed.map(&EntrySource(&c.inputs), &[]).unwrap().unwrap();

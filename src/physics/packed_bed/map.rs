@@ -53,7 +53,6 @@ fn build(input: &PackedBedInput, n: usize, every_cell: bool) -> Map {
     let mut tau = vec![f64::NAN; cells];
     let back = input.back_pressure.si();
     let rating = input.rating.si();
-    let v_bed = geometry::bed_volume(input.tube_diameter, input.bed_length);
     for (iy, &d) in y.values.iter().enumerate() {
         let particle = Length::from_si(d);
         let Ok(voidage) = input.voidage.resolve(input.shape, particle, input.tube_diameter) else { continue };
@@ -69,7 +68,9 @@ fn build(input: &PackedBedInput, n: usize, every_cell: bool) -> Map {
         .ok()
         .map(|f| f.map(|f| (f.value.get(), f.spread().0)));
         let Some(umf) = umf else { continue };
-        let void = geometry::void_volume(v_bed, eps);
+        // A bed given by its mass is as long as that mass packs at this size's voidage.
+        let bed_length = input.bed_length_with(eps.si());
+        let void = geometry::void_volume(geometry::bed_volume(input.tube_diameter, bed_length), eps);
         // The checks that depend on the size alone: wall effect (D_t/d_p) and plug flow (L/d_p).
         let at_case_flow = BedFlow {
             particle_diameter: input.shape.effective_diameter(particle),
@@ -77,10 +78,10 @@ fn build(input: &PackedBedInput, n: usize, every_cell: bool) -> Map {
             superficial_velocity: geometry::superficial_velocity(input.flow, input.tube_diameter),
             density: input.density,
             viscosity: input.viscosity,
-            length: input.bed_length,
+            length: bed_length,
             tube_diameter: input.tube_diameter,
         };
-        let by_size = wall_check(input.tube_diameter.si() / d, &at_case_flow).verdict.max(plug_flow_check(input.bed_length.si() / d).verdict);
+        let by_size = wall_check(input.tube_diameter.si() / d, &at_case_flow).verdict.max(plug_flow_check(bed_length.si() / d).verdict);
         // The verdict along the row: every pressure-drop correlation and the lifting margin rise
         // with the flow, so it only worsens as the flow rises and is found at the ends and
         // wherever it changes (bisection); the hover values need Ergun alone at every cell.

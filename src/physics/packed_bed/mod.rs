@@ -303,6 +303,9 @@ pub struct PackedBedInput {
     pub tube_diameter: Length,
     /// Bed length L.
     pub bed_length: Length,
+    /// Whether the bed length comes from the mass packed (it then changes with the voidage:
+    /// [`PackedBedInput::bed_length_with`]).
+    pub bed_length_from_mass: bool,
     /// Volume-equivalent particle diameter d_v used in every correlation (d10 of a distribution).
     pub particle_diameter: Length,
     /// d10, d50, d90 when a distribution was entered.
@@ -349,6 +352,17 @@ impl PackedBedInput {
     /// The particles as entered.
     pub fn particles(&self) -> Particles {
         Particles { particle_diameter: self.particle_diameter, distribution: self.distribution, shape: self.shape, voidage: self.voidage, solid: self.solid }
+    }
+
+    /// The bed length with voidage `eps`: the entered one, or from the mass packed when it is
+    /// given that way (L = m / (ρ_p (1 − ε) π D_t²/4)).
+    pub fn bed_length_with(&self, eps: f64) -> Length {
+        if self.bed_length_from_mass {
+            let area = crate::physics::pipe_flow::bore_area(self.tube_diameter);
+            Length::from_si(self.solid_mass.si() / (self.particle_density.si() * (1.0 - eps) * area))
+        } else {
+            self.bed_length
+        }
     }
 
     /// Builds validated inputs from a source, reporting every bad field at once. Fields that the
@@ -431,6 +445,7 @@ impl PackedBedInput {
         let input = Self {
             tube_diameter: Length::from_si(dt),
             bed_length: Length::from_si(l),
+            bed_length_from_mass: length_from_mass,
             particle_diameter,
             distribution,
             shape,
@@ -458,8 +473,7 @@ impl PackedBedInput {
                 VoidageSource::Entered(f) => f.si(),
                 VoidageSource::Estimated => packing::estimated_voidage(input.shape, input.particle_diameter, input.tube_diameter).0.si(),
             };
-            let area = crate::physics::pipe_flow::bore_area(input.tube_diameter);
-            input.bed_length = Length::from_si(input.solid_mass.si() / (input.particle_density.si() * (1.0 - eps) * area));
+            input.bed_length = input.bed_length_with(eps);
         }
         particles.check_estimated_voidage(input.tube_diameter).map_err(|e| vec![e])?;
         Ok(input)
