@@ -663,7 +663,7 @@ async fn the_cartridge_map_renders_reads_out_a_cell_moves_the_case_and_follows_t
     assert_eq!(red, json!([0xec, 0xa5, 0x9f, 255]), "bottom right: the pump's largest flow, the finest particles");
     // The read-out names this case until the pointer is on the map, then the cell under it.
     let own = b.text("[data-testid=map-readout-cartridge_map]").await;
-    assert!(own.starts_with("This case: Flow 1"), "{own}");
+    assert!(own.starts_with("Cell nearest this case: Flow 1"), "{own}");
     map_event(&b, "cartridge_map", "mousemove", 0.99, 0.99).await;
     let cell = b.text_when("[data-testid=map-readout-cartridge_map]", |t| t.starts_with("Flow")).await;
     assert!(cell.contains("problem") && cell.contains("Bed pressure drop (Ergun)"), "{cell}");
@@ -712,7 +712,7 @@ async fn the_slurry_map_renders_reads_out_a_cell_and_a_click_sets_the_flow_and_t
     // The read-out names this case, then the cell under the pointer with the check that limits it.
     let own = b.text("[data-testid=map-readout-slurry_map]").await;
     // (The case's cell: its centre is within half a cell of 2 mL/min and 1.6 mm.)
-    assert!(own.starts_with("This case: Flow 1.99 mL/min, tubing bore 1.60 mm: problem (limited by Element 1: settling)"), "{own}");
+    assert!(own.starts_with("Cell nearest this case: Flow 1.99 mL/min, tubing bore 1.60 mm: problem (limited by Element 1: settling)"), "{own}");
     map_event(&b, "slurry_map", "mousemove", 0.99, 0.99).await;
     let cell = b.text_when("[data-testid=map-readout-slurry_map]", |t| t.starts_with("Flow")).await;
     assert!(cell.contains("problem (limited by Pressure budget)") && cell.contains("Inlet pressure (gauge)"), "{cell}");
@@ -772,7 +772,7 @@ async fn the_slurry_size_map_renders_reads_out_a_cell_and_a_click_sets_the_flow_
     assert!(seen.len() >= 2, "{seen:?}");
     // The read-out names this case, then the cell under the pointer.
     let own = b.text("[data-testid=map-readout-slurry_size_map]").await;
-    assert!(own.starts_with("This case: Flow 1.99 mL/min, particle size d90 "), "{own}");
+    assert!(own.starts_with("Cell nearest this case: Flow 1.99 mL/min, particle size d90 "), "{own}");
     map_event(&b, "slurry_size_map", "mousemove", 0.5, 0.5).await;
     let cell = b.text_when("[data-testid=map-readout-slurry_size_map]", |t| t.starts_with("Flow")).await;
     assert!(cell.contains("particle size d90") && cell.contains("Narrowest opening over d90"), "{cell}");
@@ -1008,7 +1008,7 @@ async fn the_gas_liquid_map_fills_in_reads_out_a_cell_and_a_click_sets_both_flow
     assert!(legend.contains("blue lines: liquid slug length") && legend.contains("purple lines: liquid residence time"), "{legend}");
     // The read-out names this case, then the cell under the pointer with its values.
     let own = b.text("[data-testid=map-readout-gas_liquid_map]").await;
-    assert!(own.starts_with("This case: Gas flow (at its reference state) 28.1 mL/min, liquid flow 1.38 mL/min"), "the nearest cell to 30 and 1.5 mL/min: {own}");
+    assert!(own.starts_with("Cell nearest this case: Gas flow (at its reference state) 28.1 mL/min, liquid flow 1.38 mL/min"), "the nearest cell to 30 and 1.5 mL/min: {own}");
     map_event(&b, "gas_liquid_map", "mousemove", 0.99, 0.01).await;
     let cell = b.text_when("[data-testid=map-readout-gas_liquid_map]", |t| t.starts_with("Gas flow")).await;
     assert!(cell.contains("problem (limited by Pressure budget)") && cell.contains("Liquid residence time"), "{cell}");

@@ -220,7 +220,7 @@ pub fn MapView(
             let m = m.as_ref()?;
             Some(match hover.get() {
                 Some((ix, iy)) => cell_words(m, ix, iy),
-                None => format!("This case: {}. Point at the map to read a cell; click to move the case there.", cell_words(m, m.x.nearest(m.current.0), m.y.nearest(m.current.1))),
+                None => format!("Cell nearest this case: {}. Point at the map to read a cell; click to move the case there.", cell_words(m, m.x.nearest(m.current.0), m.y.nearest(m.current.1))),
             })
         })
     };
