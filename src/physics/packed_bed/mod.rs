@@ -762,6 +762,21 @@ fn sizing_figures_and_check(
     let length = geometry::length_for_residence_time(target.residence_time, input.flow, input.tube_diameter, voidage);
     let sized = BedFlow { length, ..*bed };
     let dp = RECOMMENDED.pressure_drop(&sized).si();
+    if !(length.si().is_finite() && dp.is_finite()) {
+        // Found by the long run of map_cells_equal_point_evaluations_over_the_domain: a target
+        // whose bed is beyond any number (nanometre bores and particles) failed the whole report,
+        // the entered bed's own results with it. The target is said to be out of reach instead.
+        return Ok(Check {
+            key,
+            topic: "Sizing for the target residence time",
+            verdict: Verdict::Caution,
+            reason: format!(
+                "For {} s between the particles this cartridge would need a bed whose length or pressure drop is beyond any number: no bed of these particles in this cartridge meets the target. Use a wider cartridge or coarser particles, or ask for less time.",
+                format_significant(target.residence_time.si(), 3)
+            ),
+            caution: None,
+        });
+    }
     figures.push(Figure::definition("sized_bed_length", "Bed length for the target residence time", Dimension::Length, LENGTH_FOR_TIME_INFO, length.si())?);
     figures.push(Figure::single(
         "sized_bed_pressure_drop",
