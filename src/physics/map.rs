@@ -185,8 +185,7 @@ impl Map {
 /// value; otherwise the span is halved. About 2 log₂ n evaluations per change instead of one per
 /// cell, with the same values.
 pub fn fill_monotone<T: Copy + PartialEq>(out: &mut [T], lo: usize, hi: usize, at: &dyn Fn(usize) -> T) {
-    let (a, b) = (at(lo), at(hi));
-    fill_between(out, lo, a, hi, b, at);
+    fill_monotone_near(out, lo, hi, at, &[]);
 }
 
 /// As [`fill_monotone`], first evaluating at each hint `h` and `h + 1` (where a neighbouring row

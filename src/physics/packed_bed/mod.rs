@@ -739,6 +739,9 @@ pub fn plug_flow_check(ratio: f64) -> Check {
     }
 }
 
+/// Topic of the sizing check.
+const SIZING_TOPIC: &str = "Sizing for the target residence time";
+
 fn sizing_figures_and_check(
     input: &PackedBedInput,
     target: &SizingTarget,
@@ -768,7 +771,7 @@ fn sizing_figures_and_check(
         // the entered bed's own results with it. The target is said to be out of reach instead.
         return Ok(Check {
             key,
-            topic: "Sizing for the target residence time",
+            topic: SIZING_TOPIC,
             verdict: Verdict::Caution,
             reason: format!(
                 "For {} s between the particles this cartridge would need a bed whose length or pressure drop is beyond any number: no bed of these particles in this cartridge meets the target. Use a wider cartridge or coarser particles, or ask for less time.",
@@ -868,7 +871,7 @@ fn sizing_figures_and_check(
         Err(RootError::NoBracket { .. }) => text.push_str(" No particle size keeps this cartridge within the limit at this flow."),
         Err(e) => text.push_str(&format!(" The smallest particle size could not be found ({e}).")),
     }
-    Ok(Check { key, topic: "Sizing for the target residence time", verdict: if fits { Verdict::Fine } else { Verdict::Caution }, reason: text, caution: None })
+    Ok(Check { key, topic: SIZING_TOPIC, verdict: if fits { Verdict::Fine } else { Verdict::Caution }, reason: text, caution: None })
 }
 
 /// The D_t/d_p and L/d_p figures, each with the warning of its rule of thumb.

@@ -54,10 +54,20 @@ pub const INFO: ModelInfo = ModelInfo {
     ],
 };
 
+/// Numerator coefficient of the fit: δ/R = 1.34 c / (1 + 3.35 c), c = Ca_B^(2/3).
+pub const COEFFICIENT: f64 = 1.34;
+
+/// Denominator coefficient of the fit (δ/R tends to 1.34/3.35 = 0.4 at large Ca_B).
+pub const DENOMINATOR: f64 = 3.35;
+
 /// Film thickness over tube radius, δ/R, at bubble capillary number `ca`.
 pub fn relative_film_thickness(ca: f64) -> f64 {
-    let c = ca.powf(2.0 / 3.0);
-    1.34 * c / (1.0 + 3.35 * c)
+    film_of_power(ca.powf(2.0 / 3.0))
+}
+
+/// δ/R from c = Ca_B^(2/3) (for a solve that carries c instead of Ca_B).
+pub fn film_of_power(c: f64) -> f64 {
+    COEFFICIENT * c / (1.0 + DENOMINATOR * c)
 }
 
 /// Inertial threshold Ca* for liquid viscosity `mu` (Pa·s), surface tension `sigma` (N/m),

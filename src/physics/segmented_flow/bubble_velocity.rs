@@ -64,8 +64,7 @@ pub struct BubbleMotion {
 /// Solves U_B for two-phase velocity `u_tp` (m/s), liquid viscosity `mu` (Pa·s) and surface
 /// tension `sigma` (N/m).
 pub fn solve(u_tp: f64, mu: f64, sigma: f64) -> Result<BubbleMotion, SegmentedFlowError> {
-    const A: f64 = 1.34;
-    const B: f64 = 3.35;
+    use aussillous_quere::{COEFFICIENT as A, DENOMINATOR as B};
     let fail = SegmentedFlowError::NoConvergence { quantity: "bubble velocity (continuity)", iterations: MAX_ITERATIONS };
     if u_tp == 0.0 {
         return Ok(BubbleMotion { velocity: 0.0, film: 0.0, capillary: 0.0, iterations: 1 });
@@ -75,10 +74,6 @@ pub fn solve(u_tp: f64, mu: f64, sigma: f64) -> Result<BubbleMotion, SegmentedFl
         return Err(fail);
     }
     // h and U_TP (1 − h)² − u_tp as functions of x, with the latter's derivative.
-    let film = |x: f64| {
-        let c = x * x;
-        A * c / (1.0 + B * c)
-    };
     let gap = |x: f64| {
         let c = x * x;
         let q = 1.0 + B * c;
@@ -105,7 +100,7 @@ pub fn solve(u_tp: f64, mu: f64, sigma: f64) -> Result<BubbleMotion, SegmentedFl
         let next = if newton >= lo && newton <= hi { newton } else { 0.5 * (lo + hi) };
         if (next - x).abs() <= 2e-15 * next || hi - lo <= 2e-15 * hi {
             let velocity = k * next * next * next;
-            return Ok(BubbleMotion { velocity, film: film(next), capillary: mu * velocity / sigma, iterations: i });
+            return Ok(BubbleMotion { velocity, film: aussillous_quere::film_of_power(next * next), capillary: mu * velocity / sigma, iterations: i });
         }
         x = next;
     }
@@ -114,7 +109,8 @@ pub fn solve(u_tp: f64, mu: f64, sigma: f64) -> Result<BubbleMotion, SegmentedFl
 
 /// The same motion by the plain fixed point U_B ← U_TP / (1 − h(Ca_B))² from U_B = U_TP, to 10⁻¹³
 /// (the solve before Newton's; kept to test [`solve`] against).
-pub fn solve_by_fixed_point(u_tp: f64, mu: f64, sigma: f64) -> Result<BubbleMotion, SegmentedFlowError> {
+#[cfg(test)]
+fn solve_by_fixed_point(u_tp: f64, mu: f64, sigma: f64) -> Result<BubbleMotion, SegmentedFlowError> {
     let mut u = u_tp;
     for i in 1..=MAX_ITERATIONS {
         let ca = mu * u / sigma;

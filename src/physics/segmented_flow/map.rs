@@ -1,7 +1,7 @@
 //! The gas–liquid coil's operating map: gas flow × liquid flow, each cell the verdict of the whole
 //! calculator ([`super::evaluate`]) at those two flows, everything else the case's. A cell costs
 //! a full evaluation (the pressure profile integrated to its fixed point with every pressure-drop
-//! model), about half a millisecond natively, so the map is coarser than the others
+//! model), about 0.2 ms natively, so the map is coarser than the others
 //! ([`CELLS`] × [`CELLS`]) and is computed a few cells at a time ([`job`]) for the page to fill in
 //! between edits. Hover values: liquid slug length at the junction, liquid residence time, inlet
 //! pressure and gas equivalents; the first two are drawn as contour lines.
