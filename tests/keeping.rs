@@ -166,6 +166,8 @@ async fn two_cases_compare_with_the_changed_input_and_its_effect_marked() {
     b.click("[data-testid=compare-pick-0]").await;
     b.click(&format!("[data-testid=compare-pick-{}]", rows - 1)).await;
     b.click("[data-testid=compare]").await;
+    // The comparison is drawn after the click's turn of the page: wait for it, not a fixed time.
+    b.wait_for("[data-testid=compare-inputs]").await;
     let inputs = b.text("[data-testid=compare-inputs]").await;
     assert!(inputs.contains("Total flow") && inputs.contains("0.5 mL/min") && inputs.contains("1 mL/min"), "{inputs}");
     let results = b.text("[data-testid=compare-results]").await;
