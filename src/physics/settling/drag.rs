@@ -98,7 +98,8 @@ impl SettlingModel {
     /// Terminal settling speed (magnitude; see [`Particle::drift`] for the direction).
     ///
     /// Stokes and the explicit form are closed-form. For the sphere drag laws Re_t is read from
-    /// the law's Re_t(Ar) table and polished by one secant step (see [`super::table`]); otherwise,
+    /// the law's Re_t(Ar) table and polished by one Newton step (see [`super::table`]), and so is it
+    /// for Haider–Levenspiel at the particle's sphericity (a table per sphericity); otherwise,
     /// or when that does not meet its residual, the drag laws are solved for
     /// C_D(Re(v)) v² = 4 g d |ρ_p − ρ| / (3 ρ) with Brent's method on (10⁻⁹ v_S, 2 v_S] (the lower
     /// end lowered further where the root lies below it), v_S the Stokes speed: every law here has
@@ -115,7 +116,11 @@ impl SettlingModel {
             SettlingModel::HaiderLevenspielExplicit => return Ok(haider_levenspiel_explicit::terminal_velocity(p)),
             _ => {}
         }
-        if let Some(re) = super::table::reynolds(self, p.archimedes()) {
+        let tabulated = match self {
+            SettlingModel::HaiderLevenspiel => super::table::reynolds_shaped(p.sphericity, p.archimedes()),
+            _ => super::table::reynolds(self, p.archimedes()),
+        };
+        if let Some(re) = tabulated {
             return Ok(Velocity::from_si(re * p.viscosity.si() / (p.density.si() * p.diameter.si())));
         }
         let residual = |v: f64| self.force_balance_residual(p, Velocity::from_si(v)).unwrap_or(f64::NAN);

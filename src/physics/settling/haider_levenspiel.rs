@@ -55,6 +55,11 @@ pub fn coefficients(phi: f64) -> (f64, f64, f64, f64) {
 
 /// Drag coefficient of a particle of sphericity `phi`.
 pub fn drag_coefficient(re: f64, phi: f64) -> f64 {
-    let (a, b, c, d) = coefficients(phi);
+    drag_with(re, coefficients(phi))
+}
+
+/// Drag coefficient with the shape coefficients `(A, B, C, D)` of [`coefficients`] found once
+/// (for one shape at many Re).
+pub fn drag_with(re: f64, (a, b, c, d): (f64, f64, f64, f64)) -> f64 {
     24.0 / re * (1.0 + a * re.powf(b)) + c / (1.0 + d / re)
 }

@@ -7,9 +7,11 @@
 //! (`OnceLock`), with the slope d ln Re_t / d ln Ar that the force balance gives at each node;
 //! between nodes, cubic Hermite interpolation in ln Ar. Its error against the full solve stays
 //! below [`TABLE_BOUND`] (tested over the whole range, where it is also monotone). Point
-//! evaluations add one secant step on the force balance, which brings them to the precision of
+//! evaluations add one Newton step on the force balance, which brings them to the precision of
 //! the full solve; the full solve remains the fallback outside the table, for laws without one,
-//! and whenever the polished residual is not small enough.
+//! and whenever the polished residual is not small enough. Haider–Levenspiel's law with a
+//! sphericity below one is a law of Re alone for each shape: its tables are built per sphericity
+//! on first use and the last few kept ([`shaped_table`]).
 
 use std::sync::OnceLock;
 
@@ -22,10 +24,10 @@ pub const AR_MIN: f64 = 1e-12;
 pub const AR_MAX: f64 = 1e8;
 /// Table nodes per decade of Ar.
 pub const PER_DECADE: usize = 32;
-/// Bound on the interpolated Re_t's relative error (before any secant step), tested against the
+/// Bound on the interpolated Re_t's relative error (before the Newton step), tested against the
 /// full solve over the whole table (tests/settling.rs; 6.7e-10 at worst, Schiller–Naumann).
 pub const TABLE_BOUND: f64 = 1e-9;
-/// Largest relative force-balance residual accepted after the secant step; above it the full
+/// Largest relative force-balance residual accepted after the Newton step; above it the full
 /// solve runs instead.
 pub const POLISHED_RESIDUAL: f64 = 1e-11;
 
@@ -51,18 +53,24 @@ fn nodes() -> usize {
 /// Re_t for `model` at `ar` by the full solve of C_D(Re) Re² = 4 Ar / 3 (Brent between 10⁻⁹ and
 /// 2 times the Stokes value Ar/18, as the velocity solve brackets it).
 pub fn solve_reynolds(model: SettlingModel, ar: f64) -> Option<f64> {
+    solve_reynolds_with(&|re| model.drag_coefficient(re, 1.0), ar)
+}
+
+/// As [`solve_reynolds`] for the drag law `drag` (C_D against Re).
+pub fn solve_reynolds_with(drag: &dyn Fn(f64) -> Option<f64>, ar: f64) -> Option<f64> {
     let target = 4.0 * ar / 3.0;
     let re_stokes = ar / 18.0;
-    let g = |re: f64| model.drag_coefficient(re, 1.0).map_or(f64::NAN, |cd| cd * re * re / target - 1.0);
+    let g = |re: f64| drag(re).map_or(f64::NAN, |cd| cd * re * re / target - 1.0);
     brent(g, 1e-9 * re_stokes, 2.0 * re_stokes, Tolerance::TIGHT).ok()
 }
 
 impl Table {
-    fn build(model: SettlingModel) -> Option<Table> {
+    /// The table of the drag law `drag` (C_D against Re; `None` if a node could not be solved).
+    fn build(drag: &dyn Fn(f64) -> Option<f64>) -> Option<Table> {
         let n = nodes();
         let x0 = ln_ar_min();
         let h = step();
-        let ln_re = (0..n).map(|i| solve_reynolds(model, (x0 + h * i as f64).exp()).map(f64::ln)).collect::<Option<Vec<_>>>()?;
+        let ln_re = (0..n).map(|i| solve_reynolds_with(drag, (x0 + h * i as f64).exp()).map(f64::ln)).collect::<Option<Vec<_>>>()?;
         // Slopes from the force balance itself: ln(C_D Re²) = ln(4 Ar / 3) gives
         // d ln Re / d ln Ar = 1 / (2 + d ln C_D / d ln Re), the drag law's own slope taken by a
         // central difference. Every law here has C_D Re² rising with Re, so the slopes are
@@ -71,7 +79,7 @@ impl Table {
             .iter()
             .map(|&x| {
                 let dx = 1e-5;
-                let cd = |x: f64| model.drag_coefficient(x.exp(), 1.0).map(f64::ln);
+                let cd = |x: f64| drag(x.exp()).map(f64::ln);
                 Some(1.0 / (2.0 + (cd(x + dx)? - cd(x - dx)?) / (2.0 * dx)))
             })
             .collect::<Option<Vec<_>>>()?;
@@ -92,6 +100,12 @@ impl Table {
     /// Interpolated Re_t at ln Ar = `ln_ar` (for grids, where ln Ar is a sum of a row's and a
     /// column's logarithms); `None` outside the table.
     pub fn reynolds_at_ln(&self, ln_ar: f64) -> Option<f64> {
+        self.ln_reynolds_and_slope(ln_ar).map(|(y, _)| y.exp())
+    }
+
+    /// Interpolated ln Re_t at ln Ar = `ln_ar`, and the interpolant's slope d ln Re_t / d ln Ar
+    /// there; `None` outside the table.
+    fn ln_reynolds_and_slope(&self, ln_ar: f64) -> Option<(f64, f64)> {
         if !(ln_ar >= ln_ar_min() && ln_ar <= AR_MAX.ln()) {
             return None;
         }
@@ -103,7 +117,8 @@ impl Table {
         let t2 = t * t;
         let t3 = t2 * t;
         let y = (2.0 * t3 - 3.0 * t2 + 1.0) * y0 + (t3 - 2.0 * t2 + t) * d0 + (-2.0 * t3 + 3.0 * t2) * y1 + (t3 - t2) * d1;
-        Some(y.exp())
+        let dy = (6.0 * t2 - 6.0 * t) * (y0 - y1) + (3.0 * t2 - 4.0 * t + 1.0) * d0 + (3.0 * t2 - 2.0 * t) * d1;
+        Some((y, dy / h))
     }
 }
 
@@ -124,20 +139,74 @@ pub fn table(model: SettlingModel) -> Option<&'static Table> {
         | SettlingModel::HaiderLevenspiel
         | SettlingModel::HaiderLevenspielExplicit => return None,
     };
-    TABLES[slot].get_or_init(|| Table::build(model)).as_ref()
+    TABLES[slot].get_or_init(|| Table::build(&|re| model.drag_coefficient(re, 1.0))).as_ref()
 }
 
-/// Re_t at `ar` from the table plus one secant step on ln(C_D Re²) − ln(4 Ar / 3), accepted only
-/// if the relative force-balance residual is then at most [`POLISHED_RESIDUAL`]; `None` otherwise
-/// (the caller runs the full solve).
+/// Re_t at `ar` from the table plus one Newton step on g = ln(C_D Re²) − ln(4 Ar / 3) in ln Re_t
+/// (its derivative, d ln(C_D Re²) / d ln Re = d ln Ar / d ln Re_t along the solution, taken from
+/// the interpolant's slope), accepted only if the relative force-balance residual is then at most
+/// [`POLISHED_RESIDUAL`]; `None` otherwise (the caller runs the full solve).
 pub fn reynolds(model: SettlingModel, ar: f64) -> Option<f64> {
-    let re0 = table(model)?.reynolds(ar)?;
+    polished(table(model)?, &|re| model.drag_coefficient(re, 1.0), ar)
+}
+
+/// As [`reynolds`] with the table `t` of the drag law `drag`.
+fn polished(t: &Table, drag: &dyn Fn(f64) -> Option<f64>, ar: f64) -> Option<f64> {
+    if !(AR_MIN..=AR_MAX).contains(&ar) {
+        return None;
+    }
+    let (x0, slope) = t.ln_reynolds_and_slope(ar.ln())?;
+    let re0 = x0.exp();
     let target = 4.0 * ar / 3.0;
-    let g = |re: f64| model.drag_coefficient(re, 1.0).map(|cd| (cd * re * re / target).ln());
-    let x0 = re0.ln();
-    let dx = 1e-7;
-    let (g0, g1) = (g(re0)?, g((x0 + dx).exp())?);
-    let re = if g1 != g0 { (x0 - g0 * dx / (g1 - g0)).exp() } else { re0 };
-    let residual = model.drag_coefficient(re, 1.0)? * re * re / target - 1.0;
+    let g0 = (drag(re0)? * re0 * re0 / target).ln();
+    let re = (x0 - g0 * slope).exp();
+    let residual = drag(re)? * re * re / target - 1.0;
     (residual.abs() <= POLISHED_RESIDUAL).then_some(re)
+}
+
+/// Bound on a Haider–Levenspiel (sphericity) table's relative error before the Newton step, tested
+/// at sphericities 0.05–1 (tests/settling.rs; the law bends most near its lowest sphericities).
+/// The polished value meets the full solve's precision all the same.
+pub const SHAPED_TABLE_BOUND: f64 = 1e-8;
+
+/// Sphericities whose Haider–Levenspiel table each thread keeps (the most recently used).
+pub const SHAPED_TABLES_KEPT: usize = 4;
+
+thread_local! {
+    /// The Haider–Levenspiel tables by sphericity (its bits), most recently used last.
+    static SHAPED: std::cell::RefCell<Vec<(u64, std::rc::Rc<Option<Table>>)>> = const { std::cell::RefCell::new(Vec::new()) };
+}
+
+/// The Haider–Levenspiel (sphericity) law's table at sphericity `phi`: for one shape C_D depends
+/// on Re alone, so Re_t depends on Ar alone as for the sphere laws. Built on first use of that
+/// sphericity (the same nodes and solve as the sphere laws' tables, about 640 full solves) and
+/// kept for the [`SHAPED_TABLES_KEPT`] sphericities used last; a table is a function of the
+/// sphericity alone, so whether it was kept changes the time taken, never a value.
+pub fn shaped_table(phi: f64) -> std::rc::Rc<Option<Table>> {
+    let key = phi.to_bits();
+    SHAPED.with(|cell| {
+        let mut kept = cell.borrow_mut();
+        if let Some(i) = kept.iter().position(|(k, _)| *k == key) {
+            let entry = kept.remove(i);
+            let table = entry.1.clone();
+            kept.push(entry);
+            return table;
+        }
+        let coefficients = super::haider_levenspiel::coefficients(phi);
+        let table = std::rc::Rc::new(Table::build(&|re| Some(super::haider_levenspiel::drag_with(re, coefficients))));
+        if kept.len() >= SHAPED_TABLES_KEPT {
+            kept.remove(0);
+        }
+        kept.push((key, table.clone()));
+        table
+    })
+}
+
+/// Re_t of the Haider–Levenspiel (sphericity) law at sphericity `phi` and `ar`, from its table
+/// polished as [`reynolds`] does; `None` where that does not meet its residual (the caller runs
+/// the full solve).
+pub fn reynolds_shaped(phi: f64, ar: f64) -> Option<f64> {
+    let table = shaped_table(phi);
+    let coefficients = super::haider_levenspiel::coefficients(phi);
+    polished(table.as_ref().as_ref()?, &|re| Some(super::haider_levenspiel::drag_with(re, coefficients)), ar)
 }

@@ -155,7 +155,8 @@ pub(super) fn deposition(classes: &[SizeClass], speeds: &[f64], e: &LineElement)
 /// Fraction deposited over `passes` passes when each pass deposits `per_pass` of what reaches
 /// the element: 1 − (1 − η)ⁿ (the reservoir is stirred, so every pass starts uniform).
 pub fn over_passes(per_pass: f64, passes: u32) -> f64 {
-    1.0 - (1.0 - per_pass).powf(f64::from(passes))
+    // One pass is the fraction itself (no power to take, and no rounding through 1 − (1 − η)).
+    if passes == 1 { per_pass } else { 1.0 - (1.0 - per_pass).powf(f64::from(passes)) }
 }
 
 /// Settling verdict of a horizontal element from the mass fraction reaching the wall `eta` and

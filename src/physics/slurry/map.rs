@@ -149,8 +149,17 @@ fn fill_row(
             out
         })
         .collect();
+    // Every input of a cell's worst is constant between the cells where a settling row or the
+    // budget changes: the worst is found once per such stretch, not once per cell.
+    let mut cuts: Vec<usize> = settling_rows.iter().flat_map(|row| changes(row)).chain(changes(budget)).collect();
+    cuts.sort_unstable();
+    cuts.dedup();
     let mut list = vec![Verdict::Fine; 2 * passages.len() + 1];
-    for ix in 0..n {
+    let mut start = 0;
+    for end in cuts.into_iter().chain(std::iter::once(n - 1)) {
+        let ix = start;
+        let stretch = start..=end;
+        start = end + 1;
         let Some(pressure) = budget[ix] else { continue };
         for (j, p) in passages.iter().enumerate() {
             list[2 * j] = settling_rows[j][ix];
@@ -159,8 +168,8 @@ fn fill_row(
         list[2 * passages.len()] = pressure;
         // The first of the worst, in the report's order.
         let (at, worse) = list.iter().enumerate().fold((0, Verdict::Fine), |(a, w), (k, &v)| if v > w { (k, v) } else { (a, w) });
-        verdicts[ix] = Some(worse);
-        limiting[ix] = (worse != Verdict::Fine).then_some(at);
+        verdicts[stretch.clone()].fill(Some(worse));
+        limiting[stretch].fill((worse != Verdict::Fine).then_some(at));
     }
 }
 
