@@ -82,9 +82,10 @@ pub fn solve(u_tp: f64, mu: f64, sigma: f64) -> Result<BubbleMotion, SegmentedFl
         let one = 1.0 - h;
         (k * x * c * one * one - u_tp, k * (3.0 * c * one * one - 2.0 * x * c * one * dh))
     };
-    let x0 = (u_tp / k).cbrt();
-    // U_B between U_TP (no film) and U_TP / 0.36 (the film's limit 0.4 of the radius).
-    let (mut lo, mut hi) = (x0, x0 * 1.41);
+    let x0 = crate::physics::numeric::cbrt(u_tp / k);
+    // U_B between U_TP (no film) and U_TP / 0.36 (the film's limit 0.4 of the radius); x0 is the
+    // no-film root to two units in the last place, so the lower end is set 10⁻⁹ below it.
+    let (mut lo, mut hi) = (x0 * (1.0 - 1e-9), x0 * 1.41);
     // Started from the film at the no-film speed: x = x0 (1 − h)^(−2/3) ≈ x0 (1 + 2h/3), below
     // the root (h rises with x) and within O(h²) of it.
     let mut x = x0 * (1.0 + 2.0 / 3.0 * aussillous_quere::film_of_power(x0 * x0));

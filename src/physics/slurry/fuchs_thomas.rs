@@ -29,6 +29,7 @@
 //! laminar aerosol flow through inclined circular tubes, J. Aerosol Sci. 8 (1977) 289–295
 //! (citation from memory).
 
+use crate::physics::numeric::cbrt;
 use crate::physics::report::ModelInfo;
 
 /// Metadata shown with the result.
@@ -56,7 +57,7 @@ pub fn deposited_fraction(z: f64) -> f64 {
         return 1.0;
     }
     let k = 0.75 * z;
-    of_kappa(k, k.cbrt())
+    of_kappa(k, cbrt(k))
 }
 
 /// η from κ = 3Z/4 in (0, 1) and its cube root.
@@ -87,7 +88,7 @@ impl Deposition {
             .zip(speeds)
             .map(|(w, &v)| {
                 let a = 0.75 * length * v / bore;
-                (w, a, a.cbrt())
+                (w, a, cbrt(a))
             })
             .collect();
         Self { classes }
@@ -96,7 +97,7 @@ impl Deposition {
     /// Mass fraction reaching the wall at mean velocity `u` (m/s), in [0, 1].
     pub fn fraction(&self, u: f64) -> f64 {
         let inv = 1.0 / u;
-        let inv13 = inv.cbrt();
+        let inv13 = cbrt(inv);
         self.classes
             .iter()
             .map(|&(w, a, a13)| {
