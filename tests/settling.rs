@@ -506,3 +506,26 @@ fn shaped_tables_stay_within_their_bound_and_polish_to_the_full_solve_at_every_s
     }
     assert_eq!(SettlingModel::HaiderLevenspiel.terminal_velocity(&p(0.75)).unwrap().si(), first);
 }
+
+#[test]
+fn richardson_zaki_with_its_reynolds_power_taken_once_is_the_same_speed_to_the_bit() {
+    // One particle in passages of several bores (as the slurry map takes it), across every branch
+    // of the exponent (Re_t from about 10⁻² to 10³ with the particle size).
+    for d in [5e-6, 4e-5, 8e-5, 1.5e-4, 6e-4, 2e-3, 8e-3] {
+        let particle = Particle {
+            diameter: Length::from_si(d),
+            particle_density: Density::from_si(2600.0),
+            density: Density::from_si(1000.0),
+            viscosity: DynamicViscosity::from_si(1e-3),
+            sphericity: 1.0,
+        };
+        let terminal = SettlingModel::SchillerNaumann.terminal_velocity(&particle).unwrap();
+        let re = particle.reynolds(terminal);
+        let power = richardson_zaki::reynolds_power(re);
+        for bore in [2.5e-4, 5e-4, 1.6e-3, 4e-2] {
+            let s = Suspension { particle, solids_fraction: 0.12, tube_diameter: Length::from_si(bore) };
+            let full = s.hindered_on(terminal, HinderedModel::RichardsonZaki).velocity.si();
+            assert_eq!(s.richardson_zaki_on(terminal, re, power).to_bits(), full.to_bits(), "d {d}, D {bore}, Re {re}");
+        }
+    }
+}

@@ -212,6 +212,35 @@ pub fn fill_monotone_near<T: Copy + PartialEq>(out: &mut [T], lo: usize, hi: usi
     }
 }
 
+/// As [`fill_monotone_near`] for a value that only falls along the row (the first cells hold the
+/// largest) between the bounds `top` and `bottom`, such as a settling verdict along rising flow:
+/// the hints are evaluated first, and where the first of them has the value `top` every cell
+/// before it has it too (none can be larger), and where the last has `bottom` every cell after
+/// it, so those ends are not evaluated. The values are the same; only the number of evaluations
+/// differs.
+pub fn fill_falling_near<T: Copy + PartialEq>(out: &mut [T], lo: usize, hi: usize, at: &dyn Fn(usize) -> T, hints: &[usize], top: T, bottom: T) {
+    let mut known: Vec<(usize, T)> = Vec::with_capacity(2 * hints.len() + 2);
+    for &h in hints {
+        for p in [h, h + 1] {
+            if p >= lo && p <= hi && !known.iter().any(|k| k.0 == p) {
+                known.push((p, at(p)));
+            }
+        }
+    }
+    known.sort_by_key(|k| k.0);
+    match known.first().copied() {
+        Some((p, v)) if p == lo || v == top => known.insert(0, (lo, v)),
+        _ => known.insert(0, (lo, at(lo))),
+    }
+    match known.last().copied() {
+        Some((p, v)) if p == hi || v == bottom => known.push((hi, v)),
+        _ => known.push((hi, at(hi))),
+    }
+    for pair in known.windows(2) {
+        fill_between(out, pair[0].0, pair[0].1, pair[1].0, pair[1].1, at);
+    }
+}
+
 /// The positions `i` where `values[i] != values[i + 1]`: the hints for the next row of
 /// [`fill_monotone_near`].
 pub fn changes<T: PartialEq>(values: &[T]) -> Vec<usize> {

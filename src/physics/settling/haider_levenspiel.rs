@@ -63,3 +63,10 @@ pub fn drag_coefficient(re: f64, phi: f64) -> f64 {
 pub fn drag_with(re: f64, (a, b, c, d): (f64, f64, f64, f64)) -> f64 {
     24.0 / re * (1.0 + a * re.powf(b)) + c / (1.0 + d / re)
 }
+
+/// [`drag_with`] with ln Re at hand (the tabulated terminal speed's polish has it): Re^B as
+/// exp(B ln Re), which differs from the power by rounding only and costs an exponential instead
+/// of a power.
+pub fn drag_with_ln(re: f64, ln_re: f64, (a, b, c, d): (f64, f64, f64, f64)) -> f64 {
+    24.0 / re * (1.0 + a * (b * ln_re).exp()) + c / (1.0 + d / re)
+}

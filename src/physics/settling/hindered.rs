@@ -93,6 +93,14 @@ impl Suspension {
         SettlingModel::recommended(self.particle.sphericity).terminal_velocity(&self.particle).map_err(|_| SOLVE_FAILURE)
     }
 
+    /// Richardson–Zaki speed (m/s) on `terminal` for this particle's Re_t `reynolds`
+    /// ([`Particle::reynolds`] of `terminal`) and its power `power`
+    /// ([`richardson_zaki::reynolds_power`]), both found once for one particle in many passages:
+    /// the velocity of [`Suspension::hindered_on`] with Richardson–Zaki, to the bit.
+    pub fn richardson_zaki_on(&self, terminal: Velocity, reynolds: f64, power: f64) -> f64 {
+        terminal.si() * richardson_zaki::hindrance_factor(self.voidage(), richardson_zaki::exponent_with(reynolds, power, self.diameter_ratio()))
+    }
+
     /// Hindered settling speed by `model` on the given `terminal` speed of this particle (from
     /// [`Suspension::terminal`]).
     pub fn hindered_on(&self, terminal: Velocity, model: HinderedModel) -> Hindered {

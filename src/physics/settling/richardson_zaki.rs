@@ -52,14 +52,33 @@ pub const INFO: ModelInfo = ModelInfo {
 
 /// Exponent n at terminal Reynolds number `re` and particle-to-tube ratio `ratio` = d/D.
 pub fn exponent(re: f64, ratio: f64) -> f64 {
+    exponent_with(re, reynolds_power(re), ratio)
+}
+
+/// The power of Re_t in n at `re`: Re^−0.03 for 0.2 ≤ Re < 1, Re^−0.1 for 1 ≤ Re < 500, and 1
+/// where n does not depend on Re. It does not depend on the tube, so one particle in many
+/// passages takes it once.
+pub fn reynolds_power(re: f64) -> f64 {
+    if !(0.2..500.0).contains(&re) {
+        1.0
+    } else if re < 1.0 {
+        re.powf(-0.03)
+    } else {
+        re.powf(-0.1)
+    }
+}
+
+/// [`exponent`] with the power of Re_t, [`reynolds_power`]`(re)`, already taken (the same
+/// arithmetic, so the same bits).
+pub fn exponent_with(re: f64, power: f64, ratio: f64) -> f64 {
     if re < 0.2 {
         4.65 + 19.5 * ratio
     } else if re < 1.0 {
-        (4.35 + 17.5 * ratio) * re.powf(-0.03)
+        (4.35 + 17.5 * ratio) * power
     } else if re < 200.0 {
-        (4.45 + 18.0 * ratio) * re.powf(-0.1)
+        (4.45 + 18.0 * ratio) * power
     } else if re < 500.0 {
-        4.45 * re.powf(-0.1)
+        4.45 * power
     } else {
         2.39
     }

@@ -147,20 +147,22 @@ pub fn table(model: SettlingModel) -> Option<&'static Table> {
 /// the interpolant's slope), accepted only if the relative force-balance residual is then at most
 /// [`POLISHED_RESIDUAL`]; `None` otherwise (the caller runs the full solve).
 pub fn reynolds(model: SettlingModel, ar: f64) -> Option<f64> {
-    polished(table(model)?, &|re| model.drag_coefficient(re, 1.0), ar)
+    polished(table(model)?, &|re, _| model.drag_coefficient(re, 1.0), ar)
 }
 
-/// As [`reynolds`] with the table `t` of the drag law `drag`.
-fn polished(t: &Table, drag: &dyn Fn(f64) -> Option<f64>, ar: f64) -> Option<f64> {
+/// As [`reynolds`] with the table `t` of the drag law `drag` (C_D from Re and ln Re, the logarithm
+/// being at hand).
+fn polished(t: &Table, drag: &dyn Fn(f64, f64) -> Option<f64>, ar: f64) -> Option<f64> {
     if !(AR_MIN..=AR_MAX).contains(&ar) {
         return None;
     }
     let (x0, slope) = t.ln_reynolds_and_slope(ar.ln())?;
     let re0 = x0.exp();
     let target = 4.0 * ar / 3.0;
-    let g0 = (drag(re0)? * re0 * re0 / target).ln();
-    let re = (x0 - g0 * slope).exp();
-    let residual = drag(re)? * re * re / target - 1.0;
+    let g0 = (drag(re0, x0)? * re0 * re0 / target).ln();
+    let x = x0 - g0 * slope;
+    let re = x.exp();
+    let residual = drag(re, x)? * re * re / target - 1.0;
     (residual.abs() <= POLISHED_RESIDUAL).then_some(re)
 }
 
@@ -208,5 +210,5 @@ pub fn shaped_table(phi: f64) -> std::rc::Rc<Option<Table>> {
 pub fn reynolds_shaped(phi: f64, ar: f64) -> Option<f64> {
     let table = shaped_table(phi);
     let coefficients = super::haider_levenspiel::coefficients(phi);
-    polished(table.as_ref().as_ref()?, &|re| Some(super::haider_levenspiel::drag_with(re, coefficients)), ar)
+    polished(table.as_ref().as_ref()?, &|re, ln_re| Some(super::haider_levenspiel::drag_with_ln(re, ln_re, coefficients)), ar)
 }

@@ -14,11 +14,11 @@ use super::element::{
 use super::fuchs_thomas::Deposition;
 use super::size_distribution::ParticleSize;
 use super::{D90, ElementKind, LineElement, Orientation, PARTICLE_SIZE, SlurryInput, clogging, keys, shields, vertical};
-use crate::physics::map::{Map, MapAxis, MapLayer, changes, fill_monotone_near};
+use crate::physics::map::{Map, MapAxis, MapLayer, changes, fill_falling_near};
 use crate::physics::pipe_flow;
 use crate::physics::report::Verdict;
 use crate::physics::settling::Drift;
-use crate::physics::settling::hindered::HinderedModel;
+use crate::physics::settling::richardson_zaki;
 use crate::physics::units::{Dimension, Length, Velocity, VolumetricFlow, format_significant};
 
 /// Cells along each axis.
@@ -52,15 +52,30 @@ struct Passage {
     clogging: Verdict,
 }
 
-/// Terminal speeds (recommended drag law) of the size classes and of the d90 particles: they do
-/// not depend on the bore or the flow, so they are computed once per map.
+/// Terminal speeds (recommended drag law) of the size classes and of the d90 particles, with
+/// their Reynolds numbers and the power of it in the Richardson–Zaki exponent: they do not depend
+/// on the bore or the flow, so they are computed once per map (per row of the size map), not per
+/// passage.
 struct Terminal {
-    classes: Vec<Velocity>,
-    largest: Velocity,
+    classes: Vec<Settling>,
+    largest: Settling,
+}
+
+/// One particle size's terminal speed, its Re_t and [`richardson_zaki::reynolds_power`] of it.
+#[derive(Clone, Copy)]
+struct Settling {
+    speed: Velocity,
+    reynolds: f64,
+    power: f64,
 }
 
 fn terminal(line: &Line) -> Option<Terminal> {
-    let at = |d: Length| line.suspension(d, d).terminal().ok();
+    let at = |d: Length| {
+        let s = line.suspension(d, d);
+        let speed = s.terminal().ok()?;
+        let reynolds = s.particle.reynolds(speed);
+        Some(Settling { speed, reynolds, power: richardson_zaki::reynolds_power(reynolds) })
+    };
     Some(Terminal { classes: line.classes.iter().map(|c| at(c.diameter)).collect::<Option<Vec<_>>>()?, largest: at(line.largest)? })
 }
 
@@ -71,9 +86,10 @@ fn passage(line: &Line, terminal: &Terminal, element: LineElement) -> Passage {
         None
     } else {
         let bore = element.inner_diameter;
-        let hindered = |d: Length, t: Velocity| line.suspension(d, bore).hindered_on(t, HinderedModel::RichardsonZaki).velocity.si();
-        let classes = line.classes.iter().zip(&terminal.classes).map(|(c, &t)| hindered(c.diameter, t)).collect();
-        Some((classes, hindered(line.largest, terminal.largest)))
+        // The point evaluation's Richardson–Zaki speeds (`hindered_on`), to the bit.
+        let hindered = |d: Length, t: &Settling| line.suspension(d, bore).richardson_zaki_on(t.speed, t.reynolds, t.power);
+        let classes = line.classes.iter().zip(&terminal.classes).map(|(c, t)| hindered(c.diameter, t)).collect();
+        Some((classes, hindered(line.largest, &terminal.largest)))
     };
     Passage { element, speeds, clogging: clogging_verdict(ratio, line.phi) }
 }
@@ -111,8 +127,9 @@ fn limit_names(count: usize) -> Vec<String> {
 
 /// One row of a map at the flows `flows`: each element's settling verdict (by bisection along the
 /// row, or at every cell with `every_cell`), its clogging verdict and the pressure budget's
-/// (`budget[ix]`, `None` where the drop is not finite) give each cell's worst verdict and the
-/// first check, in the report's order, that has it.
+/// (`budget[ix]`, `None` where the drop is not finite; `budget_cuts` where it changes, as
+/// [`changes`] gives them) give each cell's worst verdict and the first check, in the report's
+/// order, that has it.
 /// `hints` holds, per element, where its settling verdict changed along the row before (looked
 /// at first: the next row's changes are usually at or next to them), and is updated.
 #[allow(clippy::too_many_arguments)]
@@ -121,6 +138,7 @@ fn fill_row(
     passages: &[Passage],
     flows: &[f64],
     budget: &[Option<Verdict>],
+    budget_cuts: &[usize],
     every_cell: bool,
     hints: &mut Vec<Vec<usize>>,
     verdicts: &mut [Option<Verdict>],
@@ -130,7 +148,8 @@ fn fill_row(
     hints.resize(passages.len(), Vec::new());
     // Each element's settling verdict along the row: it only improves as the flow rises, so it
     // is found at the ends and wherever it changes (bisection, starting where the row before
-    // changed), not at every cell.
+    // changed), not at every cell; an end is not evaluated where the nearest change already has
+    // the worst (left) or the best (right) verdict.
     let settling_rows: Vec<Vec<Verdict>> = passages
         .iter()
         .zip(hints.iter_mut())
@@ -143,7 +162,7 @@ fn fill_row(
             if every_cell {
                 out.iter_mut().enumerate().for_each(|(ix, v)| *v = at(ix));
             } else {
-                fill_monotone_near(&mut out, 0, n - 1, &at, hint);
+                fill_falling_near(&mut out, 0, n - 1, &at, hint, Verdict::Problem, Verdict::Fine);
             }
             *hint = changes(&out);
             out
@@ -151,7 +170,8 @@ fn fill_row(
         .collect();
     // Every input of a cell's worst is constant between the cells where a settling row or the
     // budget changes: the worst is found once per such stretch, not once per cell.
-    let mut cuts: Vec<usize> = settling_rows.iter().flat_map(|row| changes(row)).chain(changes(budget)).collect();
+    // (Each settling row's changes are its hint for the next row.)
+    let mut cuts: Vec<usize> = hints.iter().flatten().copied().chain(budget_cuts.iter().copied()).collect();
     cuts.sort_unstable();
     cuts.dedup();
     let mut list = vec![Verdict::Fine; 2 * passages.len() + 1];
@@ -237,7 +257,7 @@ fn build(input: &SlurryInput, n: usize, every_cell: bool) -> Option<Map> {
             }
         }
         let span = iy * n..(iy + 1) * n;
-        fill_row(&line, &passages, &x.values, &row_budget, every_cell, &mut hints, &mut verdicts[span.clone()], &mut limiting[span]);
+        fill_row(&line, &passages, &x.values, &row_budget, &changes(&row_budget), every_cell, &mut hints, &mut verdicts[span.clone()], &mut limiting[span]);
     }
     let kept_words = if input.elements.iter().any(|e| !swept(e.kind)) { "; fittings, mixers, valves, seats and frits keep their entered openings" } else { "" };
     let basis = format!(
@@ -321,6 +341,7 @@ fn build_size(input: &SlurryInput, n: usize, every_cell: bool) -> Option<Map> {
     // The budget per column (the same in every row).
     let columns: Vec<(f64, Option<Verdict>)> = x.values.iter().map(|&q| budget(input, elements, line.mu_s, &mu_fig, VolumetricFlow::from_si(q))).collect();
     let column_budget: Vec<Option<Verdict>> = columns.iter().map(|c| c.1).collect();
+    let budget_cuts = changes(&column_budget);
     // The distinct openings: elements of one bore share their settling speeds.
     let mut bores: Vec<Length> = Vec::new();
     for e in elements {
@@ -349,7 +370,7 @@ fn build_size(input: &SlurryInput, n: usize, every_cell: bool) -> Option<Map> {
             }
         }
         let span = iy * n..(iy + 1) * n;
-        fill_row(&row_line, &passages, &x.values, &column_budget, every_cell, &mut hints, &mut verdicts[span.clone()], &mut limiting[span]);
+        fill_row(&row_line, &passages, &x.values, &column_budget, &budget_cuts, every_cell, &mut hints, &mut verdicts[span.clone()], &mut limiting[span]);
     }
     let rows = match input.size {
         ParticleSize::Single { .. } => "Each row sets the one particle size".to_owned(),
@@ -450,6 +471,43 @@ mod tests {
             let mut out = vec![Verdict::Fine; 256];
             crate::physics::map::fill_monotone(&mut out, 0, 255, at);
             assert!((0..256).all(|i| out[i] == at(i)));
+        }
+    }
+
+    #[test]
+    fn fill_falling_near_gives_every_cell_whatever_the_hints_and_skips_the_ends_at_good_ones() {
+        use crate::physics::map::fill_falling_near;
+        use std::cell::Cell;
+        // Falling steps: problem, caution from 37, fine from 200; one with a caution plateau at
+        // the right end; one flat.
+        let steps: [&dyn Fn(usize) -> Verdict; 3] = [
+            &|i| if i < 37 { Verdict::Problem } else if i < 200 { Verdict::Caution } else { Verdict::Fine },
+            &|i| if i < 90 { Verdict::Problem } else { Verdict::Caution },
+            &|_| Verdict::Fine,
+        ];
+        for step in steps {
+            let exact: Vec<Verdict> = (0..256).map(step).collect();
+            let count = |hints: &[usize]| {
+                let calls = Cell::new(0);
+                let at = |i: usize| {
+                    calls.set(calls.get() + 1);
+                    step(i)
+                };
+                let mut out = vec![Verdict::Caution; 256];
+                fill_falling_near(&mut out, 0, 255, &at, hints, Verdict::Problem, Verdict::Fine);
+                assert_eq!(out, exact, "hints {hints:?}");
+                calls.get()
+            };
+            let right = changes(&exact);
+            for hints in [&right[..], &[35, 200], &[3, 250], &[0, 255, 254], &[], &[255]] {
+                count(hints);
+            }
+            // Right hints: both sides of each change, and an end only where its side is not
+            // already at the bound.
+            let ends = usize::from(step(0) != Verdict::Problem) + usize::from(step(255) != Verdict::Fine);
+            if !right.is_empty() {
+                assert_eq!(count(&right), 2 * right.len() + ends);
+            }
         }
     }
 
