@@ -48,7 +48,7 @@ struct Passage {
     element: LineElement,
     /// Hindered speed of each size class (Richardson–Zaki), `None` where the largest particles
     /// do not pass (sieving) or the particles follow the liquid.
-    speeds: Option<(Vec<f64>, f64)>,
+    speeds: Option<(std::rc::Rc<[f64]>, f64)>,
     clogging: Verdict,
 }
 
@@ -88,7 +88,7 @@ fn passage(line: &Line, terminal: &Terminal, element: LineElement) -> Passage {
         let bore = element.inner_diameter;
         // The point evaluation's Richardson–Zaki speeds (`hindered_on`), to the bit.
         let hindered = |d: Length, t: &Settling| line.suspension(d, bore).richardson_zaki_on(t.speed, t.reynolds, t.power);
-        let classes = line.classes.iter().zip(&terminal.classes).map(|(c, t)| hindered(c.diameter, t)).collect();
+        let classes: std::rc::Rc<[f64]> = line.classes.iter().zip(&terminal.classes).map(|(c, t)| hindered(c.diameter, t)).collect();
         Some((classes, hindered(line.largest, &terminal.largest)))
     };
     Passage { element, speeds, clogging: clogging_verdict(ratio, line.phi) }
@@ -97,13 +97,15 @@ fn passage(line: &Line, terminal: &Terminal, element: LineElement) -> Passage {
 /// The settling verdict of `p` at flow `q` (as the point evaluation decides it).
 fn settling(line: &Line, p: &Passage, prepared: Option<&Deposition>, q: VolumetricFlow) -> Verdict {
     let e = &p.element;
-    let (Some((_, v90)), Some(prepared)) = (&p.speeds, prepared) else {
+    let Some((_, v90)) = &p.speeds else {
         // Neutral particles are fine; particles that cannot pass are a problem.
         return if line.drift == Drift::Neutral { Verdict::Fine } else { Verdict::Problem };
     };
     let u = pipe_flow::mean_velocity(q, e.inner_diameter).si();
     match effective_orientation(e.orientation, line.drift) {
         Orientation::Horizontal => {
+            // Prepared for every horizontal passage with speeds ([`fill_row`]).
+            let Some(prepared) = prepared else { return Verdict::Problem };
             let eta = over_passes(prepared.fraction(u), line.input.passes);
             let theta = shields::shields_number(line.input.viscosity.si(), u, e.inner_diameter.si(), line.input.particle(line.largest).density_difference(), line.largest.si());
             horizontal_verdict(eta, theta)
@@ -156,7 +158,8 @@ fn fill_row(
         .map(|(p, hint)| {
             // The deposition sum prepared once for the row's flows (as the point evaluation
             // prepares it for its one flow).
-            let prepared = p.speeds.as_ref().map(|(speeds, _)| deposition(&line.classes, speeds, &p.element));
+            let horizontal = effective_orientation(p.element.orientation, line.drift) == Orientation::Horizontal;
+            let prepared = p.speeds.as_ref().filter(|_| horizontal).map(|(speeds, _)| deposition(&line.classes, speeds, &p.element));
             let at = |ix: usize| settling(line, p, prepared.as_ref(), VolumetricFlow::from_si(flows[ix]));
             let mut out = vec![Verdict::Fine; n];
             if every_cell {
