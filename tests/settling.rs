@@ -509,6 +509,13 @@ fn shaped_tables_stay_within_their_bound_and_polish_to_the_full_solve_at_every_s
 
 #[test]
 fn richardson_zaki_with_its_reynolds_power_taken_once_is_the_same_speed_to_the_bit() {
+    // The factor ε^n as exp(n ln ε): the power itself to rounding, and its ends.
+    for (eps, n) in [(0.3, 4.65), (0.74, 2.39), (0.9, 6.0), (0.999, 5.1)] {
+        let f: f64 = eps;
+        assert!((richardson_zaki::hindrance_factor(eps, n) / f.powf(n) - 1.0).abs() < 1e-14, "{eps} {n}");
+    }
+    assert_eq!(richardson_zaki::hindrance_factor(0.0, 4.65), 0.0);
+    assert_eq!(richardson_zaki::hindrance_factor(1.0, 4.65), 1.0);
     // One particle in passages of several bores (as the slurry map takes it), across every branch
     // of the exponent (Re_t from about 10⁻² to 10³ with the particle size).
     for d in [5e-6, 4e-5, 8e-5, 1.5e-4, 6e-4, 2e-3, 8e-3] {
@@ -525,7 +532,7 @@ fn richardson_zaki_with_its_reynolds_power_taken_once_is_the_same_speed_to_the_b
         for bore in [2.5e-4, 5e-4, 1.6e-3, 4e-2] {
             let s = Suspension { particle, solids_fraction: 0.12, tube_diameter: Length::from_si(bore) };
             let full = s.hindered_on(terminal, HinderedModel::RichardsonZaki).velocity.si();
-            assert_eq!(s.richardson_zaki_on(terminal, re, power).to_bits(), full.to_bits(), "d {d}, D {bore}, Re {re}");
+            assert_eq!(s.richardson_zaki_on(terminal, re, power, s.ln_voidage()).to_bits(), full.to_bits(), "d {d}, D {bore}, Re {re}");
         }
     }
 }

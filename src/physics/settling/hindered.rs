@@ -96,9 +96,15 @@ impl Suspension {
     /// Richardson–Zaki speed (m/s) on `terminal` for this particle's Re_t `reynolds`
     /// ([`Particle::reynolds`] of `terminal`) and its power `power`
     /// ([`richardson_zaki::reynolds_power`]), both found once for one particle in many passages:
-    /// the velocity of [`Suspension::hindered_on`] with Richardson–Zaki, to the bit.
-    pub fn richardson_zaki_on(&self, terminal: Velocity, reynolds: f64, power: f64) -> f64 {
-        terminal.si() * richardson_zaki::hindrance_factor(self.voidage(), richardson_zaki::exponent_with(reynolds, power, self.diameter_ratio()))
+    /// the velocity of [`Suspension::hindered_on`] with Richardson–Zaki, to the bit, given
+    /// `ln_voidage` = [`Suspension::ln_voidage`] (the same for every size and passage of a line).
+    pub fn richardson_zaki_on(&self, terminal: Velocity, reynolds: f64, power: f64, ln_voidage: f64) -> f64 {
+        terminal.si() * richardson_zaki::hindrance_factor_ln(ln_voidage, richardson_zaki::exponent_with(reynolds, power, self.diameter_ratio()))
+    }
+
+    /// ln ε, the logarithm of [`Suspension::voidage`].
+    pub fn ln_voidage(&self) -> f64 {
+        self.voidage().ln()
     }
 
     /// Hindered settling speed by `model` on the given `terminal` speed of this particle (from

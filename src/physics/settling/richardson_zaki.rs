@@ -84,7 +84,15 @@ pub fn exponent_with(re: f64, power: f64, ratio: f64) -> f64 {
     }
 }
 
-/// Hindrance factor v_h / v_t = ε^n at liquid volume fraction `voidage`.
+/// Hindrance factor v_h / v_t = ε^n at liquid volume fraction `voidage`, as exp(n ln ε)
+/// ([`hindrance_factor_ln`]).
 pub fn hindrance_factor(voidage: f64, n: f64) -> f64 {
-    voidage.powf(n)
+    hindrance_factor_ln(voidage.ln(), n)
+}
+
+/// ε^n from ln ε, for one suspension in many passages (the logarithm taken once): exp(n ln ε),
+/// which differs from the power by rounding only (ε = 0 gives 0 and ε = 1 gives 1, as the power
+/// does) and costs an exponential instead of a power.
+pub fn hindrance_factor_ln(ln_voidage: f64, n: f64) -> f64 {
+    (n * ln_voidage).exp()
 }

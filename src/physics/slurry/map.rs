@@ -87,7 +87,8 @@ fn passage(line: &Line, terminal: &Terminal, element: LineElement) -> Passage {
     } else {
         let bore = element.inner_diameter;
         // The point evaluation's Richardson–Zaki speeds (`hindered_on`), to the bit.
-        let hindered = |d: Length, t: &Settling| line.suspension(d, bore).richardson_zaki_on(t.speed, t.reynolds, t.power);
+        let ln_voidage = line.suspension(line.largest, bore).ln_voidage();
+        let hindered = |d: Length, t: &Settling| line.suspension(d, bore).richardson_zaki_on(t.speed, t.reynolds, t.power, ln_voidage);
         let classes: std::rc::Rc<[f64]> = line.classes.iter().zip(&terminal.classes).map(|(c, t)| hindered(c.diameter, t)).collect();
         Some((classes, hindered(line.largest, &terminal.largest)))
     };
