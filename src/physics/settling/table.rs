@@ -175,8 +175,16 @@ pub const SHAPED_TABLE_BOUND: f64 = 1e-8;
 pub const SHAPED_TABLES_KEPT: usize = 4;
 
 thread_local! {
-    /// The Haider–Levenspiel tables by sphericity (its bits), most recently used last.
-    static SHAPED: std::cell::RefCell<Vec<(u64, std::rc::Rc<Option<Table>>)>> = const { std::cell::RefCell::new(Vec::new()) };
+    /// The Haider–Levenspiel tables by sphericity (its bits), each with the shape coefficients it
+    /// was built with, most recently used last.
+    static SHAPED: std::cell::RefCell<Vec<(u64, Shaped)>> = const { std::cell::RefCell::new(Vec::new()) };
+}
+
+/// A Haider–Levenspiel table and the shape coefficients (A, B, C, D) of its sphericity.
+#[derive(Clone)]
+struct Shaped {
+    table: std::rc::Rc<Option<Table>>,
+    coefficients: (f64, f64, f64, f64),
 }
 
 /// The Haider–Levenspiel (sphericity) law's table at sphericity `phi`: for one shape C_D depends
@@ -185,30 +193,34 @@ thread_local! {
 /// kept for the [`SHAPED_TABLES_KEPT`] sphericities used last; a table is a function of the
 /// sphericity alone, so whether it was kept changes the time taken, never a value.
 pub fn shaped_table(phi: f64) -> std::rc::Rc<Option<Table>> {
+    shaped(phi).table
+}
+
+fn shaped(phi: f64) -> Shaped {
     let key = phi.to_bits();
     SHAPED.with(|cell| {
         let mut kept = cell.borrow_mut();
         if let Some(i) = kept.iter().position(|(k, _)| *k == key) {
             let entry = kept.remove(i);
-            let table = entry.1.clone();
+            let found = entry.1.clone();
             kept.push(entry);
-            return table;
+            return found;
         }
         let coefficients = super::haider_levenspiel::coefficients(phi);
         let table = std::rc::Rc::new(Table::build(&|re| Some(super::haider_levenspiel::drag_with(re, coefficients))));
         if kept.len() >= SHAPED_TABLES_KEPT {
             kept.remove(0);
         }
-        kept.push((key, table.clone()));
-        table
+        let found = Shaped { table, coefficients };
+        kept.push((key, found.clone()));
+        found
     })
 }
 
 /// Re_t of the Haider–Levenspiel (sphericity) law at sphericity `phi` and `ar`, from its table
-/// polished as [`reynolds`] does; `None` where that does not meet its residual (the caller runs
-/// the full solve).
+/// polished as [`reynolds`] does (with the coefficients the table was built with); `None` where
+/// that does not meet its residual (the caller runs the full solve).
 pub fn reynolds_shaped(phi: f64, ar: f64) -> Option<f64> {
-    let table = shaped_table(phi);
-    let coefficients = super::haider_levenspiel::coefficients(phi);
+    let Shaped { table, coefficients } = shaped(phi);
     polished(table.as_ref().as_ref()?, &|re, ln_re| Some(super::haider_levenspiel::drag_with_ln(re, ln_re, coefficients)), ar)
 }
