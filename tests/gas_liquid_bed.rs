@@ -707,3 +707,42 @@ fn chart_points_stay_within_their_stated_bound_of_the_tight_integration() {
         }
     }
 }
+
+#[test]
+fn wammes_westerterp_profile_started_from_the_last_point_equals_one_solved_afresh_at_each() {
+    // The profile starts each Wammes–Westerterp solve from the previous point's gas share. The
+    // same integration with every point solved from scratch (its own right-hand side here, the
+    // friction gradient alone) must give the same friction drop and inlet pressure to within
+    // rounding carried through the steps, over the chart's two decades of gas flow and both
+    // flow directions.
+    use clearbore::physics::ode::{OdeTolerance, dormand_prince};
+    use clearbore::physics::units::STANDARD_GRAVITY;
+    let case = CaseFile::from_json(Calculator::GasLiquidBed.demo_json()).unwrap();
+    let input = GasLiquidBedInput::from_source(&EntrySource(&case.inputs)).unwrap();
+    let a = assess(&input).unwrap();
+    for (factor, upward) in [(0.1, false), (1.0, false), (10.0, false), (1.0, true), (30.0, true)] {
+        let mut cond = a.conditions;
+        cond.gas_feed = MolarFlow::from_si(a.conditions.gas_feed.si() * factor);
+        cond.upward = upward;
+        let warm = profile::integrate(&cond, TwoPhaseModel::WammesWesterterp).unwrap();
+        let sign = if upward { 1.0 } else { -1.0 };
+        let rho_l = cond.liquid_density.si();
+        let cold = dormand_prince(
+            |_: f64, y: &[f64; 2]| {
+                let bed = cond.at(Pressure::from_si(y[0]));
+                let local = TwoPhaseModel::WammesWesterterp.local(&bed).ok()?;
+                let r = local.saturation.clamp(0.0, 1.0);
+                let rho_m = r * rho_l + (1.0 - r) * bed.gas_density.si();
+                Some([local.gradient + sign * rho_m * STANDARD_GRAVITY, local.gradient])
+            },
+            0.0,
+            cond.length.si(),
+            [cond.outlet_pressure.si(), 0.0],
+            OdeTolerance::TIGHT,
+        )
+        .unwrap();
+        let last = cold.last().copied().unwrap();
+        assert!(rel(warm.friction_drop, last[1]) < 1e-10, "{factor}× the gas, upward {upward}: {} vs {}", warm.friction_drop, last[1]);
+        assert!(rel(warm.inlet_pressure.si(), last[0]) < 1e-12, "{factor}× the gas, upward {upward}");
+    }
+}

@@ -73,6 +73,13 @@ impl TwoPhaseModel {
 
     /// Friction gradient and saturation at one point.
     pub fn local(self, bed: &TwoPhaseBed) -> Result<Local, RootError> {
+        self.local_near(bed, &std::cell::Cell::new(None))
+    }
+
+    /// [`Self::local`] at a point next to the last one of a profile: `last` holds the gas share
+    /// Wammes–Westerterp solved there (its start here, [`wammes_westerterp::solve_near`]) and
+    /// takes this point's. Same answer to rounding, in fewer steps.
+    pub fn local_near(self, bed: &TwoPhaseBed, last: &std::cell::Cell<Option<f64>>) -> Result<Local, RootError> {
         match self {
             TwoPhaseModel::LarkinsWhiteJeffrey => {
                 let chi = bed.chi();
@@ -83,7 +90,8 @@ impl TwoPhaseModel {
                 })
             }
             TwoPhaseModel::WammesWesterterp => {
-                let s = wammes_westerterp::solve(bed)?;
+                let s = wammes_westerterp::solve_near(bed, last.get())?;
+                last.set(Some(1.0 - s.total));
                 Ok(Local { gradient: s.gradient, saturation: s.total, other_saturation: s.total })
             }
         }

@@ -154,13 +154,15 @@ fn integrate_with(cond: &BedConditions, model: TwoPhaseModel, tol: OdeTolerance)
     let q_l = cond.liquid_flow.si();
     let rho_l = cond.liquid_density.si();
     let sign = if cond.upward { 1.0 } else { -1.0 };
+    // The last local solution, where the model solves for it: the next one starts there.
+    let last = std::cell::Cell::new(None);
     let rhs = |_: f64, y: &[f64; 5]| -> Option<[f64; 5]> {
         let p = Pressure::from_si(y[0]);
         if p.si().is_nan() || p.si() <= 0.0 {
             return None;
         }
         let bed = cond.at(p);
-        let local = model.local(&bed).ok()?;
+        let local = model.local_near(&bed, &last).ok()?;
         let r = local.saturation.clamp(0.0, 1.0);
         let rho_m = r * rho_l + (1.0 - r) * bed.gas_density.si();
         let q_g = cond.gas_flow(p).si();
