@@ -128,13 +128,37 @@ fn limit_names(count: usize) -> Vec<String> {
     names
 }
 
+/// Where one element's settling verdict changed along the last two rows of a map.
+#[derive(Debug, Clone, Default)]
+struct RowHint {
+    changes: Vec<usize>,
+    before: Vec<usize>,
+}
+
+impl RowHint {
+    /// Where the next row's changes are looked for first: each change moved on by as much as it
+    /// moved between the last two rows (when both had as many changes), within the row of `n`.
+    fn predicted(&self, n: usize) -> Vec<usize> {
+        if self.before.len() != self.changes.len() {
+            return self.changes.clone();
+        }
+        self.changes.iter().zip(&self.before).map(|(&c, &b)| (2 * c).saturating_sub(b).min(n.saturating_sub(2))).collect()
+    }
+
+    /// Takes the changes of the row just filled.
+    fn update(&mut self, changes: Vec<usize>) {
+        self.before = std::mem::replace(&mut self.changes, changes);
+    }
+}
+
 /// One row of a map at the flows `flows`: each element's settling verdict (by bisection along the
 /// row, or at every cell with `every_cell`), its clogging verdict and the pressure budget's
 /// (`budget[ix]`, `None` where the drop is not finite; `budget_cuts` where it changes, as
 /// [`changes`] gives them) give each cell's worst verdict and the first check, in the report's
 /// order, that has it.
-/// `hints` holds, per element, where its settling verdict changed along the row before (looked
-/// at first: the next row's changes are usually at or next to them), and is updated.
+/// `hints` holds, per element, where its settling verdict changed along the rows before (looked
+/// at first, moved on by as much as they moved the row before: the changes drift steadily from
+/// row to row), and is updated.
 #[allow(clippy::too_many_arguments)]
 fn fill_row(
     line: &Line,
@@ -143,12 +167,12 @@ fn fill_row(
     budget: &[Option<Verdict>],
     budget_cuts: &[usize],
     every_cell: bool,
-    hints: &mut Vec<Vec<usize>>,
+    hints: &mut Vec<RowHint>,
     verdicts: &mut [Option<Verdict>],
     limiting: &mut [Option<usize>],
 ) {
     let n = flows.len();
-    hints.resize(passages.len(), Vec::new());
+    hints.resize(passages.len(), RowHint::default());
     // Each element's settling verdict along the row: it only improves as the flow rises, so it
     // is found at the ends and wherever it changes (bisection, starting where the row before
     // changed), not at every cell; an end is not evaluated where the nearest change already has
@@ -166,16 +190,16 @@ fn fill_row(
             if every_cell {
                 out.iter_mut().enumerate().for_each(|(ix, v)| *v = at(ix));
             } else {
-                fill_falling_near(&mut out, 0, n - 1, &at, hint, Verdict::Problem, Verdict::Fine);
+                fill_falling_near(&mut out, 0, n - 1, &at, &hint.predicted(n), Verdict::Problem, Verdict::Fine);
             }
-            *hint = changes(&out);
+            hint.update(changes(&out));
             out
         })
         .collect();
     // Every input of a cell's worst is constant between the cells where a settling row or the
     // budget changes: the worst is found once per such stretch, not once per cell.
     // (Each settling row's changes are its hint for the next row.)
-    let mut cuts: Vec<usize> = hints.iter().flatten().copied().chain(budget_cuts.iter().copied()).collect();
+    let mut cuts: Vec<usize> = hints.iter().flat_map(|h| h.changes.iter()).copied().chain(budget_cuts.iter().copied()).collect();
     cuts.sort_unstable();
     cuts.dedup();
     let mut list = vec![Verdict::Fine; 2 * passages.len() + 1];
@@ -427,6 +451,23 @@ mod tests {
         let sources: Vec<EntrySource<'_>> = c.elements.iter().map(EntrySource).collect();
         let refs: Vec<&dyn FieldSource> = sources.iter().map(|s| s as _).collect();
         SlurryInput::from_source(&EntrySource(&c.inputs), &refs).unwrap()
+    }
+
+    #[test]
+    fn row_hints_move_on_by_the_last_shift_within_the_row() {
+        let mut h = RowHint::default();
+        assert!(h.predicted(256).is_empty());
+        h.update(vec![40, 200]);
+        // One row seen: its changes as they are.
+        assert_eq!(h.predicted(256), vec![40, 200]);
+        h.update(vec![42, 199]);
+        assert_eq!(h.predicted(256), vec![44, 198]);
+        // Never past the last pair of cells, nor before the first.
+        h.update(vec![1, 254]);
+        assert_eq!(h.predicted(256), vec![0, 254]);
+        // A change that appeared or vanished: no shift to carry.
+        h.update(vec![5]);
+        assert_eq!(h.predicted(256), vec![5]);
     }
 
     #[test]
