@@ -407,6 +407,26 @@ proptest! {
 
 proptest! {
     #![proptest_config(cases(24))]
+    /// The slurry line's two maps, 24 × 24 cells, anywhere in the domain: each element's settling
+    /// verdict found by bisection along the rows (looked for first where the rows before changed,
+    /// carried on by their last shift) gives every cell's verdict and limiting check as evaluating
+    /// every cell does.
+    #[test]
+    fn slurry_maps_by_bisection_equal_every_cell_over_the_domain(case in case_of(Calculator::SlurryLine)) {
+        use clearbore::case::EntrySource;
+        use clearbore::physics::form::FieldSource;
+        use clearbore::physics::slurry::{SlurryInput, map};
+        let sources: Vec<EntrySource<'_>> = case.elements.iter().map(EntrySource).collect();
+        let refs: Vec<&dyn FieldSource> = sources.iter().map(|s| s as &dyn FieldSource).collect();
+        let Ok(input) = SlurryInput::from_source(&EntrySource(&case.inputs), &refs) else { return Ok(()) };
+        let cells = |m: Option<clearbore::physics::map::Map>| m.map(|m| (m.verdicts, m.limiting));
+        prop_assert_eq!(cells(map::line_map(&input, 24)), cells(map::line_map_every_cell(&input, 24)), "flow × bore");
+        prop_assert_eq!(cells(map::size_map(&input, 24)), cells(map::size_map_every_cell(&input, 24)), "flow × size");
+    }
+}
+
+proptest! {
+    #![proptest_config(cases(24))]
     #[test]
     fn segmented_flow_over_its_domain(case in case_of(Calculator::SegmentedFlow), picks in picks()) {
         // Evaluated once with its profile, as `Calculator::evaluate` does without it.

@@ -231,6 +231,19 @@ fn budget(input: &SlurryInput, elements: &[LineElement], mu_s: f64, mu_fig: &cra
     (total, verdict)
 }
 
+/// [`line_map`] with each element's settling verdict evaluated at every cell rather than by
+/// bisection along the rows: the same map, many times slower; for the tests that say so.
+#[doc(hidden)]
+pub fn line_map_every_cell(input: &SlurryInput, n: usize) -> Option<Map> {
+    build(input, n, true)
+}
+
+/// [`size_map`] evaluated at every cell, as [`line_map_every_cell`].
+#[doc(hidden)]
+pub fn size_map_every_cell(input: &SlurryInput, n: usize) -> Option<Map> {
+    build_size(input, n, true)
+}
+
 /// The map of `input` with `n` × `n` cells, or `None` when the line has no tubing or coil (the
 /// bore axis would change nothing) or its settling speeds cannot be computed.
 pub fn line_map(input: &SlurryInput, n: usize) -> Option<Map> {
